@@ -1,0 +1,88 @@
+using BinEnergy.Cli.Commands;
+using BinEnergy.Core.Errors;
+using BinEnergy.Core.Psychrometrics;
+using Spectre.Console;
+using Spectre.Console.Cli;
+
+namespace BinEnergy.Cli;
+
+/// <summary>
+/// The <c>binenergy</c> command line: registers the commands and maps failures to exit
+/// codes (0 ok, 2 usage, 3 bad input data, 1 unexpected). Data goes to standard output,
+/// diagnostics to standard error.
+/// </summary>
+public static class CliApp
+{
+    /// <summary>Runs the command line with the given writers (tests pass their own).</summary>
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
+    {
+        var console = AnsiConsole.Create(new AnsiConsoleSettings
+        {
+            Out = new AnsiConsoleOutput(stdout),
+            Ansi = stdout == Console.Out && !Console.IsOutputRedirected ? AnsiSupport.Detect : AnsiSupport.No,
+            ColorSystem = stdout == Console.Out && !Console.IsOutputRedirected ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
+        });
+        if (stdout != Console.Out || Console.IsOutputRedirected)
+        {
+            console.Profile.Width = 160;
+        }
+
+        var app = new CommandApp();
+        app.Configure(config =>
+        {
+            config.SetApplicationName("binenergy");
+            config.ConfigureConsole(console);
+            config.PropagateExceptions();
+            config.Settings.StrictParsing = true;
+            CommandRegistry.Register(config, new CommandOutput(console, stdout, stderr));
+        });
+
+        try
+        {
+            return app.Run(args);
+        }
+        catch (CommandParseException e)
+        {
+            stderr.WriteLine($"binenergy: {Explain(e.Message)}");
+            return ExitCodes.Usage;
+        }
+        catch (CommandRuntimeException e)
+        {
+            stderr.WriteLine($"binenergy: {Explain(e.Message)}");
+            return ExitCodes.Usage;
+        }
+        catch (UsageException e)
+        {
+            stderr.WriteLine($"binenergy: {e.Message}");
+            return ExitCodes.Usage;
+        }
+        catch (PsychrometricException e)
+        {
+            stderr.WriteLine($"binenergy: {e.Reason}");
+            return ExitCodes.Usage;
+        }
+        catch (InputDataException e)
+        {
+            stderr.WriteLine($"binenergy: {e.Message}");
+            return ExitCodes.BadInput;
+        }
+        catch (Exception e)
+        {
+            stderr.WriteLine($"binenergy: unexpected failure ({e.GetType().Name}): {e.Message}");
+            stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
+            return ExitCodes.Unexpected;
+        }
+    }
+
+    /// <summary>Rewords the parser's type-conversion message into plain language.</summary>
+    private static string Explain(string message)
+    {
+        var m = System.Text.RegularExpressions.Regex.Match(message, "^Failed to convert '(.*)' to (.*)\\.$");
+        if (!m.Success)
+        {
+            return message + " (see binenergy --help)";
+        }
+
+        return $"'{m.Groups[1].Value}' is not a valid value for that option: a number is expected, with a dot as the decimal separator (see --help)";
+    }
+}

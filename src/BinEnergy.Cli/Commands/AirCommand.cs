@@ -1,0 +1,159 @@
+using System.ComponentModel;
+using System.Globalization;
+using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Core.Units;
+using Spectre.Console;
+using Spectre.Console.Cli;
+
+namespace BinEnergy.Cli.Commands;
+
+/// <summary><c>binenergy air</c>: one moist-air state, all its properties and the airflow factors at it.</summary>
+public sealed class AirCommand : Command<AirCommand.Settings>
+{
+    public sealed class Settings : CommonSettings
+    {
+        [CommandOption("--drybulb <T>")]
+        [Description("Dry-bulb temperature (F in ip, C in si). Required.")]
+        public double? DryBulb { get; init; }
+
+        [CommandOption("--wetbulb <T>")]
+        [Description("Thermodynamic wet-bulb (F or C).")]
+        public double? WetBulb { get; init; }
+
+        [CommandOption("--dewpoint <T>")]
+        [Description("Dew point (F or C).")]
+        public double? DewPoint { get; init; }
+
+        [CommandOption("--rh <PCT>")]
+        [Description("Relative humidity, percent (0 to 100).")]
+        public double? RelativeHumidity { get; init; }
+
+        [CommandOption("--humidity-ratio <W>")]
+        [Description("Humidity ratio, lb/lb or kg/kg (the same number).")]
+        public double? HumidityRatio { get; init; }
+
+        [CommandOption("--elevation <Z>")]
+        [Description("Site elevation (ft in ip, m in si); sets the standard-atmosphere pressure. Default sea level.")]
+        public double? Elevation { get; init; }
+
+        [CommandOption("--pressure <P>")]
+        [Description("Total (station) pressure (psia in ip, kPa in si), instead of --elevation.")]
+        public double? Pressure { get; init; }
+    }
+
+    /// <summary>Lowest elevation the command accepts, ft.</summary>
+    public const double MinElevationFt = -1_000;
+
+    /// <summary>Highest elevation the command accepts, ft (the standard atmosphere's troposphere ends near 36,089 ft).</summary>
+    public const double MaxElevationFt = 36_000;
+
+    public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
+    {
+        var output = (CommandOutput)context.Data!;
+        var units = settings.UnitSystem;
+        var state = BuildState(settings, units, out string pressureSource);
+        var result = AirReport.From(state, units, pressureSource);
+        if (settings.Json)
+        {
+            output.WriteJson(result.ToJson());
+        }
+        else
+        {
+            result.Render(output.Console);
+        }
+
+        return ExitCodes.Ok;
+    }
+
+    /// <summary>Turns the options into a state, or throws a <see cref="UsageException"/> naming the problem.</summary>
+    internal static AirState BuildState(Settings s, UnitSystem units, out string pressureSource)
+    {
+        if (s.DryBulb is not double db)
+        {
+            throw new UsageException("--drybulb is required (F with --units ip, C with --units si)");
+        }
+
+        int measures = new[] { s.WetBulb, s.DewPoint, s.RelativeHumidity, s.HumidityRatio }.Count(v => v.HasValue);
+        if (measures != 1)
+        {
+            throw new UsageException(measures == 0
+                ? "give one humidity measure: --wetbulb, --dewpoint, --rh or --humidity-ratio"
+                : "give only one humidity measure: --wetbulb, --dewpoint, --rh or --humidity-ratio (got " + measures + ")");
+        }
+
+        if (s.Elevation.HasValue && s.Pressure.HasValue)
+        {
+            throw new UsageException("give --elevation or --pressure, not both");
+        }
+
+        Pressure pressure;
+        if (s.Pressure is double p)
+        {
+            pressure = Core.Units.Pressure.From(p, units);
+            if (!(pressure.Kilopascals >= 30 && pressure.Kilopascals <= 120))
+            {
+                throw new UsageException(units == UnitSystem.IP
+                    ? Inv($"--pressure {p} psia is outside 4.4 to 17.4 psia (30 to 120 kPa)")
+                    : Inv($"--pressure {p} kPa is outside 30 to 120 kPa"));
+            }
+
+            pressureSource = "given";
+        }
+        else
+        {
+            var elevation = Length.From(s.Elevation ?? 0.0, units);
+            if (!(elevation.Feet >= MinElevationFt - 1e-9 && elevation.Feet <= MaxElevationFt + 1e-9))
+            {
+                throw new UsageException(units == UnitSystem.IP
+                    ? Inv($"--elevation {s.Elevation} ft is outside -1,000 to 36,000 ft")
+                    : Inv($"--elevation {s.Elevation} m is outside -305 to 10,973 m (-1,000 to 36,000 ft)"));
+            }
+
+            pressure = Atmosphere.PressureAt(elevation);
+            pressureSource = s.Elevation.HasValue
+                ? Inv($"standard atmosphere at {s.Elevation:0.#} {(units == UnitSystem.IP ? "ft" : "m")}")
+                : "standard atmosphere at sea level";
+        }
+
+        var dryBulb = Temperature.From(db, units);
+        if (s.RelativeHumidity is double rh)
+        {
+            if (!(rh >= 0 && rh <= 100))
+            {
+                throw new UsageException(Inv($"--rh {rh} is outside 0 to 100 percent"));
+            }
+
+            return AirState.FromRelativeHumidity(dryBulb, rh / 100.0, pressure);
+        }
+
+        if (s.DewPoint is double dp)
+        {
+            if (dp > db)
+            {
+                throw new UsageException(Inv($"--dewpoint {dp} is above --drybulb {db}: air cannot hold more water than at saturation"));
+            }
+
+            return AirState.FromDewPoint(dryBulb, Temperature.From(dp, units), pressure);
+        }
+
+        if (s.WetBulb is double wb)
+        {
+            if (wb > db)
+            {
+                throw new UsageException(Inv($"--wetbulb {wb} is above --drybulb {db}: the wet-bulb can never exceed the dry-bulb"));
+            }
+
+            return AirState.FromWetBulb(dryBulb, Temperature.From(wb, units), pressure);
+        }
+
+        double w = s.HumidityRatio!.Value;
+        if (!(w >= 0 && w < 1))
+        {
+            throw new UsageException(Inv($"--humidity-ratio {w} must be between 0 and 1 (lb/lb or kg/kg; 0.010 is typical)"));
+        }
+
+        return AirState.FromHumidityRatio(dryBulb, Core.Units.HumidityRatio.FromKilogramsPerKilogram(w), pressure);
+    }
+
+    private static string Inv(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
+}

@@ -1,0 +1,3 @@
+using BinEnergy.Cli;
+
+return CliApp.Run(args, Console.Out, Console.Error);

@@ -1,0 +1,80 @@
+namespace BinEnergy.Core.Psychrometrics;
+
+/// <summary>
+/// Saturation vapour pressure of water, Hyland and Wexler (1983) as given in ASHRAE
+/// Handbook—Fundamentals (2017), chapter 1: over ice, eq. 5 (-100 to 0 C), over liquid
+/// water, eq. 6 (0 to 200 C). The switch is at the triple point, 0.01 C, as in the
+/// handbook's tables.
+/// </summary>
+public static class Saturation
+{
+    /// <summary>Lowest dry-bulb for which eq. 5 holds, C.</summary>
+    public const double MinTemperatureC = -100.0;
+
+    /// <summary>Highest dry-bulb for which eq. 6 holds, C.</summary>
+    public const double MaxTemperatureC = 200.0;
+
+    /// <summary>Triple point of water, C: below it the vapour is in equilibrium with ice.</summary>
+    public const double TriplePointC = 0.01;
+
+    // Handbook ch. 1, eq. 5 coefficients (over ice).
+    private const double C1 = -5.6745359e3;
+    private const double C2 = 6.3925247;
+    private const double C3 = -9.6778430e-3;
+    private const double C4 = 6.2215701e-7;
+    private const double C5 = 2.0747825e-9;
+    private const double C6 = -9.4840240e-13;
+    private const double C7 = 4.1635019;
+
+    // Handbook ch. 1, eq. 6 coefficients (over liquid water).
+    private const double C8 = -5.8002206e3;
+    private const double C9 = 1.3914993;
+    private const double C10 = -4.8640239e-2;
+    private const double C11 = 4.1764768e-5;
+    private const double C12 = -1.4452093e-8;
+    private const double C13 = 6.5459673;
+
+    /// <summary>
+    /// Saturation vapour pressure p_ws in Pa at a temperature in C: Handbook ch. 1,
+    /// eq. 5 at or below the triple point, eq. 6 above it.
+    /// </summary>
+    /// <exception cref="PsychrometricException">The temperature is outside -100..200 C.</exception>
+    public static double VapourPressurePa(double temperatureC)
+    {
+        if (!(temperatureC >= MinTemperatureC && temperatureC <= MaxTemperatureC))
+        {
+            throw new PsychrometricException(nameof(temperatureC), temperatureC,
+                FormattableString.Invariant($"temperature {temperatureC:0.##} C is outside the range of the saturation equations (-100 to 200 C)"));
+        }
+
+        return Math.Exp(LnVapourPressure(temperatureC));
+    }
+
+    /// <summary>Natural log of p_ws in Pa (Handbook ch. 1, eqs. 5 and 6), no range check.</summary>
+    internal static double LnVapourPressure(double temperatureC)
+    {
+        double t = temperatureC + 273.15;
+        if (temperatureC <= TriplePointC)
+        {
+            return C1 / t + C2 + t * (C3 + t * (C4 + t * (C5 + t * C6))) + C7 * Math.Log(t);
+        }
+
+        return C8 / t + C9 + t * (C10 + t * (C11 + t * C12)) + C13 * Math.Log(t);
+    }
+
+    /// <summary>
+    /// Saturation humidity ratio W_s in kg/kg at a temperature and total pressure:
+    /// Handbook ch. 1, eq. 23, W_s = 0.621945 p_ws / (p - p_ws).
+    /// </summary>
+    public static double HumidityRatio(double temperatureC, double pressurePa)
+    {
+        double pws = VapourPressurePa(temperatureC);
+        if (pws >= pressurePa)
+        {
+            throw new PsychrometricException(nameof(temperatureC), temperatureC,
+                FormattableString.Invariant($"water boils at {temperatureC:0.##} C under {pressurePa / 1000:0.###} kPa; no saturated moist-air state exists"));
+        }
+
+        return MoistAir.MolecularMassRatio * pws / (pressurePa - pws);
+    }
+}

@@ -1,0 +1,89 @@
+using BinEnergy.Core.Psychrometrics;
+
+namespace BinEnergy.Core.Weather;
+
+/// <summary>
+/// An hourly weather record in SI, one entry per hour, hour-beginning, local standard
+/// time, with the full moist-air state of each hour computed once on construction
+/// (ASHRAE Handbook—Fundamentals 2017, ch. 1, through <see cref="MoistAir"/>).
+/// Arrays are laid out column-wise for fast binning and integration; index i is hour i.
+/// </summary>
+public sealed class HourlyWeather
+{
+    /// <summary>
+    /// Builds a record from its primary columns; dew point, wet-bulb and enthalpy are derived.
+    /// </summary>
+    /// <param name="site">Site metadata, including the site pressure.</param>
+    /// <param name="times">Start of each hour in local standard time. For a typical-year file these carry
+    /// the calendar year chosen for weekdays (<paramref name="calendarYear"/>), not the source years.</param>
+    /// <param name="dryBulbC">Dry-bulb per hour, C.</param>
+    /// <param name="humidityRatio">Humidity ratio per hour, kg/kg.</param>
+    /// <param name="pressurePa">Station pressure per hour, Pa (the site pressure where the file has none).</param>
+    /// <param name="quality">What the reader repaired or noticed.</param>
+    /// <param name="calendarYear">The year whose weekdays the record uses, and whether the file was a typical year.</param>
+    public HourlyWeather(
+        SiteInfo site,
+        DateTime[] times,
+        double[] dryBulbC,
+        double[] humidityRatio,
+        double[] pressurePa,
+        QualityReport quality,
+        CalendarInfo calendarYear)
+    {
+        int n = times.Length;
+        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n)
+        {
+            throw new ArgumentException("all hourly columns must have the same length");
+        }
+
+        Site = site;
+        Times = times;
+        DryBulbC = dryBulbC;
+        HumidityRatio = humidityRatio;
+        PressurePa = pressurePa;
+        Quality = quality;
+        Calendar = calendarYear;
+        DewPointC = new double[n];
+        WetBulbC = new double[n];
+        EnthalpyJPerKg = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            double w = humidityRatio[i];
+            DewPointC[i] = w > 0 ? Math.Min(MoistAir.DewPoint(w, pressurePa[i]), dryBulbC[i]) : Saturation.MinTemperatureC;
+            WetBulbC[i] = MoistAir.WetBulb(dryBulbC[i], w, pressurePa[i]);
+            EnthalpyJPerKg[i] = MoistAir.Enthalpy(dryBulbC[i], w);
+        }
+    }
+
+    public SiteInfo Site { get; }
+
+    /// <summary>Number of hours in the record.</summary>
+    public int Count => Times.Length;
+
+    /// <summary>Start of each hour, local standard time (see the constructor for typical years).</summary>
+    public DateTime[] Times { get; }
+
+    /// <summary>Dry-bulb per hour, C.</summary>
+    public double[] DryBulbC { get; }
+
+    /// <summary>Humidity ratio per hour, kg/kg.</summary>
+    public double[] HumidityRatio { get; }
+
+    /// <summary>Station pressure per hour, Pa.</summary>
+    public double[] PressurePa { get; }
+
+    /// <summary>Dew point per hour, C (eqs. 5, 6 and 20 inverted).</summary>
+    public double[] DewPointC { get; }
+
+    /// <summary>Thermodynamic wet-bulb per hour, C (eqs. 33 and 35 solved).</summary>
+    public double[] WetBulbC { get; }
+
+    /// <summary>Moist-air enthalpy per hour, J/kg dry air, 0 C datum (eq. 32).</summary>
+    public double[] EnthalpyJPerKg { get; }
+
+    /// <summary>Repairs and notices from reading.</summary>
+    public QualityReport Quality { get; }
+
+    /// <summary>The calendar the hours are placed in.</summary>
+    public CalendarInfo Calendar { get; }
+}

@@ -1,0 +1,58 @@
+using System.Globalization;
+using BinEnergy.Core.Psychrometrics;
+
+namespace BinEnergy.Core.Weather;
+
+/// <summary>
+/// Writes an hourly record in the project's open CSV layout (DESIGN 5.1): <c># key: value</c>
+/// metadata lines, then <c>time,drybulb_c,dewpoint_c,rh_pct,pressure_kpa</c>, one row per
+/// hour, hour-beginning local standard time. Dew point is the humidity measure that reads
+/// back first; RH is written beside it for people and other tools.
+/// </summary>
+public static class OpenLayoutWriter
+{
+    /// <summary>The header line of the open layout as this writer emits it.</summary>
+    public const string Header = "time,drybulb_c,dewpoint_c,rh_pct,pressure_kpa";
+
+    /// <summary>Writes the record. Numbers use the invariant culture (dot decimal separator).</summary>
+    public static void Write(HourlyWeather weather, TextWriter writer, IEnumerable<string>? commentLines = null)
+    {
+        var c = CultureInfo.InvariantCulture;
+        var site = weather.Site;
+        writer.Write("# name: ");
+        writer.WriteLine(site.Name.Replace('\n', ' ').Replace('\r', ' '));
+        if (site.ElevationM is double z)
+        {
+            writer.WriteLine(string.Create(c, $"# elevation_m: {z:0.#}"));
+        }
+
+        if (site.Latitude is double lat)
+        {
+            writer.WriteLine(string.Create(c, $"# latitude: {lat:0.####}"));
+        }
+
+        if (site.Longitude is double lon)
+        {
+            writer.WriteLine(string.Create(c, $"# longitude: {lon:0.####}"));
+        }
+
+        if (site.UtcOffsetHours is double off)
+        {
+            writer.WriteLine(string.Create(c, $"# utc_offset_h: {off:0.##}"));
+        }
+
+        foreach (var line in commentLines ?? [])
+        {
+            writer.Write("# ");
+            writer.WriteLine(line.Replace('\n', ' ').Replace('\r', ' '));
+        }
+
+        writer.WriteLine(Header);
+        for (int i = 0; i < weather.Count; i++)
+        {
+            double rh = MoistAir.RelativeHumidity(weather.DryBulbC[i], weather.HumidityRatio[i], weather.PressurePa[i]) * 100.0;
+            writer.WriteLine(string.Create(c,
+                $"{weather.Times[i]:yyyy-MM-ddTHH:mm},{weather.DryBulbC[i]:0.###},{weather.DewPointC[i]:0.###},{Math.Min(rh, 100.0):0.##},{weather.PressurePa[i] / 1000.0:0.####}"));
+        }
+    }
+}

@@ -1,0 +1,12 @@
+#!/usr/bin/env bash
+# Runs every BinEnergy test on a fresh machine with the .NET SDK and Node.js:
+# installs the outside reference packages the tests compare against (npm), then
+# builds and runs the xunit tests. Extra arguments go to `dotnet test`
+# (for example: ./test.sh --filter Psychrometrics).
+set -euo pipefail
+cd "$(dirname "$0")"
+
+command -v node >/dev/null || { echo "test.sh: Node.js is required (the tests compare against the npm package psychrolib)" >&2; exit 1; }
+npm ci --prefix tests/reference --no-audit --no-fund --loglevel=error
+
+dotnet test BinEnergy.sln --nologo "$@"
