@@ -114,13 +114,13 @@ public class RealSiteLoadTests(ITestOutputHelper output)
         var site = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical(FlowBasis.Site), bins);
         var standard = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical(FlowBasis.Standard), bins);
 
-        // 1,619 m: 83.4 kPa standard atmosphere; dry air at 70 F there weighs 0.987 kg/m3 against 1.2014 (worked by hand: 0.822).
+        // 1,619 m: 83.33 kPa standard atmosphere; dry air at 70 F there weighs 0.9865 kg/m3 against 1.2014 (worked by hand: 0.821).
         double sensibleSite = site.Hourly.Heating.Joules + site.Hourly.CoolingSensible.Joules;
         double sensibleStandard = standard.Hourly.Heating.Joules + standard.Hourly.CoolingSensible.Joules;
         double less = 1 - sensibleSite / sensibleStandard;
         output.WriteLine($"Albuquerque: site basis {less * 100:0.0} % less sensible load; sensible factor {site.Assumptions.Factors.SensibleIp:0.000}");
-        Assert.Equal(0.178, less, 0.005);
-        Assert.Equal(0.888, site.Assumptions.Factors.SensibleIp, 0.005); // 1.081 x 0.822
+        Assert.Equal(0.179, less, 0.002);
+        Assert.Equal(0.888, site.Assumptions.Factors.SensibleIp, 0.005); // 1.081 x 0.821
     }
 
     [Fact]
