@@ -115,13 +115,14 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
             settings.Joint ? HumidityBinScale.Default(units) : null, DesignConditions.FromRecord(weather));
         var report = new OutdoorAirReport(weather, result, units, settings.Weather + " (" + (options.Map?.Source ?? "open layout") + ")",
             settings.Occupied is null && loadSettings.Operation == VentilationOperation.Occupied);
-        foreach (var w in result.Warnings)
-        {
-            output.Error.WriteLine("binenergy: warning: " + w);
-        }
-
         if (settings.Json)
         {
+            // The JSON holds the warnings too; standard error makes sure a person sees them.
+            foreach (var w in result.Warnings)
+            {
+                output.Error.WriteLine("binenergy: warning: " + w);
+            }
+
             output.WriteJson(report.ToJson());
         }
         else

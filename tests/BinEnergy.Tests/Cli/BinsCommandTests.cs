@@ -9,23 +9,25 @@ namespace BinEnergy.Tests.Cli;
 public class BinsCommandTests
 {
     /// <summary>An invented place (Fernhollow, 300 m) written in the open layout, with one hour at exactly 10.0 C.</summary>
-    internal static string InventedFile()
+    internal static string InventedFile() => Invented.Value;
+
+    // Written once per test run; Lazy makes the test classes that run in parallel share one file.
+    private static readonly Lazy<string> Invented = new(WriteInventedFile);
+
+    private static string WriteInventedFile()
     {
         string dir = Path.Combine(Path.GetTempPath(), "binenergy-tests", "loads-" + Environment.ProcessId);
         Directory.CreateDirectory(dir);
         string path = Path.Combine(dir, "fernhollow.csv");
-        if (!File.Exists(path))
-        {
-            var year = SyntheticWeather.Year(meanC: 11, pressurePa: 97_700, name: "Fernhollow");
-            year.DryBulbC[100] = 10.0;
-            var weather = SyntheticWeather.FromColumns(year.DryBulbC, year.HumidityRatio, 97_700, "Fernhollow");
-            var site = weather.Site with { ElevationM = 300 };
-            var withSite = new HourlyWeather(site, weather.Times, weather.DryBulbC, weather.HumidityRatio, weather.PressurePa, weather.Quality, weather.Calendar);
-            using var writer = new StreamWriter(path + ".tmp");
-            OpenLayoutWriter.Write(withSite, writer, ["invented test climate, not a real place"]);
-            writer.Close();
-            File.Move(path + ".tmp", path, overwrite: true);
-        }
+        var year = SyntheticWeather.Year(meanC: 11, pressurePa: 97_700, name: "Fernhollow");
+        year.DryBulbC[100] = 10.0;
+        var weather = SyntheticWeather.FromColumns(year.DryBulbC, year.HumidityRatio, 97_700, "Fernhollow");
+        var site = weather.Site with { ElevationM = 300 };
+        var withSite = new HourlyWeather(site, weather.Times, weather.DryBulbC, weather.HumidityRatio, weather.PressurePa, weather.Quality, weather.Calendar);
+        using var writer = new StreamWriter(path + ".tmp");
+        OpenLayoutWriter.Write(withSite, writer, ["invented test climate, not a real place"]);
+        writer.Close();
+        File.Move(path + ".tmp", path, overwrite: true);
 
         return path;
     }

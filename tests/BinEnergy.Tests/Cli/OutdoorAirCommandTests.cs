@@ -87,9 +87,16 @@ public class OutdoorAirCommandTests
         var (code, output, err) = AirCommandTests.Run("outdoor-air", BinsCommandTests.InventedFile(), "--airflow", "300", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60",
             "--people", "50", "--per-person", "5", "--area", "5000", "--per-area", "0.06");
         Assert.Equal(0, code);
-        Assert.Contains("below the people-and-area minimum", err);
-        Assert.Contains("550 cfm", err); // 50 x 5 + 5,000 x 0.06 (62.1 ventilation rate procedure arithmetic)
+        Assert.Equal("", err);
         Assert.Contains("Warning", output);
+        Assert.Contains("550 cfm", output); // 50 x 5 + 5,000 x 0.06 (62.1 ventilation rate procedure arithmetic)
+
+        var (jsonCode, json, jsonErr) = AirCommandTests.Run("outdoor-air", BinsCommandTests.InventedFile(), "--airflow", "300", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60",
+            "--people", "50", "--per-person", "5", "--area", "5000", "--per-area", "0.06", "--json");
+        Assert.Equal(0, jsonCode);
+        Assert.Contains("below the people-and-area minimum", jsonErr);
+        using var doc = JsonDocument.Parse(json);
+        Assert.Contains("licensed engineer", doc.RootElement.GetProperty("warnings")[0].GetString());
     }
 
     [Theory]
