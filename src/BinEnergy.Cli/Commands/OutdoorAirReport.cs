@@ -269,7 +269,8 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
         };
         yield return ("Airflow", F($"{A.Airflow.In(units):N0} {d.FlowUnit}"));
         yield return ("Flow basis", F($"{basis}: {Density(A.DryAirDensity):0.0000} {UnitNames["dry_air_density"]}"));
-        yield return ("Site sensible factor", F($"{A.Factors.Sensible(units):0.000} {UnitNames["sensible_factor"]} at W = 0 (1.08 at standard air: {A.Factors.SensibleIp / 1.08 * 100 - 100:+0.0;-0.0;0.0} %)"));
+        double againstStandard = (A.Factors.SensibleSi / AirflowFactors.StandardAir.SensibleSi - 1) * 100;
+        yield return ("Site sensible factor", F($"{A.Factors.Sensible(units):0.000} {UnitNames["sensible_factor"]} at W = 0, {Math.Round(againstStandard, 1) + 0.0:+0.0;-0.0;0.0} % against standard air ({AirflowFactors.StandardAir.Sensible(units):0.000}, the trade's 1.08)"));
         yield return ("Site pressure", F($"{A.SitePressure.In(units):0.000} {UnitNames["pressure"]}"));
         yield return ("Heat to / cool to", F($"{d.T(A.HeatTo):0.#} / {d.T(A.CoolTo):0.#} {d.TemperatureUnit}"));
         yield return ("Indoor humidity", F($"at most {A.MaxRelativeHumidity * 100:0.#} % RH at {d.T(A.CoolTo):0.#} {d.TemperatureUnit} (W_max {d.WReadable(A.MaxHumidityRatio):0.0} {d.HumidityReadableUnit})")
@@ -285,7 +286,7 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
         {
             string frost = r.FrostLimit is Temperature fl ? F($"; below {d.T(fl):0.#} {d.TemperatureUnit} sensible {r.FrostEffectiveness:0.##}") : "";
             yield return ("Energy recovery", F($"sensible {r.SensibleEffectiveness:0.##}, latent {r.LatentEffectiveness:0.##}{frost}; off between the setpoints"));
-            yield return ("Recovery fan", F($"{RecoveryPressure(r.PressureDropPa):0.###} {UnitNames["recovery_pressure"]} per stream, efficiency {r.FanEfficiency:0.##}: {d.P(A.FanPenalty):N1} {d.PowerUnit} {(r.BypassWhenIdle ? "in recovering hours" : "in every ventilated hour")}"));
+            yield return ("Recovery fan", F($"{RecoveryPressure(r.PressureDropPa):0.###} {UnitNames["recovery_pressure"]} per stream, efficiency {r.FanEfficiency:0.##}: {F(d.P(A.FanPenalty), d.Ip ? "N0" : "N3")} {d.PowerUnit} {(r.BypassWhenIdle ? "in recovering hours" : "in every ventilated hour")}"));
         }
 
         yield return ("Calendar", A.Calendar);
