@@ -171,7 +171,7 @@ internal static class WeatherFileParser
             FormatProvider = CultureInfo.InvariantCulture,
         };
         using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, pos, data.Length - pos), options);
-        string[] headers = reader.Headers.ToArray();
+        string[] headers = reader.Headers.Select(h => h.Trim()).ToArray();
         map ??= OpenLayoutMap(headers, file, headerLine);
         var table = new RawWeatherTable(file, map, openLayout: map.Source == "open layout");
         foreach (var (k, v) in metadata)
@@ -251,7 +251,7 @@ internal static class WeatherFileParser
             int writtenYear;
             if (iso)
             {
-                if (!IsoTime.TryParse(reader.GetSpan(timeIndex), out time, out bool was24))
+                if (!IsoTime.TryParse(reader.GetSpan(timeIndex).Trim(" \t"u8), out time, out bool was24))
                 {
                     throw BadTime(file, line, headers[timeIndex], reader.GetString(timeIndex), "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
                 }
@@ -286,7 +286,7 @@ internal static class WeatherFileParser
             table.Lines.Add(line);
             foreach (var (q, idx, f, o, list) in columns)
             {
-                var span = reader.GetSpan(idx);
+                var span = reader.GetSpan(idx).Trim(" \t"u8);
                 if (span.IsEmpty || (missingStarts.Contains(span[0]) && IsMissing(span, missing)))
                 {
                     list.Add(double.NaN);

@@ -102,6 +102,17 @@ public sealed class CalendarAndQualityTests
     }
 
     [Fact]
+    public void SpacesAroundFieldsAndNames_AreIgnored()
+    {
+        var w = Read(OpenLayoutText.File(24, (i, r) => " " + r.Replace(",", " , "), header: "time , drybulb_c , dewpoint_c , pressure_kpa"));
+        Assert.Equal(24, w.Count);
+        Assert.Equal(OpenLayoutText.DryBulb(5), w.DryBulbC[5]);
+        Assert.Equal(100_100, w.PressurePa[5], 6);
+        var blank = Read(OpenLayoutText.File(24, (i, r) => i == 3 ? r.Replace("," + OpenLayoutText.DryBulb(i) + ",", ",   ,") : r));
+        Assert.Equal(1, blank.Quality.Counts[QualityKeys.GapFilledPrefix + "drybulb"]); // a field of spaces is missing, not text
+    }
+
+    [Fact]
     public void FahrenheitColumns_AreConvertedToSi()
     {
         var w = Read(OpenLayoutText.File(24, (i, r) => r.Split(',')[0] + ",50,41", header: "time,drybulb_f,dewpoint_f"));
