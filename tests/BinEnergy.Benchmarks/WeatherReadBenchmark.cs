@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.IO.Compression;
-using System.Text;
 using BenchmarkDotNet.Attributes;
 using BinEnergy.Core.Weather;
 using CsvHelper;
@@ -22,17 +21,7 @@ public class WeatherReadBenchmark
     public void Setup()
     {
         // The Chicago TMY3 check file, converted once to the open layout (time, drybulb_c, dewpoint_c, rh_pct, pressure_kpa).
-        string root = AppContext.BaseDirectory;
-        while (!File.Exists(Path.Combine(root, "BinEnergy.sln")))
-        {
-            root = Path.GetDirectoryName(root) ?? throw new InvalidOperationException("BinEnergy.sln not found");
-        }
-
-        string source = Path.Combine(root, "tests", "data", "weather-open", "725300TYA.CSV.gz");
-        var weather = WeatherReader.Read(source, new WeatherReadOptions { Map = ColumnMap.Load("tmy3") });
-        var text = new StringWriter(CultureInfo.InvariantCulture) { NewLine = "\n" };
-        OpenLayoutWriter.Write(weather, text);
-        openLayout = Encoding.UTF8.GetBytes(text.ToString());
+        openLayout = StationYear.ChicagoOpenLayout();
     }
 
     /// <summary>Parses every number of the file with CsvHelper and sums them (so nothing is optimised away).</summary>
