@@ -13,5 +13,14 @@ internal static class CommandRegistry
             .WithDescription("Properties of one moist-air state and its airflow factors at the site.")
             .WithExample("air", "--drybulb", "95", "--wetbulb", "75", "--elevation", "5000")
             .WithExample("air", "--drybulb", "30", "--rh", "40", "--units", "si", "--json");
+
+        config.AddCommand<EconomizerCommand>("economizer")
+            .WithData(output)
+            .WithDescription("Economizer controls side by side with the baseline (no economizer): hours per mode, coil energy and savings, by bin and hourly.")
+            .WithExample("economizer", "weather.csv", "--supply-airflow", "10000", "--min-outdoor-airflow", "2000", "--supply-temp", "55",
+                "--return-temp", "75", "--return-rh", "50", "--design-load", "216000", "--design-outdoor", "95", "--balance-point", "55")
+            .WithExample("economizer", "722040TYA.CSV", "--map", "tmy3", "--units", "si", "--supply-airflow", "4700", "--supply-airflow-min", "1900",
+                "--min-outdoor-airflow", "950", "--supply-temp", "13", "--return-temp", "24", "--return-rh", "50", "--design-load", "63",
+                "--design-outdoor", "35", "--balance-point", "13", "--occupied", "Mon-Fri 07:00-19:00", "--json");
     }
 }
