@@ -16,16 +16,8 @@ namespace BinEnergy.Cli.Commands;
 /// </summary>
 public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
 {
-    public sealed class Settings : CommonSettings
+    public sealed class Settings : WeatherFileSettings
     {
-        [CommandArgument(0, "<WEATHER>")]
-        [Description("Hourly weather file: the open CSV layout, or any layout with --map.")]
-        public string Weather { get; init; } = "";
-
-        [CommandOption("--map <MAP>")]
-        [Description("Column map for other layouts: a shipped name (tmy3, pvgis) or a path to a map file.")]
-        public string? Map { get; init; }
-
         [CommandOption("--supply-airflow <N>")]
         [Description("Supply airflow (cfm in ip, L/s in si): the constant flow, or the maximum with --supply-airflow-min. Required.")]
         public double? SupplyAirflow { get; init; }
@@ -130,7 +122,7 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         var scale = settings.Width is double width ? NewScale(width, units) : DryBulbBinScale.Default(units);
         var schedule = ParseSchedule(settings.Occupied);
 
-        var weather = WeatherReader.Read(settings.Weather, new WeatherReadOptions { Map = settings.Map is null ? null : ColumnMap.Load(settings.Map) });
+        var weather = WeatherReader.Read(settings.Weather, settings.ReadOptions(units));
         var occupied = schedule.Flags(weather);
         var bins = BinTable.Build(weather, scale, occupied);
         var joint = settings.Joint ? bins.Joint(HumidityBinScale.Default(units).Width) : null;
