@@ -111,7 +111,6 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         ["design_load"] = "--design-load",
         ["design_outdoor"] = "--design-outdoor",
         ["controls"] = "--controls",
-        ["high_limit_dewpoint"] = "--high-limit-dewpoint",
     };
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)

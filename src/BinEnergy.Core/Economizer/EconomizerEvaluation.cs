@@ -295,6 +295,11 @@ public sealed class EconomizerEvaluation
                 : $"high limits set by the user: dry-bulb {T(s.Limits.DryBulb)}, enthalpy {F(s.Limits.Enthalpy.In(units), 1)} {(ip ? "Btu/lb" : "kJ/kg")}, dew point {T(s.Limits.DewPoint)}; the energy code adopted locally governs the choice of control and limit",
             "caution: the minimum outdoor airflow must meet the ventilation code adopted locally and the judgement of the responsible licensed engineer; reducing outdoor air below the required minimum harms occupants",
         };
+        if (s.MinOutdoorAirflow.CubicMetresPerSecond == 0)
+        {
+            list.Add("caution: the minimum outdoor airflow is zero, so outside economizer hours the building gets no ventilation air; occupied buildings need the minimum their ventilation code requires");
+        }
+
         return list;
     }
 

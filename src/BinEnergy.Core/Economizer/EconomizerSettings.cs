@@ -132,11 +132,6 @@ public sealed record EconomizerSettings
             }
         }
 
-        if (!(Limits.DewPoint.Celsius <= Limits.DryBulb.Celsius))
-        {
-            Add("high_limit_dewpoint", "the dew-point limit is above the dry-bulb limit, so it can never act; lower it");
-        }
-
         return problems;
     }
 

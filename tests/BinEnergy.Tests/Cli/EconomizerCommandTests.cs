@@ -147,6 +147,17 @@ public class EconomizerCommandTests
     }
 
     [Fact]
+    public void ZeroMinimumOutdoorAir_RunsButCautions()
+    {
+        var args = Args("--json").ToList();
+        args[args.IndexOf("--min-outdoor-airflow") + 1] = "0";
+        var (code, output, err) = Run([.. args]);
+        Assert.True(code == 0, err);
+        using var doc = JsonDocument.Parse(output);
+        Assert.Contains(doc.RootElement.GetProperty("assumptions").EnumerateArray(), a => a.GetString()!.Contains("minimum outdoor airflow is zero"));
+    }
+
+    [Fact]
     public void MissingWeatherFile_IsBadInput()
     {
         var (code, output, err) = Run(["economizer", "no-such-file.csv", .. System]);
