@@ -6,13 +6,20 @@ namespace BinEnergy.Core.Psychrometrics;
 /// Fast inverse solvers for reading a year of weather: dew point and thermodynamic wet-bulb
 /// by MathNet's Newton-Raphson from a close first guess, with the analytic derivative of the
 /// same handbook equations <see cref="MoistAir"/> uses (ASHRAE Handbook—Fundamentals 2017,
-/// ch. 1, eqs. 5, 6, 20, 23, 33 and 35). Two or three steps reach 1e-6 K; when Newton does not
+/// ch. 1, eqs. 5, 6, 20, 23, 33 and 35). Two or three steps reach the root; when Newton does not
 /// converge inside the bracket, the call falls back to the Brent-based <see cref="MoistAir"/>
 /// functions, so the result is the same root either way.
 /// </summary>
 internal static class HourlyStateSolver
 {
-    private const double Accuracy = 1e-6;
+    /// <summary>
+    /// Newton stops after a step smaller than this, K. The returned point is the one after that step, and with
+    /// quadratic convergence it is good to about (f''/2f') x step^2, below 1e-7 K for these functions.
+    /// </summary>
+    private const double Accuracy = 1e-3;
+
+    /// <summary>Step limit of the dew-point solve, K (ln p_ws bends more at low temperature, so a tighter stop is used).</summary>
+    private const double DewPointAccuracy = 1e-6;
 
     /// <summary>Dew point in C from vapour pressure in Pa (eqs. 5 and 6 inverted).</summary>
     public static double DewPointFromVapourPressure(double vapourPressurePa)
@@ -29,7 +36,7 @@ internal static class HourlyStateSolver
         double g = target - Math.Log(611.2);
         double guess = Math.Clamp(243.12 * g / (17.62 - g), Saturation.MinTemperatureC + 1, Saturation.MaxTemperatureC - 1);
         if (NewtonRaphson.TryFindRoot(t => Saturation.LnVapourPressure(t) - target, Saturation.LnVapourPressureDerivative,
-                guess, Saturation.MinTemperatureC, Saturation.MaxTemperatureC, Accuracy, 50, out double root))
+                guess, Saturation.MinTemperatureC, Saturation.MaxTemperatureC, DewPointAccuracy, 50, out double root))
         {
             return root;
         }
@@ -47,32 +54,66 @@ internal static class HourlyStateSolver
     /// Thermodynamic wet-bulb in C from dry-bulb, humidity ratio and pressure, given the dew point
     /// (the lower end of the bracket): eqs. 33 (t* at or above 0 C) and 35 (below) solved for t*.
     /// </summary>
-    public static double WetBulb(double dryBulbC, double humidityRatio, double pressurePa, double dewPointC)
+    public static double WetBulb(double dryBulbC, double humidityRatio, double pressurePa, double dewPointC) =>
+        new WetBulbProblem().Solve(dryBulbC, humidityRatio, pressurePa, dewPointC, 1.0 / 3.0);
+
+    /// <summary>
+    /// One wet-bulb problem at a time, reused hour after hour so that the Newton delegates are made once;
+    /// each evaluation of eqs. 33/35 is kept so the derivative at the same point costs nothing more.
+    /// </summary>
+    internal sealed class WetBulbProblem
     {
-        double low = Math.Min(dewPointC, dryBulbC);
-        if (dryBulbC - low < 1e-9)
+        private readonly Func<double, double> f;
+        private readonly Func<double, double> df;
+        private double t, p, w, lastX = double.NaN, lastF, lastDf;
+
+        public WetBulbProblem()
         {
-            return dryBulbC;
+            f = Evaluate;
+            df = Derivative;
         }
 
-        double t = dryBulbC;
-        double p = pressurePa;
-        double w = humidityRatio;
-        double f(double ts) => WFromWetBulb(t, ts, p, out _) - w;
-        double df(double ts)
+        /// <summary>
+        /// Solves one state. <paramref name="depressionRatio"/> is the first guess of (t - t*) / (t - t_dew): a third
+        /// (common practice) on its own, or the previous hour's ratio when solving a record hour by hour.
+        /// </summary>
+        public double Solve(double dryBulbC, double humidityRatio, double pressurePa, double dewPointC, double depressionRatio)
         {
-            WFromWetBulb(t, ts, p, out double d);
-            return d;
+            double low = Math.Min(dewPointC, dryBulbC);
+            if (dryBulbC - low < 1e-9)
+            {
+                return dryBulbC;
+            }
+
+            (t, p, w, lastX) = (dryBulbC, pressurePa, humidityRatio, double.NaN);
+            double guess = dryBulbC - (dryBulbC - low) * Math.Clamp(depressionRatio, 0.01, 0.99);
+            // Near 0 C eqs. 33 and 35 disagree (the wet-bulb/ice-bulb switch), so a very dry state can satisfy both, one
+            // on each side of 0 C; there the Brent solver of MoistAir decides, so both paths give the same root.
+            if (NewtonRaphson.TryFindRoot(f, df, guess, low, dryBulbC, Accuracy, 50, out double root) && root >= low && root <= dryBulbC
+                && Math.Abs(root) > 1.5)
+            {
+                return root;
+            }
+
+            return MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
         }
 
-        // First guess: the wet-bulb depression is about a third of the dew-point depression (common practice).
-        double guess = dryBulbC - (dryBulbC - low) / 3.0;
-        if (NewtonRaphson.TryFindRoot(f, df, guess, low, dryBulbC, Accuracy, 50, out double root))
+        private double Evaluate(double x)
         {
-            return root;
+            lastX = x;
+            lastF = WFromWetBulb(t, x, p, out lastDf) - w;
+            return lastF;
         }
 
-        return MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
+        private double Derivative(double x)
+        {
+            if (x != lastX)
+            {
+                Evaluate(x);
+            }
+
+            return lastDf;
+        }
     }
 
     /// <summary>Eqs. 33 and 35 with W_s* from eq. 23, and their derivative in t*.</summary>

@@ -83,12 +83,17 @@ public sealed class HourlyWeather
     /// <summary>Wet-bulb (eqs. 33 and 35 solved, from the dew point up) and enthalpy (eq. 32) of every hour.</summary>
     private void FillWetBulbAndEnthalpy()
     {
+        var problem = new HourlyStateSolver.WetBulbProblem();
+        double ratio = 1.0 / 3.0;
         for (int i = 0; i < Count; i++)
         {
             double t = DryBulbC[i];
             double w = HumidityRatio[i];
-            WetBulbC[i] = HourlyStateSolver.WetBulb(t, w, PressurePa[i], DewPointC[i]);
+            double wb = problem.Solve(t, w, PressurePa[i], DewPointC[i], ratio);
+            WetBulbC[i] = wb;
             EnthalpyJPerKg[i] = MoistAir.Enthalpy(t, w);
+            double depression = t - DewPointC[i];
+            ratio = depression > 0.05 ? (t - wb) / depression : 1.0 / 3.0;
         }
     }
 

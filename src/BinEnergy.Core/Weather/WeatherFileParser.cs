@@ -42,7 +42,10 @@ internal static class WeatherFileParser
         ["pressure_inhg"] = (WeatherQuantity.Pressure, "inhg"),
     };
 
-    private static readonly string[] OpenMissing = ["NA", "NaN", "nan", "null"];
+    private static readonly string[] OpenMissing = ["null"];
+
+    /// <summary>Codes that mean "missing" in every layout.</summary>
+    private static readonly byte[][] DefaultMissing = ["NA"u8.ToArray(), "NaN"u8.ToArray(), "nan"u8.ToArray()];
 
     /// <summary>Reads the whole file as bytes, un-gzipping when it is gzip data.</summary>
     public static byte[] LoadBytes(string path)
@@ -168,7 +171,7 @@ internal static class WeatherFileParser
             FormatProvider = CultureInfo.InvariantCulture,
         };
         using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, pos, data.Length - pos), options);
-        string[] headers = reader.Headers.ToArray();
+        string[] headers = reader.Headers.Select(h => h.Trim()).ToArray();
         map ??= OpenLayoutMap(headers, file, headerLine);
         var table = new RawWeatherTable(file, map, openLayout: map.Source == "open layout");
         foreach (var (k, v) in metadata)
@@ -206,7 +209,8 @@ internal static class WeatherFileParser
             columns.Add((q, idx, f, o, list));
         }
 
-        var missing = map.MissingCodes.Where(c => c.Length > 0).Select(c => Encoding.UTF8.GetBytes(c.Trim())).ToArray();
+        var missing = map.MissingCodes.Where(c => c.Length > 0).Select(c => Encoding.UTF8.GetBytes(c.Trim())).Concat(DefaultMissing).ToArray();
+        var missingStarts = System.Buffers.SearchValues.Create(missing.Select(c => c[0]).Distinct().ToArray());
         bool iso = map.Time.Format == "iso";
         int headerCount = headers.Length;
         int trailing = 0;
@@ -247,7 +251,7 @@ internal static class WeatherFileParser
             int writtenYear;
             if (iso)
             {
-                if (!IsoTime.TryParse(reader.GetSpan(timeIndex), out time, out bool was24))
+                if (!IsoTime.TryParse(reader.GetSpan(timeIndex).Trim(" \t"u8), out time, out bool was24))
                 {
                     throw BadTime(file, line, headers[timeIndex], reader.GetString(timeIndex), "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
                 }
@@ -282,14 +286,15 @@ internal static class WeatherFileParser
             table.Lines.Add(line);
             foreach (var (q, idx, f, o, list) in columns)
             {
-                var span = reader.GetSpan(idx);
-                if (span.IsEmpty || IsMissing(span, missing))
+                var span = reader.GetSpan(idx).Trim(" \t"u8);
+                if (span.IsEmpty || (missingStarts.Contains(span[0]) && IsMissing(span, missing)))
                 {
                     list.Add(double.NaN);
                     continue;
                 }
 
-                if (!double.TryParse(span, NumberStyles.Float, CultureInfo.InvariantCulture, out double raw) || !double.IsFinite(raw))
+                // A comma inside a (quoted) number would be read as a thousands separator: refuse it first.
+                if (span.Contains((byte)',') || !reader.TryParse<double>(idx, out double raw) || !double.IsFinite(raw))
                 {
                     string s = Encoding.UTF8.GetString(span);
                     throw new WeatherDataException(WeatherErrorKind.NotANumber, file, $"the {Describe(q)} is not a number", s.Contains(',')
@@ -494,7 +499,7 @@ internal static class WeatherFileParser
             }
         }
 
-        return span.Length is 2 or 3 && (span.SequenceEqual("NA"u8) || span.SequenceEqual("NaN"u8) || span.SequenceEqual("nan"u8));
+        return false;
     }
 
     private static WeatherDataException BadTime(string file, int line, string column, string text, string format) =>

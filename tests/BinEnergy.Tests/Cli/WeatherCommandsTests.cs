@@ -1,0 +1,121 @@
+using System.Text.Json;
+using BinEnergy.Cli;
+using BinEnergy.Tests.Weather;
+
+namespace BinEnergy.Tests.Cli;
+
+/// <summary>The inspect and convert commands, run in-process through <see cref="CliApp"/>.</summary>
+public sealed class WeatherCommandsTests
+{
+    private static (int Code, string Out, string Err) Run(params string[] args)
+    {
+        var stdout = new StringWriter();
+        var stderr = new StringWriter();
+        int code = CliApp.Run(args, stdout, stderr);
+        return (code, stdout.ToString(), stderr.ToString());
+    }
+
+    private static readonly string[] ContractFields =
+    [
+        "hours", "drybulb_min", "drybulb_mean", "drybulb_max", "heating_degree_days", "cooling_degree_days", "heating_99_6", "heating_99",
+        "cooling_0_4", "cooling_0_4_mcwb", "cooling_1", "cooling_1_mcwb", "cooling_2", "cooling_2_mcwb", "dehumidification_0_4_dewpoint",
+        "dehumidification_0_4_mcdb", "elevation", "pressure_mean", "repairs", "units",
+    ];
+
+    [Fact]
+    public void InspectJson_HasEveryContractField_InIpUnits()
+    {
+        var (code, output, _) = Run("inspect", TestData.Open("725300TYA.CSV"), "--map", "tmy3", "--json");
+        Assert.Equal(0, code);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        foreach (var field in ContractFields)
+        {
+            Assert.True(root.TryGetProperty(field, out _), "missing field " + field);
+        }
+
+        Assert.Equal(8760, root.GetProperty("hours").GetInt32());
+        Assert.Equal("F", root.GetProperty("units").GetProperty("temperature").GetString());
+        Assert.Equal(201 / 0.3048, root.GetProperty("elevation").GetDouble(), 6); // header elevation 201 m in ft
+        Assert.InRange(root.GetProperty("heating_degree_days").GetDouble(), 5_800, 7_200); // about 6,500 F-day (recalled from memory)
+        Assert.True(root.GetProperty("cooling_0_4").GetDouble() > root.GetProperty("cooling_0_4_mcwb").GetDouble());
+        Assert.Equal(JsonValueKind.Object, root.GetProperty("repairs").ValueKind);
+        Assert.Equal(41, root.GetProperty("degree_day_curve").GetArrayLength());
+    }
+
+    [Fact]
+    public void InspectJson_InSiUnits_UsesBase18Point3C()
+    {
+        var (code, output, _) = Run("inspect", TestData.Open("725945TYA.CSV"), "--map", "tmy3", "--units", "si", "--json");
+        Assert.Equal(0, code);
+        var root = JsonDocument.Parse(output).RootElement;
+        Assert.Equal(18.3, root.GetProperty("degree_day_base").GetDouble(), 9);
+        Assert.Equal(62, root.GetProperty("elevation").GetDouble(), 9); // Arcata header: 62 m
+        Assert.Equal(29, root.GetProperty("repairs").GetProperty("dewpoint_above_drybulb_clamped").GetInt32()
+            + root.GetProperty("repairs").GetProperty("dewpoint_above_drybulb_suspect").GetInt32()); // SOURCES.md: 29 hours
+    }
+
+    [Fact]
+    public void Inspect_TableOutput_ShowsDesignConditionsRepairsAndCaution()
+    {
+        var (code, output, _) = Run("inspect", TestData.Open(TestData.PvgisFile), "--map", "pvgis");
+        Assert.Equal(0, code);
+        Assert.Contains("Heating 99.6 % dry-bulb", output, StringComparison.Ordinal);
+        Assert.Contains("Hyndman and Fan", output, StringComparison.Ordinal);
+        Assert.Contains("licensed engineer", output, StringComparison.Ordinal);
+        Assert.Contains("UTC+1", output, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Inspect_BadData_ExitsThreeWithOneParagraphAndNoStackTrace()
+    {
+        string path = Path.Combine(TestData.Scratch("cli"), "backwards.csv");
+        File.WriteAllText(path, OpenLayoutText.File(48, (i, r) => i == 10 ? OpenLayoutText.Row(4) : r));
+        var (code, output, error) = Run("inspect", path);
+        Assert.Equal(3, code);
+        Assert.Equal("", output);
+        Assert.StartsWith("binenergy: " + path + ", line 17", error, StringComparison.Ordinal);
+        Assert.Single(error.TrimEnd().Split('\n'));
+        Assert.DoesNotContain("   at ", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Inspect_TmyFileWithoutMap_SuggestsTheMap()
+    {
+        var (code, _, error) = Run("inspect", TestData.Open("722040TYA.CSV"));
+        Assert.Equal(3, code);
+        Assert.Contains("--map tmy3", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void Convert_WritesTheOpenLayout_WhichReadsBackToTheSameRecord()
+    {
+        string dir = TestData.Scratch("cli-convert");
+        string output = Path.Combine(dir, "arcata.csv");
+        var (code, _, error) = Run("convert", TestData.Open("725945TYA.CSV"), "--map", "tmy3", "--out", output);
+        Assert.Equal(0, code);
+        Assert.Equal("", error);
+        var source = RealWeatherFileTests.Read("725945TYA.CSV");
+        var again = BinEnergy.Core.Weather.WeatherReader.Read(output);
+        Assert.Equal(8760, again.Count);
+        Assert.True(again.Calendar.IsTypicalYear);
+        Assert.Equal("ARCATA AIRPORT", again.Site.Name);
+        for (int i = 0; i < again.Count; i += 97)
+        {
+            Assert.Equal(source.DryBulbC[i], again.DryBulbC[i], 3);
+            Assert.Equal(source.DewPointC[i], again.DewPointC[i], 3);
+            Assert.Equal(source.PressurePa[i], again.PressurePa[i], 0);
+        }
+
+        Assert.Equal(0, again.Quality.Counts.GetValueOrDefault("dewpoint_above_drybulb_suspect")); // repaired once, at the conversion
+        Assert.Empty(Directory.GetFiles(dir, "*.tmp-*"));
+    }
+
+    [Fact]
+    public void Convert_WithoutOut_IsAUsageError()
+    {
+        var (code, _, error) = Run("convert", TestData.Open("725945TYA.CSV"), "--map", "tmy3");
+        Assert.Equal(2, code);
+        Assert.Contains("--out", error, StringComparison.Ordinal);
+    }
+}
