@@ -38,5 +38,14 @@ internal static class CommandRegistry
             .WithExample("outdoor-air", "weather.csv", "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60")
             .WithExample("outdoor-air", "723650TYA.CSV", "--map", "tmy3", "--airflow", "2000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--occupied", "Mon-Fri 07:00-19:00", "--recovery-sensible", "0.75", "--recovery-pressure", "0.8")
             .WithExample("outdoor-air", "weather.csv", "--airflow", "500", "--heat-to", "21", "--cool-to", "24", "--max-rh", "60", "--units", "si", "--json");
+
+        config.AddCommand<EconomizerCommand>("economizer")
+            .WithData(output)
+            .WithDescription("Economizer controls side by side with the baseline (no economizer): hours per mode, coil energy and savings, by bin and hourly.")
+            .WithExample("economizer", "weather.csv", "--supply-airflow", "10000", "--min-outdoor-airflow", "2000", "--supply-temp", "55",
+                "--return-temp", "75", "--return-rh", "50", "--design-load", "216000", "--design-outdoor", "95", "--balance-point", "45")
+            .WithExample("economizer", "722040TYA.CSV", "--map", "tmy3", "--units", "si", "--supply-airflow", "4700", "--supply-airflow-min", "1900",
+                "--min-outdoor-airflow", "950", "--supply-temp", "13", "--return-temp", "24", "--return-rh", "50", "--design-load", "63",
+                "--design-outdoor", "35", "--balance-point", "7", "--occupied", "Mon-Fri 07:00-19:00", "--json");
     }
 }
