@@ -13,5 +13,10 @@ internal static class CommandRegistry
             .WithDescription("Properties of one moist-air state and its airflow factors at the site.")
             .WithExample("air", "--drybulb", "95", "--wetbulb", "75", "--elevation", "5000")
             .WithExample("air", "--drybulb", "30", "--rh", "40", "--units", "si", "--json");
+
+        config.AddCommand<SynthCommand>("synth")
+            .WithData(output)
+            .WithDescription("Synthesize an hourly weather year (open layout) from monthly statistics and a seed.")
+            .WithExample("synth", "--monthly", "weather-samples/port-verrin-monthly.csv", "--seed", "1", "--out", "port-verrin.csv");
     }
 }
