@@ -14,6 +14,17 @@ internal static class CommandRegistry
             .WithExample("air", "--drybulb", "95", "--wetbulb", "75", "--elevation", "5000")
             .WithExample("air", "--drybulb", "30", "--rh", "40", "--units", "si", "--json");
 
+        config.AddCommand<InspectCommand>("inspect")
+            .WithData(output)
+            .WithDescription("Reads a weather file: hours, site, pressure, dry-bulb, degree-days, design conditions and data repairs.")
+            .WithExample("inspect", "weather.csv")
+            .WithExample("inspect", "725300TYA.CSV", "--map", "tmy3", "--units", "si", "--json");
+
+        config.AddCommand<ConvertCommand>("convert")
+            .WithData(output)
+            .WithDescription("Reads a weather file through a column map and writes it in the open CSV layout.")
+            .WithExample("convert", "725300TYA.CSV", "--map", "tmy3", "--out", "chicago.csv");
+
         config.AddCommand<SynthCommand>("synth")
             .WithData(output)
             .WithDescription("Synthesize an hourly weather year (open layout) from monthly statistics and a seed.")
