@@ -147,7 +147,7 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
         string t = u == UnitSystem.IP ? "F" : "C";
         string d = u == UnitSystem.IP ? "F" : "K";
         var table = new Table().Border(TableBorder.Rounded)
-            .Title(Markup.Escape($"{climate.Name}: asked for / made (mean daily max and min, mean dew point, day-to-day spread)"));
+            .Title(Markup.Escape($"{climate.Name}: monthly statistics asked for / made"));
         table.AddColumn("Month");
         foreach (var head in new[] { $"Max {t}", $"Min {t}", $"Range {d}", $"Dew point {t}", $"Spread {d}" })
         {

@@ -317,7 +317,9 @@ public static class WeatherSynthesizer
         var quality = new QualityReport();
         var calendar = new CalendarInfo(year, IsTypicalYear: false,
             $"synthesized year; dates and weekdays of {year}, a non-leap year");
-        return new HourlyWeather(site, times, dryBulb, w, p, quality, calendar);
+        // The dew points are known exactly here, so they are passed in rather than solved back
+        // from the humidity ratios: the written file then depends on no iterative solver.
+        return new HourlyWeather(site, times, dryBulb, w, p, dewPoint, quality, calendar);
     }
 
     private static MonthCheck[] Measure(HourlyWeather weather, IReadOnlyList<MonthStatistics> months, double[] midCourse)
