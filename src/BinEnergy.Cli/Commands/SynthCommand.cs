@@ -168,7 +168,10 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
 
         console.Write(table);
         string Inv(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
-        console.WriteLine(Inv($"Wrote {outPath}: {r.Weather.Count:N0} hours of {r.Weather.Calendar.Year}, seed {r.Seed}, station pressure {r.Weather.Site.SitePressurePa / 1000.0:0.00} kPa (standard atmosphere at {climate.ElevationM:0} m)."));
+        string pressure = u == UnitSystem.IP
+            ? Inv($"{Pressure.FromPascals(r.Weather.Site.SitePressurePa).In(u):0.000} psia (standard atmosphere at {Length.FromMetres(climate.ElevationM).Feet:0} ft)")
+            : Inv($"{r.Weather.Site.SitePressurePa / 1000.0:0.00} kPa (standard atmosphere at {climate.ElevationM:0} m)");
+        console.WriteLine(Inv($"Wrote {outPath}: {r.Weather.Count:N0} hours of {r.Weather.Calendar.Year}, seed {r.Seed}, station pressure {pressure}."));
         console.WriteLine(Inv($"The sample was corrected toward the monthly targets: {r.TemperaturePasses} passes for the daily maxima and minima, {r.DewPointPasses} for the dew points; largest monthly errors {Diff(r.WorstExtremeErrorK, u):0.000} {d} (max/min), {Diff(r.WorstRangeErrorK, u):0.000} {d} (range), {Diff(r.WorstDewPointErrorK, u):0.000} {d} (dew point). The spread is not corrected."));
         if (r.RangeFlooredDays > 0)
         {
