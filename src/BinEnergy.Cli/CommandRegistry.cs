@@ -47,5 +47,10 @@ internal static class CommandRegistry
             .WithExample("economizer", "722040TYA.CSV", "--map", "tmy3", "--units", "si", "--supply-airflow", "4700", "--supply-airflow-min", "1900",
                 "--min-outdoor-airflow", "950", "--supply-temp", "13", "--return-temp", "24", "--return-rh", "50", "--design-load", "63",
                 "--design-outdoor", "35", "--balance-point", "7", "--occupied", "Mon-Fri 07:00-19:00", "--json");
+
+        config.AddCommand<SynthCommand>("synth")
+            .WithData(output)
+            .WithDescription("Synthesize an hourly weather year (open layout) from monthly statistics and a seed.")
+            .WithExample("synth", "--monthly", "weather-samples/port-verrin-monthly.csv", "--seed", "1", "--out", "port-verrin.csv");
     }
 }
