@@ -3,11 +3,11 @@ namespace BinEnergy.Core.Study;
 /// <summary>
 /// Finds the valid key nearest to a misspelled one by Levenshtein edit distance (insertions,
 /// deletions and substitutions each cost 1; V. I. Levenshtein, 1966), accepting a match within
-/// a third of the key's length (at least 2 edits).
+/// a third of the key's length (at least 2 edits), or a distance the caller sets.
 /// </summary>
 internal static class KeySuggester
 {
-    public static string? Nearest(string written, IEnumerable<string> candidates)
+    public static string? Nearest(string written, IEnumerable<string> candidates, int? maxDistance = null)
     {
         string? best = null;
         int bestDistance = int.MaxValue;
@@ -21,7 +21,7 @@ internal static class KeySuggester
             }
         }
 
-        int allowed = Math.Max(2, written.Length / 3);
+        int allowed = maxDistance ?? Math.Max(2, written.Length / 3);
         return bestDistance <= allowed ? best : null;
     }
 

@@ -152,6 +152,16 @@ public static class StudyFileReader
 
         private StudyFileException Unknown(TomlEntry e, SectionDefinition section, string key, string fullKey)
         {
+            string? near = KeySuggester.Nearest(key, section.AllKeys);
+            string hint = near is null
+                ? $"the keys of [{section.Name}] are {string.Join(", ", section.AllKeys)}"
+                : $"did you mean {near}?";
+            var unknown = new StudyFileException(file, e.Line, fullKey, $"unknown key '{key}' in [{section.Name}]; {hint} (see docs/study.md)");
+            if (near is not null && KeySuggester.Distance(key, near) <= 1)
+            {
+                return unknown;
+            }
+
             // A known quantity with a wrong or missing unit suffix.
             foreach (var d in section.Keys.Where(d => !d.IsUnitless && d.Alternatives.Count > 0))
             {
@@ -163,12 +173,12 @@ public static class StudyFileReader
                 }
             }
 
-            string? near = KeySuggester.Nearest(key, section.AllKeys);
-            string hint = near is null
-                ? $"the keys of [{section.Name}] are {string.Join(", ", section.AllKeys)}"
-                : $"did you mean {near}?";
-            return new StudyFileException(file, e.Line, fullKey, $"unknown key '{key}' in [{section.Name}]; {hint} (see docs/study.md)");
+            return unknown;
         }
+
+        private static bool IsKeyProblem(string problem) =>
+            problem.StartsWith("unknown key", StringComparison.Ordinal) || problem.Contains("is not a unit this key accepts", StringComparison.Ordinal) ||
+            problem.Contains("needs its unit in its name", StringComparison.Ordinal);
 
         private StudyFileException Wrong(TomlEntry e, string fullKey, string expected) =>
             new(file, e.Line, fullKey, $"expected {expected}, not {Describe(e.Value)}");
@@ -256,7 +266,7 @@ public static class StudyFileReader
                 return lower;
             }
 
-            string? near = KeySuggester.Nearest(lower, def.Choices!);
+            string? near = KeySuggester.Nearest(lower, def.Choices!, Math.Max(3, lower.Length / 2));
             throw new StudyFileException(file, e.Line, fullKey,
                 $"\"{s}\" is not one of {string.Join(", ", def.Choices!.Select(c => $"\"{c}\""))}" + (near is null ? string.Empty : $"; did you mean \"{near}\"?"));
         }
@@ -273,7 +283,7 @@ public static class StudyFileReader
             {
                 foreach (var item in items.Where(i => !choices.Contains(i)))
                 {
-                    string? near = KeySuggester.Nearest(item, choices);
+                    string? near = KeySuggester.Nearest(item, choices, Math.Max(3, item.Length / 2));
                     throw new StudyFileException(file, e.Line, fullKey,
                         $"\"{item}\" is not one of {string.Join(", ", choices)}" + (near is null ? string.Empty : $"; did you mean \"{near}\"?"));
                 }
@@ -420,7 +430,12 @@ public static class StudyFileReader
                     int dot = e.Key.IndexOf('.', StringComparison.Ordinal);
                     if (dot < 0)
                     {
-                        string? near = KeySuggester.Nearest(e.Key, StudySchema.Overridable.SelectMany(s => s.AllKeys.Select(k => s.Name + "." + k)));
+                        string? near = StudySchema.Overridable
+                            .Select(s => (Section: s, Key: KeySuggester.Nearest(e.Key, s.AllKeys)))
+                            .Where(p => p.Key is not null)
+                            .OrderBy(p => KeySuggester.Distance(e.Key, p.Key!))
+                            .Select(p => p.Section.Name + "." + p.Key)
+                            .FirstOrDefault();
                         throw new StudyFileException(file, e.Line, "variant." + e.Key,
                             $"a variant overrides keys of other tables by their dotted name, e.g. ventilation.airflow_cfm = 2600" + (near is null ? string.Empty : $"; did you mean {near}?"));
                     }
@@ -452,7 +467,7 @@ public static class StudyFileReader
                     {
                         validated = Validate(e with { Table = table }, section, key, origin);
                     }
-                    catch (StudyFileException ex) when (ex.Problem.StartsWith("unknown key", StringComparison.Ordinal))
+                    catch (StudyFileException ex) when (ex.Key == table + "." + key && IsKeyProblem(ex.Problem))
                     {
                         throw new StudyFileException(file, e.Line, "variant." + e.Key, "this variant overrides an unknown key: " + ex.Problem);
                     }
