@@ -63,6 +63,21 @@ public static class Saturation
     }
 
     /// <summary>
+    /// Derivative of ln p_ws with respect to temperature, 1/K: eqs. 5 and 6 differentiated term
+    /// by term (for Newton steps in the hourly solvers), no range check.
+    /// </summary>
+    internal static double LnVapourPressureDerivative(double temperatureC)
+    {
+        double t = temperatureC + 273.15;
+        if (temperatureC <= TriplePointC)
+        {
+            return -C1 / (t * t) + C3 + t * (2 * C4 + t * (3 * C5 + t * 4 * C6)) + C7 / t;
+        }
+
+        return -C8 / (t * t) + C10 + t * (2 * C11 + t * 3 * C12) + C13 / t;
+    }
+
+    /// <summary>
     /// Saturation humidity ratio W_s in kg/kg at a temperature and total pressure:
     /// Handbook ch. 1, eq. 23, W_s = 0.621945 p_ws / (p - p_ws).
     /// </summary>

@@ -49,9 +49,53 @@ public sealed class HourlyWeather
         for (int i = 0; i < n; i++)
         {
             double w = humidityRatio[i];
-            DewPointC[i] = w > 0 ? Math.Min(MoistAir.DewPoint(w, pressurePa[i]), dryBulbC[i]) : Saturation.MinTemperatureC;
-            WetBulbC[i] = MoistAir.WetBulb(dryBulbC[i], w, pressurePa[i]);
-            EnthalpyJPerKg[i] = MoistAir.Enthalpy(dryBulbC[i], w);
+            DewPointC[i] = w > 0
+                ? Math.Min(HourlyStateSolver.DewPointFromVapourPressure(MoistAir.VapourPressureFromHumidityRatio(w, pressurePa[i])), dryBulbC[i])
+                : Saturation.MinTemperatureC;
+        }
+
+        FillWetBulbAndEnthalpy();
+    }
+
+    /// <summary>Builds a record whose dew points are already known (the reader's path: no dew-point solve).</summary>
+    internal HourlyWeather(
+        SiteInfo site,
+        DateTime[] times,
+        double[] dryBulbC,
+        double[] humidityRatio,
+        double[] pressurePa,
+        double[] dewPointC,
+        QualityReport quality,
+        CalendarInfo calendarYear)
+    {
+        int n = times.Length;
+        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n || dewPointC.Length != n)
+        {
+            throw new ArgumentException("all hourly columns must have the same length");
+        }
+
+        Site = site;
+        Times = times;
+        DryBulbC = dryBulbC;
+        HumidityRatio = humidityRatio;
+        PressurePa = pressurePa;
+        DewPointC = dewPointC;
+        Quality = quality;
+        Calendar = calendarYear;
+        WetBulbC = new double[n];
+        EnthalpyJPerKg = new double[n];
+        FillWetBulbAndEnthalpy();
+    }
+
+    /// <summary>Wet-bulb (eqs. 33 and 35 solved, from the dew point up) and enthalpy (eq. 32) of every hour.</summary>
+    private void FillWetBulbAndEnthalpy()
+    {
+        for (int i = 0; i < Count; i++)
+        {
+            double t = DryBulbC[i];
+            double w = HumidityRatio[i];
+            WetBulbC[i] = HourlyStateSolver.WetBulb(t, w, PressurePa[i], DewPointC[i]);
+            EnthalpyJPerKg[i] = MoistAir.Enthalpy(t, w);
         }
     }
 

@@ -1,0 +1,40 @@
+namespace BinEnergy.Core.Weather;
+
+/// <summary>The stable names of the repairs and checks counted in a <see cref="QualityReport"/>.</summary>
+public static class QualityKeys
+{
+    /// <summary>RH values between 100 and 103 % set to 100 %.</summary>
+    public const string RhClamped = "rh_clamped";
+
+    /// <summary>Dew points above the dry-bulb by at most 1 K, set to the dry-bulb.</summary>
+    public const string DewPointAboveDryBulbClamped = "dewpoint_above_drybulb_clamped";
+
+    /// <summary>Dew points above the dry-bulb by more than 1 K: set to the dry-bulb and flagged as suspect values.</summary>
+    public const string DewPointAboveDryBulbSuspect = "dewpoint_above_drybulb_suspect";
+
+    /// <summary>Wet-bulbs above the dry-bulb, set to the dry-bulb.</summary>
+    public const string WetBulbAboveDryBulbClamped = "wetbulb_above_drybulb_clamped";
+
+    /// <summary>Humidity ratios above saturation at the dry-bulb, set to saturation.</summary>
+    public const string HumidityRatioAboveSaturationClamped = "humidity_ratio_above_saturation_clamped";
+
+    /// <summary>Hours dropped because they sat in a gap longer than the fill limit (only when dropping is allowed).</summary>
+    public const string LongGapHoursDropped = "long_gap_hours_dropped";
+
+    /// <summary>Hours of one column filled by linear interpolation: the key is this prefix plus the column's role, e.g. <c>gap_filled_drybulb</c>.</summary>
+    public const string GapFilledPrefix = "gap_filled_";
+
+    /// <summary>Hours where a second humidity measure disagrees with the one used: the key is this prefix plus the measure, e.g. <c>disagrees_rh</c>.</summary>
+    public const string DisagreesPrefix = "disagrees_";
+
+    /// <summary>The short role name of a quantity in keys and messages.</summary>
+    public static string Role(WeatherQuantity q) => q switch
+    {
+        WeatherQuantity.DryBulb => "drybulb",
+        WeatherQuantity.DewPoint => "dewpoint",
+        WeatherQuantity.HumidityRatio => "humidity_ratio",
+        WeatherQuantity.WetBulb => "wetbulb",
+        WeatherQuantity.RelativeHumidity => "rh",
+        _ => "pressure",
+    };
+}

@@ -1,0 +1,513 @@
+using System.Globalization;
+using BinEnergy.Core.Psychrometrics;
+
+namespace BinEnergy.Core.Weather;
+
+/// <summary>
+/// Turns a parsed table into an hourly record: site metadata and pressure (DESIGN 5.1), the
+/// calendar (5.3: hour-ending shift, UTC to local standard time, typical years keyed on month,
+/// day and hour), order checks, gap filling and the humidity rules (5.4), then the moist-air
+/// state of each hour.
+/// </summary>
+internal static class WeatherRecordBuilder
+{
+    private const double DewPointClampToleranceK = 1.0;
+    private const double RhDisagreementPoints = 5.0;
+    private const double TemperatureDisagreementK = 1.0;
+    private static readonly TimeSpan Hour = TimeSpan.FromHours(1);
+
+    public static HourlyWeather Build(RawWeatherTable raw, WeatherReadOptions options)
+    {
+        var quality = raw.Quality;
+        string file = raw.File;
+        var map = raw.Map;
+
+        double? lat = MetaNumber(raw, "latitude", -90, 90);
+        double? lon = MetaNumber(raw, "longitude", -180, 180);
+        double? elevation = options.ElevationM ?? MetaNumber(raw, "elevation_m", -500, 9000)
+            ?? (MetaNumber(raw, "elevation_ft", -1600, 29500) is double ft ? ft * Units.Conversions.MetresPerFoot : null);
+        double? offset;
+        if (raw.Metadata.TryGetValue("utc_offset_h", out var off) && off.Value == "from_longitude")
+        {
+            if (lon is not double longitude)
+            {
+                throw new WeatherDataException(WeatherErrorKind.BadMetadata, file, "the map estimates the UTC offset from the longitude, but no longitude was found",
+                    "Give the map a fixed utc_offset_h = { value = ... }");
+            }
+
+            offset = Math.Round(longitude / 15.0);
+            if (map.Time.Utc)
+            {
+                quality.Warn(Inv($"times are UTC; local standard time taken as UTC{offset:+0;-0;+0} h, the standard meridian nearest longitude {longitude:0.###} (give the map a fixed utc_offset_h if the local zone differs)"));
+            }
+        }
+        else
+        {
+            offset = MetaNumber(raw, "utc_offset_h", -12, 14);
+        }
+
+        string name = raw.Metadata.TryGetValue("name", out var nm) && nm.Value.Trim().Length > 0 ? nm.Value.Trim() : BaseName(file);
+
+        // Calendar: shift to hour-beginning local standard time.
+        double shiftHours = map.Time.HourEnding ? -1.0 : 0.0;
+        if (map.Time.Utc)
+        {
+            if (offset is not double o)
+            {
+                throw new WeatherDataException(WeatherErrorKind.BadMetadata, file, "the times are UTC but the file gives no UTC offset for local standard time",
+                    "Add utc_offset_h to the map's [metadata] table");
+            }
+
+            shiftHours += o;
+        }
+
+        int n = raw.Count;
+        var shifted = new DateTime[n];
+        for (int i = 0; i < n; i++)
+        {
+            shifted[i] = raw.Times[i].AddHours(shiftHours);
+        }
+
+        bool typical = raw.TypicalYear ?? DetectTypicalYear(shifted, raw.WrittenYears);
+        int calendarYear = options.CalendarYear;
+        string calendarNote;
+        int[] order;
+        DateTime[] keys;
+        if (typical)
+        {
+            bool hasLeapDay = shifted.Any(t => t.Month == 2 && t.Day == 29);
+            if (hasLeapDay && !DateTime.IsLeapYear(calendarYear))
+            {
+                calendarYear = LeapYearStartingLike(calendarYear);
+            }
+
+            keys = new DateTime[n];
+            var front = new List<int>();
+            var middle = new List<int>(n);
+            var back = new List<int>();
+            for (int i = 0; i < n; i++)
+            {
+                var s = shifted[i];
+                keys[i] = new DateTime(calendarYear, s.Month, s.Day).Add(s.TimeOfDay);
+                int written = raw.WrittenYears[i];
+                (s.Year > written ? front : s.Year < written ? back : middle).Add(i);
+            }
+
+            if (front.Count + back.Count > 0)
+            {
+                quality.Warn($"{front.Count + back.Count} hour(s) crossed the year boundary when shifted to hour-beginning local standard time and were moved to the other end of the typical year");
+            }
+
+            order = [.. front, .. middle, .. back];
+            string start = new DateTime(calendarYear, 1, 1).DayOfWeek.ToString();
+            calendarNote = Inv($"typical year (months from different years), keyed on month, day and hour; weekdays from {calendarYear}, a {(DateTime.IsLeapYear(calendarYear) ? "leap" : "non-leap")} year starting on a {start}")
+                + (calendarYear != options.CalendarYear ? Inv($" (the record has a 29 February, so {calendarYear} is used instead of {options.CalendarYear})") : "");
+        }
+        else
+        {
+            keys = shifted;
+            order = Enumerable.Range(0, n).ToArray();
+            calendarYear = shifted[0].Year;
+            calendarNote = shifted[0].Year == shifted[^1].Year
+                ? Inv($"calendar year {calendarYear} as recorded, with its own dates and weekdays")
+                : Inv($"{shifted[0]:yyyy-MM-dd} to {shifted[^1]:yyyy-MM-dd} as recorded, with their own dates and weekdays");
+        }
+
+        if (map.Time.HourEnding)
+        {
+            quality.Warn("hour-ending times shifted back one hour to hour-beginning");
+        }
+
+        // Order checks and the hourly grid.
+        DateTime first = keys[order[0]];
+        var gridIndex = new int[n];
+        int prev = order[0];
+        gridIndex[prev] = 0;
+        for (int k = 1; k < n; k++)
+        {
+            int i = order[k];
+            var step = keys[i] - keys[prev];
+            if (step == TimeSpan.Zero)
+            {
+                throw new WeatherDataException(WeatherErrorKind.DuplicateTime, file, $"the hour {Show(keys[i], typical)} appears twice, on lines {raw.Lines[prev]} and {raw.Lines[i]}",
+                    "Delete one of the two rows", line: raw.Lines[i], column: map.Time.Column, value: RawTime(raw, i));
+            }
+
+            if (step < TimeSpan.Zero)
+            {
+                throw new WeatherDataException(WeatherErrorKind.TimeOutOfOrder, file, $"the hour {Show(keys[i], typical)} comes before {Show(keys[prev], typical)} on line {raw.Lines[prev]}",
+                    "Sort the rows by time (each row must be one hour after the one before)", line: raw.Lines[i], column: map.Time.Column, value: RawTime(raw, i));
+            }
+
+            if (step.Ticks % Hour.Ticks != 0)
+            {
+                throw new WeatherDataException(WeatherErrorKind.NonHourlyStep, file,
+                    Inv($"the row is {step.TotalMinutes:0.#} minutes after the one on line {raw.Lines[prev]}; the reader needs hourly rows"),
+                    "Average sub-hourly data to whole hours first (one row per hour, on the hour)", line: raw.Lines[i], column: map.Time.Column, value: RawTime(raw, i));
+            }
+
+            gridIndex[i] = gridIndex[prev] + (int)(step.Ticks / Hour.Ticks);
+            if (gridIndex[i] > 24 * 366 * 30)
+            {
+                throw new WeatherDataException(WeatherErrorKind.NonHourlyStep, file, "the record spans more than 30 years", "Split the file into years", line: raw.Lines[i]);
+            }
+
+            prev = i;
+        }
+
+        int hours = gridIndex[order[^1]] + 1;
+        var gridLine = new int[hours];
+        var times = new DateTime[hours];
+        for (int g = 0; g < hours; g++)
+        {
+            times[g] = first.AddHours(g);
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            gridLine[gridIndex[i]] = raw.Lines[i];
+        }
+
+        var columns = new Dictionary<WeatherQuantity, double[]>();
+        foreach (var (q, list) in raw.Values)
+        {
+            var col = new double[hours];
+            Array.Fill(col, double.NaN);
+            for (int i = 0; i < n; i++)
+            {
+                col[gridIndex[i]] = list[i];
+            }
+
+            columns[q] = col;
+        }
+
+        var drop = new bool[hours];
+        foreach (var (q, col) in columns.OrderBy(c => c.Key))
+        {
+            FillGaps(col, q, raw, times, gridLine, typical, options, drop, quality);
+        }
+
+        // Keep the hours not dropped.
+        int kept = drop.Count(d => !d);
+        if (kept < hours)
+        {
+            quality.Count(QualityKeys.LongGapHoursDropped, null, hours - kept);
+            quality.Warn(Inv($"{hours - kept} hour(s) in long gaps were dropped: annual figures are for the {kept} hours present (scale by {8760.0 / kept:0.####} for a full year)"));
+            if (kept == 0)
+            {
+                throw new WeatherDataException(WeatherErrorKind.LongGap, file, "every hour was dropped as part of a long gap", "Fill the data from another source");
+            }
+        }
+
+        times = Keep(times, drop, kept);
+        gridLine = Keep(gridLine, drop, kept);
+        foreach (var q in columns.Keys.ToList())
+        {
+            columns[q] = Keep(columns[q], drop, kept);
+        }
+
+        // Site pressure (DESIGN 5.1).
+        double sitePressure;
+        SitePressureSource source;
+        columns.TryGetValue(WeatherQuantity.Pressure, out var pressureColumn);
+        if (elevation is double z)
+        {
+            sitePressure = Atmosphere.PressureAtElevationPa(z);
+            source = SitePressureSource.StandardAtmosphereAtElevation;
+        }
+        else if (pressureColumn is not null)
+        {
+            sitePressure = pressureColumn.Average();
+            source = SitePressureSource.RecordMean;
+            quality.Warn("no elevation given: the site pressure is the mean of the record's pressure column");
+        }
+        else
+        {
+            sitePressure = Atmosphere.SeaLevelPressurePa;
+            source = SitePressureSource.SeaLevelAssumed;
+            quality.Warn("no elevation and no pressure column: sea-level pressure (101.325 kPa) assumed; give --elevation for a site above sea level");
+        }
+
+        if (pressureColumn is not null && kept > 24 && pressureColumn.Max() - pressureColumn.Min() < 1e-6)
+        {
+            quality.Warn(Inv($"the pressure column is constant at {pressureColumn[0] / 1000:0.###} kPa: it looks filled rather than measured"));
+        }
+
+        var pressure = pressureColumn ?? Enumerable.Repeat(sitePressure, kept).ToArray();
+        var site = new SiteInfo(name, elevation, lat, lon, offset, sitePressure, source);
+
+        // Humidity (DESIGN 5.1 order: dew point, humidity ratio, wet-bulb, RH) and the clamps of 5.4.
+        var dryBulb = columns[WeatherQuantity.DryBulb];
+        var primary = new[] { WeatherQuantity.DewPoint, WeatherQuantity.HumidityRatio, WeatherQuantity.WetBulb, WeatherQuantity.RelativeHumidity }
+            .First(columns.ContainsKey);
+        var w = new double[kept];
+        var dewPoint = new double[kept];
+        var given = columns[primary];
+        for (int i = 0; i < kept; i++)
+        {
+            double t = dryBulb[i];
+            double p = pressure[i];
+            double v = given[i];
+            switch (primary)
+            {
+                case WeatherQuantity.DewPoint:
+                    if (v > t)
+                    {
+                        bool suspect = v - t > DewPointClampToleranceK;
+                        quality.Count(suspect ? QualityKeys.DewPointAboveDryBulbSuspect : QualityKeys.DewPointAboveDryBulbClamped,
+                            Inv($"{Where(gridLine[i], times[i], typical)}: dew point {v:0.0##} C above dry-bulb {t:0.0##} C, set to the dry-bulb"));
+                        v = t;
+                    }
+
+                    w[i] = MoistAir.HumidityRatioFromVapourPressure(Saturation.VapourPressurePa(v), p);
+                    dewPoint[i] = v;
+                    break;
+                case WeatherQuantity.HumidityRatio:
+                    double ws = Saturation.HumidityRatio(t, p);
+                    if (v > ws)
+                    {
+                        quality.Count(QualityKeys.HumidityRatioAboveSaturationClamped,
+                            Inv($"{Where(gridLine[i], times[i], typical)}: humidity ratio {v:0.#####} above saturation {ws:0.#####} at {t:0.0#} C, set to saturation"));
+                        v = ws;
+                    }
+
+                    w[i] = v;
+                    dewPoint[i] = v > 0 ? Math.Min(HourlyStateSolver.DewPointFromVapourPressure(MoistAir.VapourPressureFromHumidityRatio(v, p)), t) : Saturation.MinTemperatureC;
+                    break;
+                case WeatherQuantity.WetBulb:
+                    if (v > t)
+                    {
+                        quality.Count(QualityKeys.WetBulbAboveDryBulbClamped,
+                            Inv($"{Where(gridLine[i], times[i], typical)}: wet-bulb {v:0.0##} C above dry-bulb {t:0.0##} C, set to the dry-bulb"));
+                        v = t;
+                    }
+
+                    double fromWetBulb;
+                    try
+                    {
+                        fromWetBulb = MoistAir.HumidityRatioFromWetBulb(t, v, p);
+                    }
+                    catch (PsychrometricException)
+                    {
+                        throw new WeatherDataException(WeatherErrorKind.ValueOutOfRange, file,
+                            Inv($"the wet-bulb {v:0.0#} C is too low for the dry-bulb {t:0.0#} C: even perfectly dry air has a higher wet-bulb"),
+                            "Check the wet-bulb and dry-bulb columns (units, order)", line: gridLine[i] > 0 ? gridLine[i] : null, column: raw.ColumnNames[primary]);
+                    }
+
+                    w[i] = fromWetBulb;
+                    dewPoint[i] = w[i] > 0 ? Math.Min(HourlyStateSolver.DewPointFromVapourPressure(MoistAir.VapourPressureFromHumidityRatio(w[i], p)), t) : Saturation.MinTemperatureC;
+                    break;
+                default:
+                    double pw = v / 100.0 * Saturation.VapourPressurePa(t);
+                    w[i] = MoistAir.HumidityRatioFromVapourPressure(pw, p);
+                    dewPoint[i] = pw > 0 ? Math.Min(HourlyStateSolver.DewPointFromVapourPressure(pw), t) : Saturation.MinTemperatureC;
+                    break;
+            }
+        }
+
+        var weather = new HourlyWeather(site, times, dryBulb, w, pressure, dewPoint, quality, new CalendarInfo(calendarYear, typical, calendarNote));
+        CheckSecondaryMeasures(weather, columns, primary, gridLine, typical, quality);
+        return weather;
+    }
+
+    /// <summary>The other humidity measures, checked against the one used (DESIGN 5.1): disagreements are counted, not repaired.</summary>
+    private static void CheckSecondaryMeasures(HourlyWeather weather, Dictionary<WeatherQuantity, double[]> columns, WeatherQuantity primary, int[] gridLine, bool typical, QualityReport quality)
+    {
+        foreach (var (q, col) in columns)
+        {
+            if (q == primary || !WeatherFileParser.IsHumidity(q))
+            {
+                continue;
+            }
+
+            string key = QualityKeys.DisagreesPrefix + QualityKeys.Role(q);
+            string against = WeatherFileParser.Describe(primary);
+            for (int i = 0; i < weather.Count; i++)
+            {
+                double t = weather.DryBulbC[i];
+                double expected, tolerance;
+                string unit;
+                switch (q)
+                {
+                    case WeatherQuantity.RelativeHumidity:
+                        expected = Math.Min(100.0, MoistAir.VapourPressureFromHumidityRatio(weather.HumidityRatio[i], weather.PressurePa[i]) / Saturation.VapourPressurePa(t) * 100.0);
+                        (tolerance, unit) = (RhDisagreementPoints, "%");
+                        break;
+                    case WeatherQuantity.WetBulb:
+                        (expected, tolerance, unit) = (weather.WetBulbC[i], TemperatureDisagreementK, "C");
+                        break;
+                    case WeatherQuantity.DewPoint:
+                        (expected, tolerance, unit) = (weather.DewPointC[i], TemperatureDisagreementK, "C");
+                        break;
+                    default:
+                        expected = weather.HumidityRatio[i];
+                        (tolerance, unit) = (Math.Max(0.0005, 0.05 * expected), "kg/kg");
+                        break;
+                }
+
+                if (Math.Abs(col[i] - expected) > tolerance)
+                {
+                    quality.Count(key, Inv($"{Where(gridLine[i], weather.Times[i], typical)}: {WeatherFileParser.Describe(q)} {col[i]:0.####} {unit} in the file, {expected:0.####} {unit} from the {against}"));
+                }
+            }
+        }
+    }
+
+    private static void FillGaps(double[] col, WeatherQuantity q, RawWeatherTable raw, DateTime[] times, int[] gridLine, bool typical, WeatherReadOptions options, bool[] drop, QualityReport quality)
+    {
+        int hours = col.Length;
+        int g = 0;
+        string key = QualityKeys.GapFilledPrefix + QualityKeys.Role(q);
+        string column = raw.ColumnNames[q];
+        while (g < hours)
+        {
+            if (!double.IsNaN(col[g]))
+            {
+                g++;
+                continue;
+            }
+
+            int start = g;
+            while (g < hours && double.IsNaN(col[g]))
+            {
+                g++;
+            }
+
+            int length = g - start;
+            string span = length == 1 ? Show(times[start], typical) : $"{Show(times[start], typical)} to {Show(times[g - 1], typical)}";
+            if (length > options.MaxGapHours)
+            {
+                if (options.AllowDroppingLongGaps)
+                {
+                    for (int k = start; k < g; k++)
+                    {
+                        drop[k] = true;
+                    }
+
+                    continue;
+                }
+
+                int? firstLine = Enumerable.Range(start, length).Select(k => gridLine[k]).FirstOrDefault(l => l > 0) is int fl && fl > 0 ? fl : null;
+                string lines = firstLine is null ? "no rows exist for these hours" : "rows from line " + firstLine;
+                throw new WeatherDataException(WeatherErrorKind.LongGap, raw.File,
+                    $"the {WeatherFileParser.Describe(q)} is missing for {length} hours in a row, from {Show(times[start], typical)} to {Show(times[g - 1], typical)} ({lines})",
+                    $"Gaps of up to {options.MaxGapHours} hours are filled by linear interpolation; fill this one from another source, or allow dropping long gaps (--drop-long-gaps) so those hours are left out of annual figures",
+                    line: firstLine, column: column);
+            }
+
+            double before = start > 0 ? col[start - 1] : double.NaN;
+            double after = g < hours ? col[g] : double.NaN;
+            for (int k = start; k < g; k++)
+            {
+                col[k] = double.IsNaN(before) ? after
+                    : double.IsNaN(after) ? before
+                    : before + (after - before) * (k - start + 1) / (length + 1);
+            }
+
+            if (double.IsNaN(before) && double.IsNaN(after))
+            {
+                throw new WeatherDataException(WeatherErrorKind.LongGap, raw.File, $"the {WeatherFileParser.Describe(q)} column has no values at all",
+                    "Fill the column, or remove it", column: column);
+            }
+
+            quality.Count(key, $"{column}: {length} hour(s) {span} filled by linear interpolation", length);
+        }
+    }
+
+    /// <summary>
+    /// A typical year mixes source years month by month: the year changes somewhere other than
+    /// at a 31 December to 1 January step. A one-year or multi-year calendar record changes
+    /// year only there.
+    /// </summary>
+    private static bool DetectTypicalYear(DateTime[] shifted, List<int> writtenYears)
+    {
+        for (int i = 1; i < shifted.Length; i++)
+        {
+            if (writtenYears[i] != writtenYears[i - 1] && !(shifted[i - 1].Month == 12 && shifted[i].Month == 1) && !(shifted[i].Month == 1 && shifted[i].Day == 1))
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    /// <summary>The leap year nearest <paramref name="year"/> whose 1 January falls on the same weekday.</summary>
+    private static int LeapYearStartingLike(int year)
+    {
+        var weekday = new DateTime(year, 1, 1).DayOfWeek;
+        for (int d = 1; d < 40; d++)
+        {
+            foreach (int y in new[] { year + d, year - d })
+            {
+                if (y is > 1 and < 9999 && DateTime.IsLeapYear(y) && new DateTime(y, 1, 1).DayOfWeek == weekday)
+                {
+                    return y;
+                }
+            }
+        }
+
+        return 2024;
+    }
+
+    private static double? MetaNumber(RawWeatherTable raw, string key, double low, double high)
+    {
+        if (!raw.Metadata.TryGetValue(key, out var entry))
+        {
+            return null;
+        }
+
+        if (!double.TryParse(entry.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) || !(v >= low && v <= high))
+        {
+            throw new WeatherDataException(WeatherErrorKind.BadMetadata, raw.File, Inv($"the {key} is not a number between {low} and {high}"),
+                raw.IsOpenLayout ? $"Write it like '# {key}: 12.5' (a dot as decimal separator)" : "Check that this file has the layout the " + raw.Map.Source + " describes",
+                line: entry.Line, column: key, value: entry.Value);
+        }
+
+        return v;
+    }
+
+    private static T[] Keep<T>(T[] values, bool[] drop, int kept)
+    {
+        if (kept == values.Length)
+        {
+            return values;
+        }
+
+        var result = new T[kept];
+        int j = 0;
+        for (int i = 0; i < values.Length; i++)
+        {
+            if (!drop[i])
+            {
+                result[j++] = values[i];
+            }
+        }
+
+        return result;
+    }
+
+    private static string BaseName(string file)
+    {
+        string name = Path.GetFileName(file);
+        foreach (var ext in new[] { ".gz", ".csv", ".CSV" })
+        {
+            if (name.EndsWith(ext, StringComparison.OrdinalIgnoreCase))
+            {
+                name = name[..^ext.Length];
+            }
+        }
+
+        return name;
+    }
+
+    private static string RawTime(RawWeatherTable raw, int i) => raw.Times[i].ToString("yyyy-MM-dd HH:mm", CultureInfo.InvariantCulture) + " as read";
+
+    /// <summary>A time for messages: month-day-hour for typical years (their calendar year is not the source's).</summary>
+    internal static string Show(DateTime t, bool typical) =>
+        t.ToString(typical ? "MM-dd HH:mm" : "yyyy-MM-dd HH:mm", CultureInfo.InvariantCulture);
+
+    private static string Where(int line, DateTime t, bool typical) => line > 0 ? $"line {line} ({Show(t, typical)})" : Show(t, typical);
+
+    private static string Inv(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
+}
