@@ -1,0 +1,26 @@
+namespace BinEnergy.Core.Loads;
+
+/// <summary>The annual figures of an outdoor-air estimate; each is an energy.</summary>
+public enum LoadFigure
+{
+    /// <summary>Heating the outdoor air to the heating setpoint.</summary>
+    Heating,
+
+    /// <summary>Sensible cooling of the outdoor air to the cooling setpoint.</summary>
+    CoolingSensible,
+
+    /// <summary>Latent cooling: removing the water above the maximum indoor humidity ratio.</summary>
+    CoolingLatent,
+
+    /// <summary>Adding water up to the minimum indoor humidity ratio (when a minimum is set).</summary>
+    Humidification,
+
+    /// <summary>Heating and humidification the recovery device saves.</summary>
+    RecoveredHeating,
+
+    /// <summary>Sensible and latent cooling the recovery device saves.</summary>
+    RecoveredCooling,
+
+    /// <summary>Fan energy for the recovery device's added pressure drop (reported separately).</summary>
+    FanEnergy,
+}
