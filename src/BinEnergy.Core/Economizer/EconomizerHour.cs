@@ -1,0 +1,33 @@
+namespace BinEnergy.Core.Economizer;
+
+/// <summary>
+/// The air system in one hour (or at one bin state), in SI: the mode, the outdoor-air mass
+/// fraction of the supply air, the mixed (coil-entering) state, the supply mass flow, the
+/// coil-leaving humidity ratio and the coil load split into sensible and latent parts.
+/// </summary>
+/// <param name="Mode">What the system does.</param>
+/// <param name="OutdoorFraction">Mass of outdoor air over mass of supply air, x (0 to 1).</param>
+/// <param name="MixedDryBulbC">Mixed-air dry-bulb, C.</param>
+/// <param name="MixedHumidityRatio">Mixed-air humidity ratio, kg/kg.</param>
+/// <param name="MixedEnthalpyJPerKg">Mixed-air enthalpy, J/kg dry air.</param>
+/// <param name="LeavingHumidityRatio">Coil-leaving humidity ratio, kg/kg.</param>
+/// <param name="SupplyMassFlowKgPerS">Supply air, kg of dry air per second.</param>
+/// <param name="CoilSensibleW">Sensible coil load, W.</param>
+/// <param name="CoilLatentW">Latent coil load, W.</param>
+public readonly record struct EconomizerHour(
+    EconomizerMode Mode,
+    double OutdoorFraction,
+    double MixedDryBulbC,
+    double MixedHumidityRatio,
+    double MixedEnthalpyJPerKg,
+    double LeavingHumidityRatio,
+    double SupplyMassFlowKgPerS,
+    double CoilSensibleW,
+    double CoilLatentW)
+{
+    /// <summary>Total coil load, W: sensible plus latent.</summary>
+    public double CoilTotalW => CoilSensibleW + CoilLatentW;
+
+    /// <summary>True when the coil removes heat in this hour.</summary>
+    public bool CoilRuns => CoilSensibleW > 0 || CoilLatentW > 0;
+}

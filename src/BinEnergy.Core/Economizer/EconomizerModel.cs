@@ -1,0 +1,238 @@
+using BinEnergy.Core.Psychrometrics;
+
+namespace BinEnergy.Core.Economizer;
+
+/// <summary>
+/// The air-side economizer model of DESIGN 8 for one hour (or one bin state), in SI, with
+/// everything that does not change from hour to hour computed once: the return-air state, the
+/// coil-leaving humidity limit, the load line and the flow-basis density.
+/// </summary>
+/// <remarks>
+/// <para>For an occupied hour with outdoor dry-bulb T_o, humidity ratio W_o, enthalpy h_o and
+/// dew point T_dp,o:</para>
+/// <list type="number">
+/// <item>Building sensible load Q_b from the load line (<see cref="BuildingLoadLine"/>); Q_b = 0
+/// gives the mode "no cooling" and no coil load.</item>
+/// <item>Supply mass flow: constant volume m_s = rho V_s; variable volume
+/// m_s = Q_b / (c_p (T_r - T_s)) bounded to [rho V_min, rho V_max], with c_p = 1.006 + 1.86 W_r
+/// kJ/(kg K) of the room (return) air (Handbook—Fundamentals 2017, ch. 1, eq. 32 differentiated).
+/// rho is the dry-air density of the flow basis; with <c>actual</c> it is that of the mixed
+/// (coil-entering) state at the site pressure (eq. 26), found by fixed-point iteration because
+/// the mixed state depends on the outdoor fraction, which depends on m_s.</item>
+/// <item>Minimum outdoor fraction x_min = rho V_oa / m_s (mass of outdoor air over mass of supply air).</item>
+/// <item>The economizer is enabled when the control's high limit allows it and T_o &lt; T_r; then
+/// x = (T_r - T_s) / (T_r - T_o) clamped to [x_min, 1] (the fraction whose mix is exactly at T_s),
+/// else x = x_min.</item>
+/// <item>Mixing linear in dry-bulb and humidity ratio (the usual approximation; ASHRAE
+/// Handbook—Fundamentals 2017, ch. 1, "adiabatic mixing", exact in W and in h, nearly so in t):
+/// T_mix = x T_o + (1 - x) T_r, W_mix = x W_o + (1 - x) W_r, h_mix = h(T_mix, W_mix) by eq. 32.</item>
+/// <item>Coil: to T_s, leaving W_l = min(W_mix, W_lim) with W_lim the humidity ratio at T_s and the
+/// coil-leaving RH (eq. 22/20 with Hyland-Wexler saturation). Sensible part
+/// m_s (1.006 + 1.86 W_mix)(T_mix - T_s), latent part m_s (W_mix - W_l)(2501 + 1.86 T_s) kJ/kg, each
+/// when positive; together exactly m_s (h_mix - h_l) of eq. 32 whenever T_mix &gt;= T_s.</item>
+/// <item>Integrated: when x = 1 cannot reach T_s (or the mix is too humid) the economizer stays on
+/// and the coil trims (mode "integrated"). Non-integrated: it locks out to x_min whenever the coil
+/// must run (mode "minimum outdoor air"). Enabled with no coil load: "free cooling".</item>
+/// </list>
+/// <para>Indoor states (return air, mixed air, coil-leaving limit) use the site pressure
+/// (DESIGN 5.1); the outdoor enthalpy and dew point are the hour's own.</para>
+/// </remarks>
+public sealed class EconomizerModel
+{
+    /// <summary>Tolerance under which a mixed-air temperature counts as at the supply temperature, K.</summary>
+    public const double TemperatureToleranceK = 1e-9;
+
+    private readonly double _tS;
+    private readonly double _tR;
+    private readonly double _tBal;
+    private readonly double _loadSlope;
+    private readonly double _cpReturn;
+    private readonly double _vs;
+    private readonly double _vsMin;
+    private readonly double _voa;
+    private readonly double _fixedDensity;
+    private readonly bool _actual;
+    private readonly bool _variable;
+    private readonly double _latentAtSupply;
+
+    /// <summary>Builds the model; validates the settings first.</summary>
+    /// <param name="settings">The air system.</param>
+    /// <param name="sitePressurePa">Site pressure for the indoor states and the site flow basis, Pa.</param>
+    /// <exception cref="EconomizerSettingsException">The settings describe no workable system.</exception>
+    public EconomizerModel(EconomizerSettings settings, double sitePressurePa)
+    {
+        Settings = settings.Validate();
+        if (!(sitePressurePa >= 30_000 && sitePressurePa <= 120_000))
+        {
+            throw new EconomizerSettingsException([new("site_pressure", FormattableString.Invariant($"site pressure {sitePressurePa:0} Pa is outside 30 to 120 kPa"))]);
+        }
+
+        SitePressurePa = sitePressurePa;
+        _tS = settings.SupplyTemperature.Celsius;
+        _tR = settings.ReturnTemperature.Celsius;
+        _tBal = settings.LoadLine.BalancePoint.Celsius;
+        _loadSlope = settings.LoadLine.SlopeWPerK;
+        ReturnHumidityRatio = MoistAir.HumidityRatioFromRelativeHumidity(_tR, settings.ReturnRelativeHumidity, sitePressurePa);
+        ReturnEnthalpyJPerKg = MoistAir.Enthalpy(_tR, ReturnHumidityRatio);
+        CoilLeavingHumidityLimit = MoistAir.HumidityRatioFromRelativeHumidity(_tS, settings.CoilLeavingRelativeHumidity, sitePressurePa);
+        _cpReturn = MoistAir.HumidSpecificHeat(ReturnHumidityRatio);
+        _latentAtSupply = MoistAir.LatentHeat + MoistAir.VapourSpecificHeat * _tS;
+        _vs = settings.SupplyAirflow.CubicMetresPerSecond;
+        _vsMin = settings.SupplyAirflowMin?.CubicMetresPerSecond ?? _vs;
+        _voa = settings.MinOutdoorAirflow.CubicMetresPerSecond;
+        _variable = settings.IsVariableVolume;
+        _actual = settings.FlowBasis == FlowBasis.Actual;
+        _fixedDensity = _actual ? double.NaN : FlowBasisDensity.For(settings.FlowBasis, sitePressurePa, _tR, 0.0, sitePressurePa);
+    }
+
+    public EconomizerSettings Settings { get; }
+
+    /// <summary>Site pressure used for the indoor states, Pa.</summary>
+    public double SitePressurePa { get; }
+
+    /// <summary>Return-air humidity ratio W_r, kg/kg (from T_r and the return RH, eqs. 12, 20 and 22).</summary>
+    public double ReturnHumidityRatio { get; }
+
+    /// <summary>Return-air enthalpy h_r, J/kg dry air (eq. 32): the limit of the differential-enthalpy control.</summary>
+    public double ReturnEnthalpyJPerKg { get; }
+
+    /// <summary>Humidity ratio at T_s and the coil-leaving RH, kg/kg: the wettest air the coil lets through.</summary>
+    public double CoilLeavingHumidityLimit { get; }
+
+    /// <summary>Dry-air density of the flow basis, kg/m3; NaN for <c>actual</c> (then it varies with the mixed state).</summary>
+    public double FlowBasisDensityKgPerM3 => _fixedDensity;
+
+    /// <summary>The building sensible load Q_b at an outdoor dry-bulb, W.</summary>
+    public double BuildingLoadW(double outdoorDryBulbC) =>
+        outdoorDryBulbC > _tBal ? _loadSlope * (outdoorDryBulbC - _tBal) : 0.0;
+
+    /// <summary>
+    /// The system in one occupied hour under <paramref name="control"/>. For
+    /// <see cref="EconomizerControl.None"/> this is the baseline.
+    /// </summary>
+    /// <param name="control">The control.</param>
+    /// <param name="outdoorDryBulbC">T_o, C.</param>
+    /// <param name="outdoorHumidityRatio">W_o, kg/kg.</param>
+    /// <param name="outdoorEnthalpyJPerKg">h_o, J/kg dry air (0 C datum).</param>
+    /// <param name="outdoorDewPointC">T_dp,o, C.</param>
+    public EconomizerHour Evaluate(
+        EconomizerControl control,
+        double outdoorDryBulbC,
+        double outdoorHumidityRatio,
+        double outdoorEnthalpyJPerKg,
+        double outdoorDewPointC)
+    {
+        double qb = BuildingLoadW(outdoorDryBulbC);
+        if (qb <= 0)
+        {
+            return NoCooling(outdoorDryBulbC, outdoorHumidityRatio);
+        }
+
+        var baseline = AtMinimum(qb, outdoorDryBulbC, outdoorHumidityRatio);
+        return Resolve(control, qb, in baseline, outdoorDryBulbC, outdoorHumidityRatio, outdoorEnthalpyJPerKg, outdoorDewPointC);
+    }
+
+    /// <summary>The system in one occupied hour, from an outdoor state.</summary>
+    public EconomizerHour Evaluate(EconomizerControl control, AirState outdoor) =>
+        Evaluate(control, outdoor.DryBulb.Celsius, outdoor.HumidityRatio.KilogramsPerKilogram,
+            outdoor.Enthalpy.JoulesPerKilogram, outdoor.DewPoint.Celsius);
+
+    /// <summary>True when <paramref name="control"/> enables the economizer at this outdoor state (high limit and T_o &lt; T_r).</summary>
+    public bool IsEnabled(EconomizerControl control, double outdoorDryBulbC, double outdoorEnthalpyJPerKg, double outdoorDewPointC) =>
+        outdoorDryBulbC < _tR
+        && control.HighLimitAllows(outdoorDryBulbC, outdoorEnthalpyJPerKg, outdoorDewPointC, _tR, ReturnEnthalpyJPerKg, Settings.Limits);
+
+    /// <summary>The no-cooling hour: minimum outdoor air at the smallest supply flow, no coil load.</summary>
+    internal EconomizerHour NoCooling(double tO, double wO)
+    {
+        var hour = AtMinimum(0.0, tO, wO);
+        return hour with { Mode = EconomizerMode.NoCooling, CoilSensibleW = 0.0, CoilLatentW = 0.0 };
+    }
+
+    /// <summary>
+    /// The control's hour given the hour's load and its baseline (minimum outdoor air) result,
+    /// so that a loop over many controls computes the baseline once per hour.
+    /// </summary>
+    internal EconomizerHour Resolve(
+        EconomizerControl control,
+        double qb,
+        in EconomizerHour baseline,
+        double tO,
+        double wO,
+        double hO,
+        double dpO)
+    {
+        if (control.Kind == HighLimitKind.None || !IsEnabled(control, tO, hO, dpO))
+        {
+            return baseline;
+        }
+
+        var economizer = Enabled(qb, tO, wO);
+        if (!economizer.CoilRuns)
+        {
+            return economizer with { Mode = EconomizerMode.FreeCooling };
+        }
+
+        return control.Integrated ? economizer with { Mode = EconomizerMode.Integrated } : baseline;
+    }
+
+    /// <summary>Minimum outdoor air (x = x_min): the baseline, or a disabled or locked-out economizer.</summary>
+    internal EconomizerHour AtMinimum(double qb, double tO, double wO) => Solve(qb, tO, wO, economizer: false);
+
+    /// <summary>The economizer enabled: x = (T_r - T_s)/(T_r - T_o) clamped to [x_min, 1]; requires T_o &lt; T_r.</summary>
+    internal EconomizerHour Enabled(double qb, double tO, double wO) => Solve(qb, tO, wO, economizer: true);
+
+    private EconomizerHour Solve(double qb, double tO, double wO, bool economizer)
+    {
+        double wR = ReturnHumidityRatio;
+        double ratio = economizer ? (_tR - _tS) / (_tR - tO) : 0.0;
+        double mRequired = _variable ? qb / (_cpReturn * (_tR - _tS)) : 0.0;
+
+        // Fixed-point on the dry-air density: one pass for standard and site (constant
+        // density); for actual, a few passes until the mixed state's density stops moving.
+        double rho = _actual ? MoistAir.DryAirDensity(_tR, wR, SitePressurePa) : _fixedDensity;
+        double ms = 0, x = 0, tMix = 0, wMix = 0;
+        for (int pass = 0; pass < 8; pass++)
+        {
+            ms = _variable ? Math.Clamp(mRequired, rho * _vsMin, rho * _vs) : rho * _vs;
+            double xMin = Math.Min(1.0, rho * _voa / ms);
+            bool exact = false;
+            x = xMin;
+            if (economizer)
+            {
+                if (ratio >= 1.0)
+                {
+                    x = 1.0;
+                }
+                else if (ratio > xMin)
+                {
+                    x = ratio;
+                    exact = true;
+                }
+            }
+
+            // x at the unclamped ratio mixes to exactly T_s by construction.
+            tMix = exact ? _tS : x * tO + (1.0 - x) * _tR;
+            wMix = x * wO + (1.0 - x) * wR;
+            if (!_actual)
+            {
+                break;
+            }
+
+            double rhoNew = MoistAir.DryAirDensity(tMix, wMix, SitePressurePa);
+            if (Math.Abs(rhoNew - rho) <= 1e-12 * rho)
+            {
+                break;
+            }
+
+            rho = rhoNew;
+        }
+
+        double hMix = MoistAir.Enthalpy(tMix, wMix);
+        double wLeave = Math.Min(wMix, CoilLeavingHumidityLimit);
+        double dt = tMix - _tS;
+        double sensible = dt > TemperatureToleranceK ? ms * MoistAir.HumidSpecificHeat(wMix) * dt : 0.0;
+        double latent = wMix > wLeave ? ms * (wMix - wLeave) * _latentAtSupply : 0.0;
+        return new EconomizerHour(EconomizerMode.MinimumOutdoorAir, x, tMix, wMix, hMix, wLeave, ms, sensible, latent);
+    }
+}

@@ -1,0 +1,154 @@
+using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Core.Units;
+
+namespace BinEnergy.Core.Economizer;
+
+/// <summary>
+/// The air system whose economizer is evaluated (DESIGN 8): supply flow (constant, or variable
+/// between a minimum and a maximum), minimum outdoor airflow, flow basis, supply and return
+/// conditions, the building's sensible load line, the coil-leaving humidity limit, the
+/// controls to compare and their fixed high limits. <see cref="Validate"/> names every
+/// problem by key; <see cref="EconomizerModel"/> validates before it computes.
+/// </summary>
+public sealed record EconomizerSettings
+{
+    /// <summary>Supply airflow: the constant flow, or the maximum of a variable-volume system.</summary>
+    public required VolumeFlow SupplyAirflow { get; init; }
+
+    /// <summary>Minimum supply airflow of a variable-volume system; null for constant volume.</summary>
+    public VolumeFlow? SupplyAirflowMin { get; init; }
+
+    /// <summary>Minimum outdoor airflow (the ventilation the damper never goes below).</summary>
+    public required VolumeFlow MinOutdoorAirflow { get; init; }
+
+    /// <summary>
+    /// How the volume flows turn into mass flows of dry air (DESIGN 7.1): <c>standard</c>,
+    /// <c>site</c> (default), or <c>actual</c>, which for the economizer uses the dry-air
+    /// density of the coil-entering (mixed) state at the site pressure for both the supply
+    /// and the outdoor airflow.
+    /// </summary>
+    public FlowBasis FlowBasis { get; init; } = FlowBasis.Site;
+
+    /// <summary>Supply-air (coil-leaving) dry-bulb T_s.</summary>
+    public required Temperature SupplyTemperature { get; init; }
+
+    /// <summary>Return-air dry-bulb T_r.</summary>
+    public required Temperature ReturnTemperature { get; init; }
+
+    /// <summary>Return-air relative humidity, 0 to 1.</summary>
+    public required double ReturnRelativeHumidity { get; init; }
+
+    /// <summary>The building's sensible cooling load line.</summary>
+    public required BuildingLoadLine LoadLine { get; init; }
+
+    /// <summary>Relative humidity of the air leaving the cooling coil at its wettest, 0 to 1 (default 0.90).</summary>
+    public double CoilLeavingRelativeHumidity { get; init; } = 0.90;
+
+    /// <summary>The controls compared with the baseline (default: the five economizer controls, integrated).</summary>
+    public IReadOnlyList<EconomizerControl> Controls { get; init; } =
+        EconomizerControl.EconomizerKinds.Select(k => new EconomizerControl(k, Integrated: true)).ToArray();
+
+    /// <summary>The fixed high limits (default <see cref="HighLimits.Suggested"/>).</summary>
+    public HighLimits Limits { get; init; } = HighLimits.Suggested;
+
+    /// <summary>True when the supply flow varies with the load.</summary>
+    public bool IsVariableVolume => SupplyAirflowMin.HasValue;
+
+    /// <summary>True when the limits are the suggested defaults (recalled from memory), not the user's.</summary>
+    public bool LimitsAreSuggested => Limits == HighLimits.Suggested;
+
+    /// <summary>The same settings with every control made integrated or non-integrated.</summary>
+    public EconomizerSettings WithIntegration(bool integrated) =>
+        this with { Controls = Controls.Select(c => c with { Integrated = integrated }).ToArray() };
+
+    /// <summary>Every problem with these settings; empty when they describe a workable system.</summary>
+    public IReadOnlyList<EconomizerSettingsProblem> Problems()
+    {
+        var problems = new List<EconomizerSettingsProblem>();
+        void Add(string key, string message) => problems.Add(new(key, message));
+
+        double vs = SupplyAirflow.CubicMetresPerSecond;
+        if (!(vs > 0) || !double.IsFinite(vs))
+        {
+            Add("supply_airflow", "the supply airflow must be above zero");
+        }
+
+        double vsMin = SupplyAirflowMin?.CubicMetresPerSecond ?? vs;
+        if (SupplyAirflowMin.HasValue && !(vsMin > 0 && vsMin <= vs))
+        {
+            Add("supply_airflow_min", "the minimum supply airflow must be above zero and not above the (maximum) supply airflow");
+        }
+
+        double voa = MinOutdoorAirflow.CubicMetresPerSecond;
+        if (!(voa >= 0) || !double.IsFinite(voa))
+        {
+            Add("min_outdoor_airflow", "the minimum outdoor airflow must be zero or more");
+        }
+        else if (voa > vsMin * (1 + 1e-12))
+        {
+            Add("min_outdoor_airflow", SupplyAirflowMin.HasValue
+                ? "the minimum outdoor airflow is above the minimum supply airflow: the outdoor air is part of the supply air, so raise the minimum supply airflow or lower the outdoor airflow"
+                : "the minimum outdoor airflow is above the supply airflow: the outdoor air is part of the supply air");
+        }
+
+        if (!(ReturnTemperature.Celsius > SupplyTemperature.Celsius))
+        {
+            Add("supply_temp", "the supply temperature must be below the return temperature");
+        }
+
+        if (!(SupplyTemperature.Celsius >= 0 && SupplyTemperature.Celsius <= 30))
+        {
+            Add("supply_temp", "the supply temperature must be between 0 and 30 C (32 to 86 F) for a cooling coil");
+        }
+
+        if (!(ReturnTemperature.Celsius >= 5 && ReturnTemperature.Celsius <= 45))
+        {
+            Add("return_temp", "the return temperature must be between 5 and 45 C (41 to 113 F)");
+        }
+
+        if (!(ReturnRelativeHumidity >= 0 && ReturnRelativeHumidity < 1))
+        {
+            Add("return_rh", "the return relative humidity must be from 0 up to (not including) 100 %");
+        }
+
+        if (!(CoilLeavingRelativeHumidity > 0 && CoilLeavingRelativeHumidity <= 1))
+        {
+            Add("coil_leaving_rh", "the coil-leaving relative humidity must be above 0 and at most 100 %");
+        }
+
+        problems.AddRange(LoadLine.Problems());
+
+        if (Controls.Count == 0)
+        {
+            Add("controls", "name at least one control to compare with the baseline");
+        }
+
+        var seen = new HashSet<string>();
+        foreach (var c in Controls)
+        {
+            if (!seen.Add(c.Describe()))
+            {
+                Add("controls", $"the control {c.Describe()} is listed twice");
+            }
+        }
+
+        if (!(Limits.DewPoint.Celsius <= Limits.DryBulb.Celsius))
+        {
+            Add("high_limit_dewpoint", "the dew-point limit is above the dry-bulb limit, so it can never act; lower it");
+        }
+
+        return problems;
+    }
+
+    /// <summary>Throws <see cref="EconomizerSettingsException"/> listing every problem, or returns these settings.</summary>
+    public EconomizerSettings Validate()
+    {
+        var problems = Problems();
+        if (problems.Count > 0)
+        {
+            throw new EconomizerSettingsException(problems);
+        }
+
+        return this;
+    }
+}

@@ -1,0 +1,55 @@
+using BinEnergy.Core.Units;
+
+namespace BinEnergy.Core.Economizer;
+
+/// <summary>
+/// Hours per mode and coil energy of one control over a set of occupied hours (a year, a month
+/// or a bin), by one integration method. Hours are fractional only in the bin method's joint
+/// or weighted forms; the hourly method counts whole hours.
+/// </summary>
+/// <param name="HoursNoCooling">Occupied hours with no cooling needed.</param>
+/// <param name="HoursFree">Hours of free cooling (economizer on, coil off).</param>
+/// <param name="HoursIntegrated">Hours of integrated operation (economizer on, coil trimming).</param>
+/// <param name="HoursMinimum">Hours at minimum outdoor air (disabled, locked out, or no economizer).</param>
+/// <param name="CoilSensible">Sensible coil energy.</param>
+/// <param name="CoilLatent">Latent coil energy.</param>
+public sealed record EconomizerTotals(
+    double HoursNoCooling,
+    double HoursFree,
+    double HoursIntegrated,
+    double HoursMinimum,
+    Energy CoilSensible,
+    Energy CoilLatent)
+{
+    /// <summary>No hours, no energy.</summary>
+    public static EconomizerTotals Zero { get; } = new(0, 0, 0, 0, Energy.FromJoules(0), Energy.FromJoules(0));
+
+    /// <summary>Total coil energy: sensible plus latent.</summary>
+    public Energy CoilTotal => CoilSensible + CoilLatent;
+
+    /// <summary>All occupied hours (the four modes sum to them).</summary>
+    public double Hours => HoursNoCooling + HoursFree + HoursIntegrated + HoursMinimum;
+
+    /// <summary>Hours in one mode.</summary>
+    public double HoursIn(EconomizerMode mode) => mode switch
+    {
+        EconomizerMode.NoCooling => HoursNoCooling,
+        EconomizerMode.FreeCooling => HoursFree,
+        EconomizerMode.Integrated => HoursIntegrated,
+        EconomizerMode.MinimumOutdoorAir => HoursMinimum,
+        _ => throw new ArgumentOutOfRangeException(nameof(mode), mode, "unknown mode"),
+    };
+
+    /// <summary>
+    /// Coil energy saved against <paramref name="baseline"/> (baseline minus this). Negative
+    /// when this control adds coil energy; never clipped.
+    /// </summary>
+    public Energy SavingsAgainst(EconomizerTotals baseline) => baseline.CoilTotal - CoilTotal;
+
+    /// <summary>Savings as a percentage of the baseline coil energy; null when the baseline has none.</summary>
+    public double? SavingsPercentAgainst(EconomizerTotals baseline) =>
+        baseline.CoilTotal.Joules > 0 ? SavingsAgainst(baseline).Joules / baseline.CoilTotal.Joules * 100.0 : null;
+
+    /// <summary>Latent coil energy saved against <paramref name="baseline"/>; negative when this control adds latent load.</summary>
+    public Energy LatentSavingsAgainst(EconomizerTotals baseline) => baseline.CoilLatent - CoilLatent;
+}
