@@ -22,6 +22,9 @@ public sealed record PlantSettings(
     double HumidifierEfficiency,
     IReadOnlyDictionary<Fuel, FuelTariff> Tariffs)
 {
+    /// <summary>Heat content of the oil, J per US gallon (default 138,500 Btu/gal, recalled from memory).</summary>
+    public double OilJoulesPerGallon { get; init; } = FuelUnits.DefaultOilBtuPerGallon * Units.Conversions.JoulesPerBtu;
+
     /// <summary>The fuel the heating source buys.</summary>
     public Fuel HeatingFuel => Heating switch
     {

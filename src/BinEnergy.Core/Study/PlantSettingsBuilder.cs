@@ -57,7 +57,10 @@ internal static class PlantSettingsBuilder
             [Fuel.Gas] = new(plant.Number("price_gas") ?? 0, plant.Number("carbon_gas") ?? 0),
             [Fuel.Oil] = new((plant.Number("price_oil") ?? 0) / oilJPerGallon, (plant.Number("carbon_oil") ?? 0) / oilJPerGallon),
         };
-        return new PlantSettings(heating, efficiency, heatPump, cooling, fan, plant.Number("humidifier_efficiency") ?? 1.0, tariffs);
+        return new PlantSettings(heating, efficiency, heatPump, cooling, fan, plant.Number("humidifier_efficiency") ?? 1.0, tariffs)
+        {
+            OilJoulesPerGallon = oilJPerGallon,
+        };
     }
 
     private static PerformanceCurve? Curve(StudySection plant, string name)
