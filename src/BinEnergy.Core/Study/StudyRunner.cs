@@ -92,8 +92,14 @@ public static class StudyRunner
 
         // Hourly method: hour by hour, through the same load model.
         var hourlyClamps = new CurveClampCounter();
-        var (annualHourly, months, hours) = HourByHour(c, weather, flags, plant, hourlyClamps, keepHours);
-        CheckAgainstCalculator(annualHourly, result.Hourly);
+        var (hourlySums, monthSums, hours) = HourByHour(c, weather, flags, plant, hourlyClamps, keepHours);
+        CheckAgainstCalculator(hourlySums, result.Hourly);
+
+        // The load columns are the engine's own totals (bit for bit what the outdoor-air command
+        // reports); the energy bought is summed where the temperature was known.
+        annualBin = WithLoads(annualBin, result.Bin);
+        var annualHourly = WithLoads(hourlySums, result.Hourly);
+        var months = monthSums.Select(m => (m.Month, WithLoads(m.Figures, result.Months.Single(x => x.Month == m.Month).Totals))).ToList();
 
         var warnings = new List<string>(result.Warnings);
         if (clamps.CoolingHours > 0 || hourlyClamps.CoolingHours > 0)
@@ -145,12 +151,24 @@ public static class StudyRunner
             t.RecoveredHeating.Joules, t.RecoveredCooling.Joules, t.FanEnergy.Joules, heating, cooling, other);
     }
 
+    private static LoadFigures WithLoads(LoadFigures f, OutdoorAirTotals t) => f with
+    {
+        HoursVentilated = t.HoursVentilated,
+        HeatingJ = t.Heating.Joules,
+        CoolingSensibleJ = t.CoolingSensible.Joules,
+        CoolingLatentJ = t.CoolingLatent.Joules,
+        HumidificationJ = t.Humidification.Joules,
+        RecoveredHeatingJ = t.RecoveredHeating.Joules,
+        RecoveredCoolingJ = t.RecoveredCooling.Joules,
+        FanJ = t.FanEnergy.Joules,
+    };
+
     private static LoadFigures Add(LoadFigures a, LoadFigures b) => new(
         a.HoursVentilated + b.HoursVentilated, a.HeatingJ + b.HeatingJ, a.CoolingSensibleJ + b.CoolingSensibleJ, a.CoolingLatentJ + b.CoolingLatentJ,
         a.HumidificationJ + b.HumidificationJ, a.RecoveredHeatingJ + b.RecoveredHeatingJ, a.RecoveredCoolingJ + b.RecoveredCoolingJ, a.FanJ + b.FanJ,
         a.HeatingSite + b.HeatingSite, a.CoolingSite + b.CoolingSite, a.OtherSite + b.OtherSite);
 
-    private static (LoadFigures Annual, List<(int, LoadFigures)> Months, List<LoadFigures>? Hours) HourByHour(
+    private static (LoadFigures Annual, List<(int Month, LoadFigures Figures)> Months, List<LoadFigures>? Hours) HourByHour(
         StudyCase c, HourlyWeather weather, bool[] flags, PlantModel plant, CurveClampCounter clamps, bool keepHours)
     {
         var s = c.OutdoorAir;
@@ -191,7 +209,7 @@ public static class StudyRunner
             hours?.Add(figures);
         }
 
-        var months = new List<(int, LoadFigures)>();
+        var months = new List<(int Month, LoadFigures Figures)>();
         for (int m = 0; m < 12; m++)
         {
             if (monthSums[m].HoursVentilated > 0)
