@@ -14,6 +14,26 @@ internal static class CommandRegistry
             .WithExample("air", "--drybulb", "95", "--wetbulb", "75", "--elevation", "5000")
             .WithExample("air", "--drybulb", "30", "--rh", "40", "--units", "si", "--json");
 
+        config.AddCommand<InspectCommand>("inspect")
+            .WithData(output)
+            .WithDescription("Reads a weather file: hours, site, pressure, dry-bulb, degree-days, design conditions and data repairs.")
+            .WithExample("inspect", "weather.csv")
+            .WithExample("inspect", "725300TYA.CSV", "--map", "tmy3", "--units", "si", "--json");
+
+        config.AddCommand<ConvertCommand>("convert")
+            .WithData(output)
+            .WithDescription("Reads a weather file through a column map and writes it in the open CSV layout.")
+            .WithExample("convert", "725300TYA.CSV", "--map", "tmy3", "--out", "chicago.csv");
+
+        config.AddCommand<EconomizerCommand>("economizer")
+            .WithData(output)
+            .WithDescription("Economizer controls side by side with the baseline (no economizer): hours per mode, coil energy and savings, by bin and hourly.")
+            .WithExample("economizer", "weather.csv", "--supply-airflow", "10000", "--min-outdoor-airflow", "2000", "--supply-temp", "55",
+                "--return-temp", "75", "--return-rh", "50", "--design-load", "216000", "--design-outdoor", "95", "--balance-point", "45")
+            .WithExample("economizer", "722040TYA.CSV", "--map", "tmy3", "--units", "si", "--supply-airflow", "4700", "--supply-airflow-min", "1900",
+                "--min-outdoor-airflow", "950", "--supply-temp", "13", "--return-temp", "24", "--return-rh", "50", "--design-load", "63",
+                "--design-outdoor", "35", "--balance-point", "7", "--occupied", "Mon-Fri 07:00-19:00", "--json");
+
         config.AddCommand<RunCommand>("run")
             .WithData(output)
             .WithDescription("Run a study file: every climate x variant, into tables (Parquet, CSV) and summary.json.")

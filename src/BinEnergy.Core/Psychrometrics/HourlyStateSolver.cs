@@ -37,6 +37,12 @@ internal static class HourlyStateSolver
         return MoistAir.DewPointFromVapourPressure(vapourPressurePa);
     }
 
+    /// <summary>Dew point in C from humidity ratio (eq. 20 inverted, then eqs. 5 and 6), never above the dry-bulb; -100 C for dry air.</summary>
+    public static double DewPoint(double humidityRatio, double pressurePa, double dryBulbC) =>
+        humidityRatio > 0
+            ? Math.Min(DewPointFromVapourPressure(MoistAir.VapourPressureFromHumidityRatio(humidityRatio, pressurePa)), dryBulbC)
+            : Saturation.MinTemperatureC;
+
     /// <summary>
     /// Thermodynamic wet-bulb in C from dry-bulb, humidity ratio and pressure, given the dew point
     /// (the lower end of the bracket): eqs. 33 (t* at or above 0 C) and 35 (below) solved for t*.

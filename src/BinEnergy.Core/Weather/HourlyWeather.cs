@@ -29,32 +29,8 @@ public sealed class HourlyWeather
         double[] pressurePa,
         QualityReport quality,
         CalendarInfo calendarYear)
+        : this(site, times, dryBulbC, humidityRatio, pressurePa, DewPoints(times.Length, dryBulbC, humidityRatio, pressurePa), quality, calendarYear)
     {
-        int n = times.Length;
-        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n)
-        {
-            throw new ArgumentException("all hourly columns must have the same length");
-        }
-
-        Site = site;
-        Times = times;
-        DryBulbC = dryBulbC;
-        HumidityRatio = humidityRatio;
-        PressurePa = pressurePa;
-        Quality = quality;
-        Calendar = calendarYear;
-        DewPointC = new double[n];
-        WetBulbC = new double[n];
-        EnthalpyJPerKg = new double[n];
-        for (int i = 0; i < n; i++)
-        {
-            double w = humidityRatio[i];
-            DewPointC[i] = w > 0
-                ? Math.Min(HourlyStateSolver.DewPointFromVapourPressure(MoistAir.VapourPressureFromHumidityRatio(w, pressurePa[i])), dryBulbC[i])
-                : Saturation.MinTemperatureC;
-        }
-
-        FillWetBulbAndEnthalpy();
     }
 
     /// <summary>Builds a record whose dew points are already known (the reader's path: no dew-point solve).</summary>
@@ -87,6 +63,23 @@ public sealed class HourlyWeather
         FillWetBulbAndEnthalpy();
     }
 
+    /// <summary>Dew point of every hour from its humidity ratio (eq. 20 inverted, then eqs. 5 and 6), never above the dry-bulb.</summary>
+    private static double[] DewPoints(int n, double[] dryBulbC, double[] humidityRatio, double[] pressurePa)
+    {
+        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n)
+        {
+            throw new ArgumentException("all hourly columns must have the same length");
+        }
+
+        var dewPoint = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            dewPoint[i] = HourlyStateSolver.DewPoint(humidityRatio[i], pressurePa[i], dryBulbC[i]);
+        }
+
+        return dewPoint;
+    }
+
     /// <summary>Wet-bulb (eqs. 33 and 35 solved, from the dew point up) and enthalpy (eq. 32) of every hour.</summary>
     private void FillWetBulbAndEnthalpy()
     {
@@ -112,6 +105,9 @@ public sealed class HourlyWeather
 
     /// <summary>Humidity ratio per hour, kg/kg.</summary>
     public double[] HumidityRatio { get; }
+
+    /// <summary>True when <see cref="PressurePa"/> is the file's own pressure column; false when every hour carries the site pressure.</summary>
+    public bool HourlyPressureFromRecord { get; init; }
 
     /// <summary>Station pressure per hour, Pa.</summary>
     public double[] PressurePa { get; }

@@ -76,6 +76,14 @@ internal static class WeatherFileParser
             using var gz = new GZipStream(input, CompressionMode.Decompress);
             using var output = new MemoryStream(data.Length * 4);
             gz.CopyTo(output);
+
+            // The gzip trailer ends with the uncompressed size mod 2^32 (RFC 1952, ISIZE): a file cut short fails this check.
+            uint size = data.Length >= 18 ? BitConverter.ToUInt32(data, data.Length - 4) : uint.MaxValue;
+            if (size != (uint)output.Length)
+            {
+                throw new InvalidDataException("the size in the gzip trailer does not match the data");
+            }
+
             return output.ToArray();
         }
         catch (InvalidDataException e)

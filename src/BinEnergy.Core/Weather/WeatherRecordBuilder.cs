@@ -272,7 +272,7 @@ internal static class WeatherRecordBuilder
                     }
 
                     w[i] = v;
-                    dewPoint[i] = v > 0 ? Math.Min(HourlyStateSolver.DewPointFromVapourPressure(MoistAir.VapourPressureFromHumidityRatio(v, p)), t) : Saturation.MinTemperatureC;
+                    dewPoint[i] = HourlyStateSolver.DewPoint(v, p, t);
                     break;
                 case WeatherQuantity.WetBulb:
                     if (v > t)
@@ -295,7 +295,7 @@ internal static class WeatherRecordBuilder
                     }
 
                     w[i] = fromWetBulb;
-                    dewPoint[i] = w[i] > 0 ? Math.Min(HourlyStateSolver.DewPointFromVapourPressure(MoistAir.VapourPressureFromHumidityRatio(w[i], p)), t) : Saturation.MinTemperatureC;
+                    dewPoint[i] = HourlyStateSolver.DewPoint(w[i], p, t);
                     break;
                 default:
                     double pw = v / 100.0 * Saturation.VapourPressurePa(t);
@@ -305,7 +305,10 @@ internal static class WeatherRecordBuilder
             }
         }
 
-        var weather = new HourlyWeather(site, times, dryBulb, w, pressure, dewPoint, quality, new CalendarInfo(calendarYear, typical, calendarNote));
+        var weather = new HourlyWeather(site, times, dryBulb, w, pressure, dewPoint, quality, new CalendarInfo(calendarYear, typical, calendarNote))
+        {
+            HourlyPressureFromRecord = pressureColumn is not null,
+        };
         CheckSecondaryMeasures(weather, columns, primary, gridLine, typical, quality);
         return weather;
     }
@@ -347,7 +350,7 @@ internal static class WeatherRecordBuilder
 
                 if (Math.Abs(col[i] - expected) > tolerance)
                 {
-                    quality.Count(key, Inv($"{Where(gridLine[i], weather.Times[i], typical)}: {WeatherFileParser.Describe(q)} {col[i]:0.####} {unit} in the file, {expected:0.####} {unit} from the {against}"));
+                    quality.Count(key, Inv($"{Where(gridLine[i], weather.Times[i], typical)}: {WeatherFileParser.Describe(q)} {col[i]:0.###} {unit} in the file, {expected:0.###} {unit} from the {against}"));
                 }
             }
         }

@@ -1,0 +1,92 @@
+using System.ComponentModel;
+using System.IO.Compression;
+using BinEnergy.Core.Weather;
+using Spectre.Console;
+using Spectre.Console.Cli;
+
+namespace BinEnergy.Cli.Commands;
+
+/// <summary><c>binenergy convert</c>: reads a weather file (through a map) and writes it in the open CSV layout.</summary>
+public sealed class ConvertCommand : Command<ConvertCommand.Settings>
+{
+    public sealed class Settings : WeatherFileSettings
+    {
+        [CommandOption("--out <FILE>")]
+        [Description("The open-layout file to write (.csv, or .csv.gz to compress). Required.")]
+        public string? Out { get; init; }
+    }
+
+    public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
+    {
+        var output = (CommandOutput)context.Data!;
+        if (string.IsNullOrWhiteSpace(settings.Out))
+        {
+            throw new UsageException("--out FILE.csv is required: the open-layout file to write");
+        }
+
+        string target = Path.GetFullPath(settings.Out);
+        if (string.Equals(target, Path.GetFullPath(settings.Weather), StringComparison.Ordinal))
+        {
+            throw new UsageException("--out must differ from the input file");
+        }
+
+        var options = settings.ReadOptions(settings.UnitSystem);
+        var weather = WeatherReader.Read(settings.Weather, options);
+        var comments = new List<string>
+        {
+            "source: " + Path.GetFileName(settings.Weather) + " read with the " + (options.Map?.Source ?? "open layout"),
+            "calendar: " + weather.Calendar.Note,
+        };
+        if (weather.Calendar.IsTypicalYear)
+        {
+            comments.Add("typical_year: true");
+        }
+
+        comments.Add("repairs: " + (weather.Quality.Counts.Count == 0 ? "none" : string.Join(", ", weather.Quality.Counts.Select(kv => kv.Key + " " + kv.Value))));
+        comments.AddRange(weather.Quality.Warnings.Select(w => "note: " + w));
+
+        // Written to a temporary name beside the target, then moved: a failure leaves no half-written file.
+        string? dir = Path.GetDirectoryName(target);
+        if (dir is not null && !Directory.Exists(dir))
+        {
+            throw new UsageException($"the folder of --out does not exist: {dir}");
+        }
+
+        string temp = target + ".tmp-" + Environment.ProcessId;
+        try
+        {
+            using (var file = File.Create(temp))
+            using (Stream stream = target.EndsWith(".gz", StringComparison.OrdinalIgnoreCase) ? new GZipStream(file, CompressionLevel.Optimal) : file)
+            using (var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(false)) { NewLine = "\n" })
+            {
+                OpenLayoutWriter.Write(weather, writer, comments);
+            }
+
+            File.Move(temp, target, overwrite: true);
+        }
+        finally
+        {
+            if (File.Exists(temp))
+            {
+                File.Delete(temp);
+            }
+        }
+
+        if (settings.Json)
+        {
+            output.WriteJson(new Dictionary<string, object?>
+            {
+                ["out"] = settings.Out,
+                ["hours"] = weather.Count,
+                ["calendar"] = weather.Calendar.Note,
+                ["repairs"] = weather.Quality.Counts.ToDictionary(kv => kv.Key, kv => kv.Value),
+            });
+        }
+        else
+        {
+            output.Console.WriteLine($"Wrote {weather.Count} hours of {weather.Site.Name} to {settings.Out} in the open layout ({weather.Quality.TotalRepairs} repairs counted; see binenergy inspect).");
+        }
+
+        return ExitCodes.Ok;
+    }
+}

@@ -1,0 +1,157 @@
+using System.Text.Json;
+using BinEnergy.Tests.Weather;
+
+namespace BinEnergy.Tests.Cli;
+
+/// <summary>The <c>economizer</c> command end to end on a real check file (Melbourne FL, NREL TMY3, through the tmy3 map).</summary>
+public class EconomizerCommandTests
+{
+    private static readonly string Melbourne = TestData.Open("722040TYA.CSV");
+
+    private static readonly string[] System =
+    [
+        "--supply-airflow", "10000", "--supply-airflow-min", "3000", "--min-outdoor-airflow", "2000",
+        "--supply-temp", "55", "--return-temp", "75", "--return-rh", "50",
+        "--design-load", "216000", "--design-outdoor", "95", "--balance-point", "50", "--occupied", "Mon-Fri 07:00-19:00",
+    ];
+
+    private static (int Code, string Out, string Err) Run(params string[] args) => AirCommandTests.Run(args);
+
+    private static string[] Args(params string[] extra) => ["economizer", Melbourne, "--map", "tmy3", .. System, .. extra];
+
+    [Fact]
+    public void Json_HasTheContractFields_AndReportsNegativeSavings()
+    {
+        var (code, output, err) = Run(Args("--json", "--controls", "none,fixed-drybulb,differential-drybulb,fixed-enthalpy,differential-enthalpy,fixed-dewpoint"));
+        Assert.Equal(0, code);
+        Assert.Equal("", err);
+        using var doc = JsonDocument.Parse(output);
+        var root = doc.RootElement;
+        string[] fields = ["hours_no_cooling", "hours_free", "hours_integrated", "hours_minimum", "coil_sensible", "coil_latent", "coil_total", "savings", "savings_pct"];
+        var controls = root.GetProperty("controls");
+        foreach (var name in new[] { "none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint" })
+        {
+            foreach (var method in new[] { "bin", "hourly" })
+            {
+                var m = controls.GetProperty(name).GetProperty(method);
+                foreach (var f in fields)
+                {
+                    Assert.Equal(JsonValueKind.Number, m.GetProperty(f).ValueKind);
+                }
+
+                double hours = m.GetProperty("hours_no_cooling").GetDouble() + m.GetProperty("hours_free").GetDouble()
+                    + m.GetProperty("hours_integrated").GetDouble() + m.GetProperty("hours_minimum").GetDouble();
+                Assert.Equal(root.GetProperty("hours_occupied").GetInt32(), hours, 9);
+            }
+
+            Assert.Equal(12, controls.GetProperty(name).GetProperty("monthly").GetArrayLength());
+        }
+
+        foreach (var f in fields)
+        {
+            Assert.Equal(JsonValueKind.Number, root.GetProperty("baseline").GetProperty("hourly").GetProperty(f).ValueKind);
+        }
+
+        // Hot-humid site: the dry-bulb control's savings are negative and stay negative in the output.
+        Assert.True(controls.GetProperty("differential-drybulb").GetProperty("hourly").GetProperty("savings").GetDouble() < 0);
+        Assert.True(controls.GetProperty("differential-drybulb").GetProperty("hourly").GetProperty("savings_pct").GetDouble() < 0);
+        Assert.Equal(0.0, controls.GetProperty("none").GetProperty("hourly").GetProperty("savings").GetDouble());
+        var bins = root.GetProperty("bins");
+        Assert.True(bins.GetArrayLength() > 10);
+        var bin = bins[bins.GetArrayLength() / 2];
+        foreach (var f in new[] { "bin_low", "bin_high", "bin_mid", "hours_occupied" })
+        {
+            Assert.Equal(JsonValueKind.Number, bin.GetProperty(f).ValueKind);
+        }
+
+        Assert.True(bin.GetProperty("controls").GetProperty("baseline").GetProperty("hourly").TryGetProperty("coil_total", out _));
+        Assert.True(bin.GetProperty("controls").GetProperty("fixed-dewpoint").GetProperty("bin").TryGetProperty("hours_free", out _));
+        Assert.Contains(root.GetProperty("assumptions").EnumerateArray(), a => a.GetString()!.Contains("recalled from memory"));
+        Assert.Equal("kBtu", root.GetProperty("units").GetProperty("energy").GetString());
+    }
+
+    [Fact]
+    public void Table_ShowsControlsBinsAssumptionsAndTheCaution()
+    {
+        var (code, output, err) = Run(Args());
+        Assert.Equal(0, code);
+        Assert.Equal("", err);
+        Assert.Contains("Controls against the baseline", output);
+        Assert.Contains("Bin method against the hourly sum", output);
+        Assert.Contains("Modes by bin, best control: differential-enthalpy (integrated)", output);
+        Assert.Contains("Negative savings", output);
+        Assert.Contains("recalled from memory", output);
+        Assert.Contains("energy code adopted locally governs", output);
+        Assert.Contains("licensed engineer", output);
+    }
+
+    [Fact]
+    public void EnthalpyLimit_InSi_ConvertsThroughTheDatum()
+    {
+        // 28 Btu/lb (0 F datum) = 47.24 kJ/kg (0 C datum) (SpecificEnthalpy; eq. 32 coefficients): the same fixed-enthalpy
+        // hours in IP and SI. With 65.1 kJ/kg (the bare 2.326 factor, a common error) the limit would never act.
+        string[] si = ["economizer", Melbourne, "--map", "tmy3", "--units", "si", "--supply-airflow", "4719.47", "--supply-airflow-min", "1415.84",
+            "--min-outdoor-airflow", "943.89", "--supply-temp", "12.7778", "--return-temp", "23.8889", "--return-rh", "50", "--design-load", "63.3035",
+            "--design-outdoor", "35", "--balance-point", "10", "--occupied", "Mon-Fri 07:00-19:00", "--controls", "fixed-enthalpy", "--json"];
+        double Hours(string[] args, string limit)
+        {
+            var (code, output, err) = Run([.. args, "--high-limit-enthalpy", limit]);
+            Assert.True(code == 0, err);
+            using var doc = JsonDocument.Parse(output);
+            return doc.RootElement.GetProperty("controls").GetProperty("fixed-enthalpy").GetProperty("hourly").GetProperty("hours_integrated").GetDouble();
+        }
+
+        double ip = Hours(Args("--json", "--controls", "fixed-enthalpy"), "28");
+        Assert.Equal(ip, Hours(si, "47.24"), 0);
+        Assert.True(Hours(si, "65.1") > ip + 100, "a limit converted by the bare factor lets in far more hours");
+    }
+
+    [Theory]
+    [InlineData("--supply-airflow", "--supply-airflow is required")]
+    [InlineData("--return-rh", "--return-rh is required")]
+    public void MissingOption_IsAUsageError(string option, string message)
+    {
+        var args = Args().ToList();
+        int i = args.IndexOf(option);
+        args.RemoveRange(i, 2);
+        var (code, _, err) = Run([.. args]);
+        Assert.Equal(2, code);
+        Assert.Contains(message, err);
+        Assert.DoesNotContain("   at ", err);
+    }
+
+    [Theory]
+    [InlineData(new[] { "--controls", "enthalpy" }, "'enthalpy' is not a control")]
+    [InlineData(new[] { "--min-outdoor-airflow", "5000" }, "--min-outdoor-airflow: the minimum outdoor airflow is above the minimum supply airflow")]
+    [InlineData(new[] { "--supply-temp", "80" }, "--supply-temp: the supply temperature must be below the return temperature")]
+    [InlineData(new[] { "--occupied", "Mon-Fri 07:00-25:00" }, "--occupied")]
+    [InlineData(new[] { "--flow-basis", "metric" }, "--flow-basis must be site, standard or actual")]
+    [InlineData(new[] { "--balance-point", "99" }, "--design-outdoor: the design outdoor temperature must be above the balance point")]
+    public void BadOption_IsAUsageErrorNamingTheOption(string[] replace, string message)
+    {
+        var args = Args().ToList();
+        int i = args.IndexOf(replace[0]);
+        if (i >= 0)
+        {
+            args[i + 1] = replace[1];
+        }
+        else
+        {
+            args.AddRange(replace);
+        }
+
+        var (code, output, err) = Run([.. args]);
+        Assert.Equal(2, code);
+        Assert.Contains(message, err);
+        Assert.Equal("", output);
+    }
+
+    [Fact]
+    public void MissingWeatherFile_IsBadInput()
+    {
+        var (code, output, err) = Run(["economizer", "no-such-file.csv", .. System]);
+        Assert.Equal(3, code);
+        Assert.Contains("no-such-file.csv", err);
+        Assert.Equal("", output);
+    }
+}
