@@ -41,6 +41,9 @@ public sealed record StudyCaseResult
     /// <summary>Economizer figures per method and control (baseline <c>none</c> first); empty without an economizer.</summary>
     public required IReadOnlyList<EconomizerFigures> Economizer { get; init; }
 
+    /// <summary>The economizer engine's own evaluation (identical to the <c>economizer</c> command's), or null without an economizer.</summary>
+    public Economizer.EconomizerEvaluation? EconomizerEvaluation { get; init; }
+
     /// <summary>Peak outdoor-air loads at the design conditions.</summary>
     public required IReadOnlyList<PeakFigures> Peaks { get; init; }
 

@@ -1,5 +1,6 @@
 using System.Reflection;
 using BinEnergy.Core.Binning;
+using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Plant;
 using BinEnergy.Core.Psychrometrics;
@@ -101,6 +102,18 @@ public static class StudyRunner
         var annualHourly = WithLoads(hourlySums, result.Hourly);
         var months = monthSums.Select(m => (m.Month, WithLoads(m.Figures, result.Months.Single(x => x.Month == m.Month).Totals))).ToList();
 
+        EconomizerEvaluation? evaluation;
+        List<EconomizerFigures> economizer;
+        try
+        {
+            (evaluation, economizer) = StudyEconomizer.Evaluate(c, weather, flags, table, plant, hourlyClamps);
+        }
+        catch (EconomizerSettingsException e)
+        {
+            var p = e.Problems[0];
+            throw new StudyFileException(c.Climate.Name, null, "economizer." + p.Key, p.Message);
+        }
+
         var warnings = new List<string>(result.Warnings);
         if (clamps.CoolingHours > 0 || hourlyClamps.CoolingHours > 0)
         {
@@ -130,8 +143,9 @@ public static class StudyRunner
             Bins = bins,
             Hours = hours,
             Occupied = flags,
-            Economizer = [],
-            Peaks = [],
+            Economizer = economizer,
+            EconomizerEvaluation = evaluation,
+            Peaks = StudyPeaks.Compute(settings, weather),
             Clamps = hourlyClamps,
             Warnings = warnings,
         };

@@ -119,6 +119,49 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void ExampleStudy_ReproducesTheEconomizerCommandExactly()
+    {
+        string out1 = Path.Combine(folder, "out");
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
+        Assert.True(code == 0, err);
+        var rows = ReadCsv(Path.Combine(out1, "tables", "economizer.csv"));
+
+        // The [economizer] table of the example, given to the economizer command.
+        var (code2, json, err2) = Cli("economizer", Path.Combine(folder, "harbor.csv"), "--supply-airflow", "10000", "--min-outdoor-airflow", "2000",
+            "--supply-temp", "55", "--return-temp", "75", "--return-rh", "50", "--design-load", "300000", "--design-outdoor", "95",
+            "--balance-point", "55", "--occupied", "Mon-Fri 07:00-19:00; Sat 08:00-13:00", "--high-limit-drybulb", "75",
+            "--high-limit-enthalpy", "28", "--high-limit-dewpoint", "55", "--json");
+        Assert.True(code2 == 0, err2);
+        using var doc = JsonDocument.Parse(json);
+        var controls = doc.RootElement.GetProperty("controls");
+        string[] names = ["none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"];
+        Assert.Equal(names.Length * 2 * 3, rows.Count); // controls x methods x variants (the economizer does not depend on the ventilation variants here)
+        foreach (var variant in new[] { "minimum", "plus-30", "no-recovery" })
+        {
+            foreach (var name in names)
+            {
+                var command = name == "none" ? doc.RootElement.GetProperty("baseline") : controls.GetProperty(name);
+                foreach (var method in new[] { "bin", "hourly" })
+                {
+                    var expected = command.GetProperty(method);
+                    var row = rows.Single(r => r["variant"] == variant && r["control"] == name && r["method"] == method);
+                    Assert.Equal(expected.GetProperty("hours_free").GetDouble(), D(row["hours_free"]));
+                    Assert.Equal(expected.GetProperty("hours_integrated").GetDouble(), D(row["hours_integrated"]));
+                    Assert.Equal(expected.GetProperty("hours_minimum").GetDouble(), D(row["hours_minimum"]));
+                    Assert.Equal(expected.GetProperty("coil_total").GetDouble(), D(row["coil_total_kbtu"]));
+                    Assert.Equal(expected.GetProperty("savings").GetDouble(), D(row["savings_kbtu"]));
+                }
+            }
+        }
+
+        // Compressor energy is the coil energy through the cooling COP (between 2.6 and 4.2 in the example): a bracket check.
+        var baseline = rows.Single(r => r["variant"] == "minimum" && r["control"] == "none" && r["method"] == "bin");
+        double coilKwh = D(baseline["coil_total_kbtu"]) * 1000 / 3412.14; // 1 kWh = 3412.14 Btu (DESIGN 3)
+        Assert.InRange(D(baseline["compressor_kwh"]), coilKwh / 4.2, coilKwh / 2.6);
+        Assert.Equal(D(baseline["compressor_kwh"]) * 0.14, D(baseline["compressor_cost_usd"]), 6);
+    }
+
+    [Fact]
     public void ParquetTables_ReadByDuckDb_MatchCsvAndSummary()
     {
         string out1 = Path.Combine(folder, "out");
@@ -129,8 +172,8 @@ public sealed class StudyRunTests : IDisposable
             ["annual"] = ["hours_ventilated", "heating_kbtu", "cooling_latent_kbtu", "cost_usd", "carbon_kg"],
             ["bins"] = ["hours", "hours_occupied", "heating_kbtu"],
             ["monthly"] = ["month", "heating_kbtu", "electricity_kwh"],
-            ["economizer"] = [],
-            ["peaks"] = [],
+            ["economizer"] = ["hours_free", "coil_total_kbtu", "savings_cost_usd"],
+            ["peaks"] = ["drybulb_f", "total_btuh"],
             ["hourly"] = ["occupied", "heating_kbtu"],
         };
         var duck = NodeReference.Run<Dictionary<string, DuckTable>>("duckdb-tables.mjs", new { folder = out1, sums });
