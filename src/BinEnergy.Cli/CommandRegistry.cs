@@ -25,6 +25,20 @@ internal static class CommandRegistry
             .WithDescription("Reads a weather file through a column map and writes it in the open CSV layout.")
             .WithExample("convert", "725300TYA.CSV", "--map", "tmy3", "--out", "chicago.csv");
 
+        config.AddCommand<BinsCommand>("bins")
+            .WithData(output)
+            .WithDescription("The dry-bulb bin table of a weather file: hours (occupied and not), mean coincident humidity ratio, wet-bulb and enthalpy.")
+            .WithExample("bins", "weather.csv", "--occupied", "Mon-Fri 07:00-19:00; Sat 08:00-13:00")
+            .WithExample("bins", "725300TYA.CSV", "--map", "tmy3", "--by", "month", "--csv")
+            .WithExample("bins", "weather.csv", "--joint", "--units", "si", "--json");
+
+        config.AddCommand<OutdoorAirCommand>("outdoor-air")
+            .WithData(output)
+            .WithDescription("Annual outdoor-air heating, cooling and dehumidification of one airflow: bin method, hourly check, peaks, assumptions.")
+            .WithExample("outdoor-air", "weather.csv", "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60")
+            .WithExample("outdoor-air", "723650TYA.CSV", "--map", "tmy3", "--airflow", "2000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--occupied", "Mon-Fri 07:00-19:00", "--recovery-sensible", "0.75", "--recovery-pressure", "0.8")
+            .WithExample("outdoor-air", "weather.csv", "--airflow", "500", "--heat-to", "21", "--cool-to", "24", "--max-rh", "60", "--units", "si", "--json");
+
         config.AddCommand<EconomizerCommand>("economizer")
             .WithData(output)
             .WithDescription("Economizer controls side by side with the baseline (no economizer): hours per mode, coil energy and savings, by bin and hourly.")

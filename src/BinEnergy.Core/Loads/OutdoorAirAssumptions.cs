@@ -19,6 +19,7 @@ namespace BinEnergy.Core.Loads;
 /// <param name="Operation">When the air runs.</param>
 /// <param name="Schedule">The occupancy schedule's text.</param>
 /// <param name="BinScale">The dry-bulb bins.</param>
+/// <param name="BinPoint">Where the bin method evaluates each bin.</param>
 /// <param name="Recovery">The recovery device, or none.</param>
 /// <param name="FanPenalty">Added fan power of the recovery device while air flows through it.</param>
 /// <param name="Calendar">How the record's hours sit on the calendar.</param>
@@ -37,6 +38,7 @@ public sealed record OutdoorAirAssumptions(
     VentilationOperation Operation,
     string Schedule,
     DryBulbBinScale BinScale,
+    BinEvaluationPoint BinPoint,
     EnergyRecoverySettings? Recovery,
     Power FanPenalty,
     string Calendar);

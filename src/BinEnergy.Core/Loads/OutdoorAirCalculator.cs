@@ -1,4 +1,5 @@
 using BinEnergy.Core.Binning;
+using BinEnergy.Core.Climate;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
@@ -23,7 +24,8 @@ public static class OutdoorAirCalculator
 {
     /// <summary>
     /// Bins the record with the settings' schedule and computes the loads by both methods (and
-    /// by joint bins when <paramref name="jointScale"/> is given).
+    /// by joint bins when <paramref name="jointScale"/> is given), with the peaks at the record's
+    /// own design conditions.
     /// </summary>
     /// <exception cref="ArgumentException">The settings have problems (<see cref="OutdoorAirSettings.Problems"/>).</exception>
     public static OutdoorAirResult Compute(HourlyWeather weather, OutdoorAirSettings settings, DryBulbBinScale binScale,
@@ -33,16 +35,17 @@ public static class OutdoorAirCalculator
         ArgumentNullException.ThrowIfNull(settings);
         var flags = settings.Schedule.Flags(weather);
         var table = BinTable.Build(weather, binScale, flags);
-        return Compute(weather, settings, table, flags, jointScale);
+        var design = weather.Count > 0 ? DesignConditions.FromRecord(weather) : null;
+        return Compute(weather, settings, table, flags, jointScale, design);
     }
 
     /// <summary>
     /// Computes the loads on an existing bin table built with the same occupancy flags
-    /// (<paramref name="occupied"/>, one per hour).
+    /// (<paramref name="occupied"/>, one per hour); peaks only when <paramref name="design"/> is given.
     /// </summary>
     /// <exception cref="ArgumentException">The settings have problems, or the flags do not match the record.</exception>
     public static OutdoorAirResult Compute(HourlyWeather weather, OutdoorAirSettings settings, BinTable table, bool[] occupied,
-        HumidityBinScale? jointScale = null)
+        HumidityBinScale? jointScale = null, DesignConditions? design = null)
     {
         ArgumentNullException.ThrowIfNull(weather);
         ArgumentNullException.ThrowIfNull(settings);
@@ -96,7 +99,7 @@ public static class OutdoorAirCalculator
             var own = default(LoadSums);
             if (!stats.IsEmpty)
             {
-                AddBin(ref own, load, flow, row.Mid.Celsius, stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure);
+                AddBin(ref own, load, flow, BinTemperature(settings, row.Mid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure);
                 binMethod.Add(own);
             }
 
@@ -113,7 +116,7 @@ public static class OutdoorAirCalculator
                 var stats = cell.For(occupancy);
                 if (!stats.IsEmpty)
                 {
-                    AddBin(ref sums, load, flow, cell.DryBulbMid.Celsius, stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure);
+                    AddBin(ref sums, load, flow, BinTemperature(settings, cell.DryBulbMid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure);
                 }
             }
 
@@ -147,6 +150,7 @@ public static class OutdoorAirCalculator
             Operation: settings.Operation,
             Schedule: always ? "always (ventilation runs every hour)" : settings.Schedule.Text,
             BinScale: scale,
+            BinPoint: settings.BinPoint,
             Recovery: settings.Recovery,
             FanPenalty: Power.FromWatts(flow.FanPowerW),
             Calendar: weather.Calendar.Note);
@@ -158,10 +162,14 @@ public static class OutdoorAirCalculator
             JointBin = joint,
             Bins = rows,
             Months = months,
+            Peaks = design is null ? null : DesignPeakLoads.Compute(weather, settings, design),
             Assumptions = assumptions,
             Warnings = Warnings(weather, settings, hourly.Hours),
         };
     }
+
+    private static double BinTemperature(OutdoorAirSettings settings, Temperature mid, BinStatistics stats) =>
+        settings.BinPoint == BinEvaluationPoint.MeanDryBulb ? stats.MeanDryBulb.Celsius : mid.Celsius;
 
     private static void AddBin(ref LoadSums sums, OutdoorAirLoad load, FlowModel flow, double t, double w, int hours, double sitePressure)
     {

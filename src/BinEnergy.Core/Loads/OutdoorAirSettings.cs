@@ -45,6 +45,9 @@ public sealed record OutdoorAirSettings
     /// <summary>An energy recovery device, or none.</summary>
     public EnergyRecoverySettings? Recovery { get; init; }
 
+    /// <summary>Where the bin method evaluates each bin (default the midpoint, the classic method).</summary>
+    public BinEvaluationPoint BinPoint { get; init; } = BinEvaluationPoint.Midpoint;
+
     /// <summary>The airflow used: <see cref="Airflow"/>, else the ventilation rate procedure's V_oz.</summary>
     public VolumeFlow EffectiveAirflow => Airflow ?? Ventilation?.OutdoorAirflow
         ?? throw new InvalidOperationException("no airflow: give Airflow or Ventilation");

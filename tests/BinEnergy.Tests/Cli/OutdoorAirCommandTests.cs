@@ -1,0 +1,110 @@
+using System.Text.Json;
+using BinEnergy.Tests.Support;
+
+namespace BinEnergy.Tests.Cli;
+
+/// <summary>The <c>outdoor-air</c> command end to end.</summary>
+public class OutdoorAirCommandTests
+{
+    private static readonly string[] Totals = ["heating", "cooling_sensible", "cooling_latent", "humidification", "recovered_heating", "recovered_cooling", "fan_energy", "hours_ventilated"];
+
+    private static JsonElement Json(params string[] args)
+    {
+        var (code, output, err) = AirCommandTests.Run(["outdoor-air", .. args, "--json"]);
+        Assert.True(code == 0, err);
+        return JsonDocument.Parse(output).RootElement.Clone();
+    }
+
+    [Fact]
+    public void Json_HoldsTheContractFields()
+    {
+        var root = Json(BinsCommandTests.InventedFile(), "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60",
+            "--occupied", "Mon-Fri 07:00-19:00", "--recovery-sensible", "0.7", "--recovery-pressure", "0.5");
+        foreach (var method in new[] { "bin", "hourly" })
+        {
+            foreach (var f in Totals)
+            {
+                Assert.Equal(JsonValueKind.Number, root.GetProperty(method).GetProperty(f).ValueKind);
+            }
+        }
+
+        Assert.Equal(52 * 60 + 12, root.GetProperty("hourly").GetProperty("hours_ventilated").GetInt32());
+        foreach (var f in Totals.SkipLast(1))
+        {
+            Assert.True(root.GetProperty("difference_pct").TryGetProperty(f, out _), f);
+        }
+
+        Assert.Equal("kBtu", root.GetProperty("units").GetProperty("energy").GetString());
+        Assert.Equal("site", root.GetProperty("assumptions").GetProperty("flow_basis").GetString());
+        Assert.Equal("Mon-Fri 07:00-19:00", root.GetProperty("assumptions").GetProperty("schedule").GetString());
+        Assert.True(root.GetProperty("assumptions").GetProperty("sensible_factor").GetDouble() is > 1.0 and < 1.08); // 300 m site
+        foreach (var p in new[] { "heating", "cooling", "dehumidification" })
+        {
+            Assert.Equal(JsonValueKind.Number, root.GetProperty("peaks").GetProperty(p).GetProperty("drybulb").ValueKind);
+        }
+
+        var bins = root.GetProperty("bins").EnumerateArray().ToList();
+        Assert.Equal(root.GetProperty("bin").GetProperty("heating").GetDouble(), bins.Sum(b => b.GetProperty("heating").GetDouble()), 1e-6);
+        Assert.Equal(root.GetProperty("hourly").GetProperty("heating").GetDouble(), bins.Sum(b => b.GetProperty("hourly").GetProperty("heating").GetDouble()), 1e-6);
+        Assert.Equal(12, root.GetProperty("months").GetArrayLength());
+        Assert.Contains("licensed engineer", root.GetProperty("cautions").EnumerateArray().Select(c => c.GetString()).Aggregate((a, b) => a + b));
+
+        // The fan runs in every ventilated hour: 2 x 0.471947 m3/s x 124.42 Pa / 0.6 = 195.73 W (worked by hand), 3,132 h.
+        Assert.Equal(195.73 * 3.41214 / 1000 * 3132, root.GetProperty("hourly").GetProperty("fan_energy").GetDouble(), 0.5);
+    }
+
+    [Fact]
+    public void Si_GivesTheSameEnergyInKilowattHours()
+    {
+        string[] common = [BinsCommandTests.InventedFile(), "--ventilate", "always"];
+        var ip = Json([.. common, "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60"]);
+        // 1,000 cfm = 471.947 L/s; 70 F = 21.1111 C; 75 F = 23.8889 C (exact conversions, NIST SP 811).
+        var si = Json([.. common, "--units", "si", "--width", "2.7777777778", "--airflow", "471.947443", "--heat-to", "21.1111111", "--cool-to", "23.8888889", "--max-rh", "60"]);
+        Assert.Equal("kWh", si.GetProperty("units").GetProperty("energy").GetString());
+        double kbtuPerKwh = 3.41214163; // 1 kWh = 3412.14 Btu (DESIGN section 3)
+        foreach (var f in new[] { "heating", "cooling_sensible", "cooling_latent" })
+        {
+            double a = ip.GetProperty("hourly").GetProperty(f).GetDouble();
+            Assert.Equal(a, si.GetProperty("hourly").GetProperty(f).GetDouble() * kbtuPerKwh, 1e-5 * a + 1e-6);
+        }
+    }
+
+    [Fact]
+    public void RealFile_TextShowsBothMethodsPeaksAndAssumptions()
+    {
+        var (code, output, err) = AirCommandTests.Run("outdoor-air", RawSiteColumns.PathOf("723650TYA.CSV.gz"), "--map", "tmy3",
+            "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--joint");
+        Assert.True(code == 0, err);
+        foreach (var s in new[] { "Bin method", "Hourly sum", "Joint bins", "Peak outdoor-air loads", "Assumptions", "Flow basis", "0.888", "Caution", "every hour counts as occupied" })
+        {
+            Assert.Contains(s, output);
+        }
+    }
+
+    [Fact]
+    public void AirflowBelowThePeopleAndAreaMinimum_Warns()
+    {
+        var (code, output, err) = AirCommandTests.Run("outdoor-air", BinsCommandTests.InventedFile(), "--airflow", "300", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60",
+            "--people", "50", "--per-person", "5", "--area", "5000", "--per-area", "0.06");
+        Assert.Equal(0, code);
+        Assert.Contains("below the people-and-area minimum", err);
+        Assert.Contains("550 cfm", err); // 50 x 5 + 5,000 x 0.06 (62.1 ventilation rate procedure arithmetic)
+        Assert.Contains("Warning", output);
+    }
+
+    [Theory]
+    [InlineData(new[] { "--airflow", "1000" }, "--heat-to, --cool-to, --max-rh")]
+    [InlineData(new[] { "--heat-to", "70", "--cool-to", "75", "--max-rh", "60" }, "--airflow")]
+    [InlineData(new[] { "--airflow", "1000", "--heat-to", "80", "--cool-to", "75", "--max-rh", "60" }, "above the cooling setpoint")]
+    [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--flow-basis", "metric" }, "--flow-basis")]
+    [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--recovery-latent", "0.5" }, "--recovery-sensible")]
+    [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--recovery-sensible", "1.5" }, "sensible recovery effectiveness 1.5")]
+    [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--occupied", "Mon-Fri 7:30-19:00" }, "whole hours")]
+    public void BadOptions_AreUsageErrorsNamingTheProblem(string[] extra, string message)
+    {
+        var (code, output, err) = AirCommandTests.Run(["outdoor-air", BinsCommandTests.InventedFile(), .. extra]);
+        Assert.Equal(2, code);
+        Assert.Contains(message, err);
+        Assert.Equal("", output);
+    }
+}
