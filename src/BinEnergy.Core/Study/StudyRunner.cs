@@ -1,5 +1,6 @@
 using System.Reflection;
 using BinEnergy.Core.Binning;
+using BinEnergy.Core.Climate;
 using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Plant;
@@ -73,7 +74,7 @@ public static class StudyRunner
         var settings = c.OutdoorAir;
         var flags = settings.Schedule.Flags(weather);
         var table = BinTable.Build(weather, c.BinScale, flags);
-        var result = OutdoorAirCalculator.Compute(weather, settings, table, flags);
+        var result = OutdoorAirCalculator.Compute(weather, settings, table, flags, design: DesignConditions.FromRecord(weather));
         var plant = new PlantModel(c.Plant);
         var clamps = new CurveClampCounter();
 
@@ -145,10 +146,30 @@ public static class StudyRunner
             Occupied = flags,
             Economizer = economizer,
             EconomizerEvaluation = evaluation,
-            Peaks = StudyPeaks.Compute(settings, weather),
+            Peaks = Peaks(result.Peaks),
             Clamps = hourlyClamps,
             Warnings = warnings,
         };
+    }
+
+    /// <summary>The outdoor-air engine's peaks at the design conditions, as table rows (heating: sensible = heating, latent = humidification).</summary>
+    private static List<PeakFigures> Peaks(OutdoorAirPeaks? peaks)
+    {
+        if (peaks is null)
+        {
+            return [];
+        }
+
+        PeakFigures Row(string name, OutdoorAirPeak p, bool heating)
+        {
+            double sensible = heating ? p.Loads.Heating.Watts : p.Loads.CoolingSensible.Watts;
+            double latent = heating ? p.Loads.Humidification.Watts : p.Loads.CoolingLatent.Watts;
+            double without = heating ? p.WithoutRecovery.Heating.Watts + p.WithoutRecovery.Humidification.Watts : p.WithoutRecovery.Cooling.Watts;
+            return new PeakFigures(name, p.DryBulb.Celsius, p.WetBulb.Celsius, p.DewPoint.Celsius, p.HumidityRatio.KilogramsPerKilogram,
+                sensible, latent, sensible + latent, without);
+        }
+
+        return [Row("heating_99_6", peaks.Heating, true), Row("cooling_0_4", peaks.Cooling, false), Row("dehumidification_0_4", peaks.Dehumidification, false)];
     }
 
     private static string Show(double c, StudyCase sc) =>

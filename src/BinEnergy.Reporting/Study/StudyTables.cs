@@ -131,14 +131,14 @@ public static class StudyTables
     {
         string tu = u.Temp;
         var t = new ResultTable("peaks").Text("climate").Text("variant").Text("condition")
-            .Number($"drybulb_{tu}").Number($"coincident_{tu}").Number($"humidity_ratio_{u.Ratio}")
-            .Number($"sensible_{u.Power}").Number($"latent_{u.Power}").Number($"total_{u.Power}");
+            .Number($"drybulb_{tu}").Number($"wetbulb_{tu}").Number($"dewpoint_{tu}").Number($"humidity_ratio_{u.Ratio}")
+            .Number($"sensible_{u.Power}").Number($"latent_{u.Power}").Number($"total_{u.Power}").Number($"total_without_recovery_{u.Power}");
         foreach (var c in run.Cases)
         {
             foreach (var p in c.Peaks)
             {
-                t.AddRow(c.Case.Climate.Name, c.Case.Variant.Name, p.Condition, u.T(p.DryBulbC), u.T(p.CoincidentC), p.HumidityRatio,
-                    u.P(p.SensibleW), u.P(p.LatentW), u.P(p.TotalW));
+                t.AddRow(c.Case.Climate.Name, c.Case.Variant.Name, p.Condition, u.T(p.DryBulbC), u.T(p.WetBulbC), u.T(p.DewPointC), p.HumidityRatio,
+                    u.P(p.SensibleW), u.P(p.LatentW), u.P(p.TotalW), u.P(p.TotalWithoutRecoveryW));
             }
         }
 

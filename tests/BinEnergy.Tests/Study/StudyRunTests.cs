@@ -119,6 +119,44 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void ExampleStudy_ReproducesTheOutdoorAirCommandExactly()
+    {
+        string out1 = Path.Combine(folder, "out");
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
+        Assert.True(code == 0, err);
+        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        string[] common = ["outdoor-air", Path.Combine(folder, "harbor.csv"), "--heat-to", "70", "--cool-to", "75", "--max-rh", "50",
+            "--occupied", "Mon-Fri 07:00-19:00; Sat 08:00-13:00", "--flow-basis", "site", "--json"];
+        string[] recovery = ["--recovery-sensible", "0.70", "--recovery-latent", "0.55", "--frost-limit", "10", "--frost-effectiveness", "0.35",
+            "--recovery-pressure", "0.8", "--fan-efficiency", "0.6"];
+        var variants = new Dictionary<string, string[]>
+        {
+            ["minimum"] = [.. common, "--airflow", "2000", .. recovery],
+            ["plus-30"] = [.. common, "--airflow", "2600", .. recovery],
+            ["no-recovery"] = [.. common, "--airflow", "2000"],
+        };
+        foreach (var (variant, args) in variants)
+        {
+            var (c, json, e) = Cli(args);
+            Assert.True(c == 0, e);
+            using var doc = JsonDocument.Parse(json);
+            foreach (var method in new[] { "bin", "hourly" })
+            {
+                var expected = doc.RootElement.GetProperty(method);
+                var row = annual.Single(r => r["variant"] == variant && r["method"] == method);
+                Assert.Equal(expected.GetProperty("hours_ventilated").GetInt32(), int.Parse(row["hours_ventilated"], CultureInfo.InvariantCulture));
+                foreach (var figure in new[] { "heating", "cooling_sensible", "cooling_latent", "humidification", "recovered_heating", "recovered_cooling" })
+                {
+                    Assert.Equal(expected.GetProperty(figure).GetDouble(), D(row[figure + "_kbtu"]));
+                }
+
+                // The command gives fan energy in kBtu in IP; the table in kWh (1 kWh = 3412.14 Btu, DESIGN 3).
+                Assert.Equal(expected.GetProperty("fan_energy").GetDouble(), D(row["fan_kwh"]) * Conversions.BtuPerKilowattHour / 1000.0, 6);
+            }
+        }
+    }
+
+    [Fact]
     public void ExampleStudy_ReproducesTheEconomizerCommandExactly()
     {
         string out1 = Path.Combine(folder, "out");
