@@ -31,7 +31,7 @@ public static class HivePartition
         foreach (byte b in Encoding.UTF8.GetBytes(value))
         {
             char c = (char)b;
-            bool plain = b < 0x80 && (char.IsAsciiLetterOrDigit(c) || c is '-' or '_' or '.' or ' ') && !(b == '.' && sb.Length == 0);
+            bool plain = b < 0x80 && (char.IsAsciiLetterOrDigit(c) || c is '-' or '_' or ' ');
             if (plain)
             {
                 sb.Append(c);

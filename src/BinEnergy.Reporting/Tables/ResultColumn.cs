@@ -39,6 +39,17 @@ public sealed class ResultColumn
     /// <summary>The values of an integer column.</summary>
     public IReadOnlyList<int> Integers => Kind == ColumnKind.Integer ? integers : throw WrongKind(ColumnKind.Integer);
 
+    /// <summary>True when <paramref name="value"/> can be stored in this column.</summary>
+    internal bool Accepts(object value) => Kind switch
+    {
+        ColumnKind.Text => value is string,
+        ColumnKind.Number => value is double or int,
+        _ => value is int,
+    };
+
+    internal ArgumentException WrongValue(object value) =>
+        new($"column '{Name}' holds {Kind} values; got {value?.GetType().Name ?? "null"}");
+
     internal void Add(object value)
     {
         switch (Kind)
@@ -78,7 +89,4 @@ public sealed class ResultColumn
 
     private InvalidOperationException WrongKind(ColumnKind asked) =>
         new($"column '{Name}' holds {Kind} values, not {asked}");
-
-    private ArgumentException WrongValue(object value) =>
-        new($"column '{Name}' holds {Kind} values; got {value?.GetType().Name ?? "null"}");
 }

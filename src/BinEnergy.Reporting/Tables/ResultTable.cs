@@ -58,6 +58,15 @@ public sealed partial class ResultTable
             throw new ArgumentException($"table '{Name}' has {columns.Count} columns; a row of {values.Length} values was given");
         }
 
+        // Check every value first, so a bad row leaves the table as it was.
+        for (int i = 0; i < values.Length; i++)
+        {
+            if (!columns[i].Accepts(values[i]))
+            {
+                throw columns[i].WrongValue(values[i]);
+            }
+        }
+
         for (int i = 0; i < values.Length; i++)
         {
             columns[i].Add(values[i]);
