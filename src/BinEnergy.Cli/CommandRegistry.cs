@@ -52,5 +52,11 @@ internal static class CommandRegistry
             .WithData(output)
             .WithDescription("Synthesize an hourly weather year (open layout) from monthly statistics and a seed.")
             .WithExample("synth", "--monthly", "weather-samples/port-verrin-monthly.csv", "--seed", "1", "--out", "port-verrin.csv");
+
+        config.AddCommand<RunCommand>("run")
+            .WithData(output)
+            .WithDescription("Run a study file: every climate x variant, into tables (Parquet, CSV) and summary.json.")
+            .WithExample("run", "harbor-study.toml")
+            .WithExample("run", "harbor-study.toml", "--out", "reports/harbor", "--hourly", "--force");
     }
 }

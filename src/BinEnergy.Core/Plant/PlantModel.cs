@@ -1,0 +1,70 @@
+namespace BinEnergy.Core.Plant;
+
+/// <summary>
+/// Turns thermal loads into energy bought (DESIGN 9): heating load / efficiency (or / heat-pump
+/// COP at the outdoor temperature) of the heating fuel; cooling coil load / COP at the outdoor
+/// temperature as electricity; fan and humidifier energy as electricity. Loads are in joules,
+/// over an hour or a bin's hours; the outdoor temperature is the hour's dry-bulb or the bin's
+/// midpoint. Every evaluation of a COP curve outside its points is counted in
+/// <see cref="CurveClampCounter"/> (the curve holds its end value there).
+/// </summary>
+public sealed class PlantModel(PlantSettings settings)
+{
+    /// <summary>The settings this model applies.</summary>
+    public PlantSettings Settings { get; } = settings;
+
+    /// <summary>Energy bought to meet a heating load.</summary>
+    /// <param name="heatingJ">Heating delivered to the air, J.</param>
+    /// <param name="outdoorC">Outdoor dry-bulb, C (for a heat pump's COP).</param>
+    /// <param name="hours">Hours this load spans (counted when the COP curve is clamped).</param>
+    /// <param name="clamps">Where clamped evaluations are counted.</param>
+    public SiteEnergy Heating(double heatingJ, double outdoorC, double hours, CurveClampCounter clamps)
+    {
+        if (heatingJ <= 0)
+        {
+            return SiteEnergy.Zero;
+        }
+
+        double bought;
+        if (Settings.Heating == HeatingSource.HeatPump)
+        {
+            var curve = Settings.HeatPumpCop ?? throw new InvalidOperationException("heat pump without a COP curve");
+            if (curve.IsOutside(outdoorC))
+            {
+                clamps.HeatingHours += hours;
+            }
+
+            bought = heatingJ / curve.Evaluate(outdoorC);
+        }
+        else
+        {
+            bought = heatingJ / Settings.HeatingEfficiency;
+        }
+
+        return SiteEnergy.Buy(Settings.HeatingFuel, bought, Settings.TariffOf(Settings.HeatingFuel));
+    }
+
+    /// <summary>Electricity bought to remove a cooling coil load (sensible plus latent), J.</summary>
+    public SiteEnergy Cooling(double coilJ, double outdoorC, double hours, CurveClampCounter clamps)
+    {
+        if (coilJ <= 0)
+        {
+            return SiteEnergy.Zero;
+        }
+
+        if (Settings.CoolingCop.IsOutside(outdoorC))
+        {
+            clamps.CoolingHours += hours;
+        }
+
+        return Electricity(coilJ / Settings.CoolingCop.Evaluate(outdoorC));
+    }
+
+    /// <summary>Electricity bought for a humidification load, J.</summary>
+    public SiteEnergy Humidification(double humidificationJ) =>
+        humidificationJ <= 0 ? SiteEnergy.Zero : Electricity(humidificationJ / Settings.HumidifierEfficiency);
+
+    /// <summary>Electricity, J, priced and weighed.</summary>
+    public SiteEnergy Electricity(double joules) =>
+        SiteEnergy.Buy(Fuel.Electricity, joules, Settings.TariffOf(Fuel.Electricity));
+}

@@ -1,0 +1,38 @@
+namespace BinEnergy.Core.Plant;
+
+/// <summary>
+/// The plant that meets the outdoor-air loads (DESIGN 9), in SI: the heating source and its
+/// efficiency (or heat-pump COP curve), the cooling COP curve, the fan efficiency, and the
+/// price and carbon factor of each fuel.
+/// </summary>
+/// <param name="Heating">What heats.</param>
+/// <param name="HeatingEfficiency">Seasonal efficiency of a gas, oil or electric heater, in (0, 1.2]
+/// (above 1 only for condensing boilers quoted on lower heating value; 1 for resistance).</param>
+/// <param name="HeatPumpCop">COP versus outdoor temperature of a heat pump (null unless <see cref="HeatingSource.HeatPump"/>).</param>
+/// <param name="CoolingCop">Cooling COP versus outdoor temperature (compressor and condenser fans).</param>
+/// <param name="FanEfficiency">Total fan efficiency used for the fan energy from a pressure drop.</param>
+/// <param name="HumidifierEfficiency">Electric humidifier: electricity per unit of humidification energy is 1 / this.</param>
+/// <param name="Tariffs">Price and carbon factor per fuel; a fuel left out costs nothing and emits nothing.</param>
+public sealed record PlantSettings(
+    HeatingSource Heating,
+    double HeatingEfficiency,
+    PerformanceCurve? HeatPumpCop,
+    PerformanceCurve CoolingCop,
+    double FanEfficiency,
+    double HumidifierEfficiency,
+    IReadOnlyDictionary<Fuel, FuelTariff> Tariffs)
+{
+    /// <summary>Heat content of the oil, J per US gallon (default 138,500 Btu/gal, recalled from memory).</summary>
+    public double OilJoulesPerGallon { get; init; } = FuelUnits.DefaultOilBtuPerGallon * Units.Conversions.JoulesPerBtu;
+
+    /// <summary>The fuel the heating source buys.</summary>
+    public Fuel HeatingFuel => Heating switch
+    {
+        HeatingSource.Gas => Fuel.Gas,
+        HeatingSource.Oil => Fuel.Oil,
+        _ => Fuel.Electricity,
+    };
+
+    /// <summary>The tariff of a fuel, or <see cref="FuelTariff.Free"/> when the study gives none.</summary>
+    public FuelTariff TariffOf(Fuel fuel) => Tariffs.TryGetValue(fuel, out var t) ? t : FuelTariff.Free;
+}

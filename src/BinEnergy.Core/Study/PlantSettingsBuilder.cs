@@ -1,0 +1,77 @@
+using BinEnergy.Core.Plant;
+
+namespace BinEnergy.Core.Study;
+
+/// <summary>Builds <see cref="PlantSettings"/> from a variant's [plant] table, with study-file errors for missing or contradictory keys.</summary>
+internal static class PlantSettingsBuilder
+{
+    /// <summary>Default total fan efficiency when the study gives none (common practice for a small supply fan and motor).</summary>
+    public const double DefaultFanEfficiency = 0.6;
+
+    public static PlantSettings Build(StudySection plant, List<string> assumptions)
+    {
+        string fuel = plant.Text("heating_fuel") ?? "gas";
+        var heating = fuel switch
+        {
+            "oil" => HeatingSource.Oil,
+            "electric" => HeatingSource.Electric,
+            "heat-pump" => HeatingSource.HeatPump,
+            _ => HeatingSource.Gas,
+        };
+        if (!plant.Has("heating_fuel"))
+        {
+            assumptions.Add("heating by gas (plant.heating_fuel not given)");
+        }
+
+        double efficiency = plant.Number("heating_efficiency") ?? heating switch
+        {
+            HeatingSource.Electric or HeatingSource.HeatPump => 1.0,
+            _ => throw new StudyFileException(plant.File, plant.Line, "plant.heating_efficiency",
+                $"heating by {fuel} needs its seasonal efficiency, e.g. heating_efficiency = 0.85 (check the equipment's rating)"),
+        };
+
+        PerformanceCurve? heatPump = null;
+        if (heating == HeatingSource.HeatPump)
+        {
+            heatPump = Curve(plant, "heating_cop") ?? throw new StudyFileException(plant.File, plant.Line, "plant.heating_cop",
+                "a heat pump needs heating_cop: one number, or [outdoor temperature, COP] pairs such as [[17, 2.3], [47, 3.5]] with heating_cop_f");
+        }
+        else if (plant.Has("heating_cop"))
+        {
+            throw plant.ErrorAt("heating_cop", $"heating_cop applies to heating_fuel = \"heat-pump\" only, not \"{fuel}\"; remove it or change the fuel");
+        }
+
+        var cooling = Curve(plant, "cooling") ?? throw new StudyFileException(plant.File, plant.Line, "plant.cooling_cop",
+            "[plant] needs the cooling efficiency: cooling_cop, cooling_eer or cooling_kw_per_ton (one number, or [outdoor temperature, value] pairs)");
+
+        double fan = plant.Number("fan_efficiency") ?? DefaultFanEfficiency;
+        if (!plant.Has("fan_efficiency"))
+        {
+            assumptions.Add($"fan efficiency {DefaultFanEfficiency} (plant.fan_efficiency not given; common practice)");
+        }
+
+        double oilJPerGallon = plant.Number("oil_heat_content") ?? FuelUnits.DefaultOilBtuPerGallon * Units.Conversions.JoulesPerBtu;
+        var tariffs = new Dictionary<Fuel, FuelTariff>
+        {
+            [Fuel.Electricity] = new(plant.Number("price_electricity") ?? 0, plant.Number("carbon_electricity") ?? 0),
+            [Fuel.Gas] = new(plant.Number("price_gas") ?? 0, plant.Number("carbon_gas") ?? 0),
+            [Fuel.Oil] = new((plant.Number("price_oil") ?? 0) / oilJPerGallon, (plant.Number("carbon_oil") ?? 0) / oilJPerGallon),
+        };
+        return new PlantSettings(heating, efficiency, heatPump, cooling, fan, plant.Number("humidifier_efficiency") ?? 1.0, tariffs)
+        {
+            OilJoulesPerGallon = oilJPerGallon,
+        };
+    }
+
+    private static PerformanceCurve? Curve(StudySection plant, string name)
+    {
+        var v = plant.Get(name);
+        return v?.Value switch
+        {
+            null => null,
+            double cop => PerformanceCurve.Constant(cop),
+            List<(double OutdoorC, double Value)> points => PerformanceCurve.Create(points),
+            _ => throw new InvalidOperationException("unexpected curve value"),
+        };
+    }
+}

@@ -1,0 +1,181 @@
+using BinEnergy.Core.Binning;
+using BinEnergy.Core.Loads;
+using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Core.Schedules;
+using BinEnergy.Core.Units;
+
+namespace BinEnergy.Core.Study;
+
+/// <summary>
+/// Resolves a variant's tables into the engines' settings (outdoor air, recovery, schedule,
+/// bins, plant, economizer). Problems the engines' own checks find are reported as study-file
+/// errors at the key's line.
+/// </summary>
+public static class StudyCaseBuilder
+{
+    /// <summary>Builds every climate x variant case of a study (climates outer, variants inner).</summary>
+    public static IReadOnlyList<StudyCase> Build(StudyDefinition study)
+    {
+        var perVariant = study.Variants.Select(v => (Variant: v, Parts: BuildVariant(study, v))).ToList();
+        return study.Climates.SelectMany(c => perVariant.Select(p => p.Parts with { Climate = c })).ToList();
+    }
+
+    private static StudyCase BuildVariant(StudyDefinition study, StudyVariant variant)
+    {
+        var s = variant.Sections;
+        var assumptions = new List<string>();
+        var schedule = Schedule(s["schedule"]);
+        var outdoorAir = OutdoorAir(s["ventilation"], s["recovery"], s["plant"], schedule, assumptions);
+        double? widthK = s["study"].Number("bin_width");
+        var scale = widthK is double k
+            ? new DryBulbBinScale(TemperatureDifference.FromKelvin(k), study.Units)
+            : DryBulbBinScale.Default(study.Units);
+        var plant = PlantSettingsBuilder.Build(s["plant"], assumptions);
+        var economizer = EconomizerSettingsBuilder.Build(s["economizer"], outdoorAir, schedule, assumptions);
+        return new StudyCase(study.Climates[0], variant, outdoorAir, scale, plant, assumptions) { Economizer = economizer };
+    }
+
+    private static OccupancySchedule Schedule(StudySection schedule)
+    {
+        string text = schedule.Text("occupied") ?? "always";
+        var holidays = new List<DateOnly>();
+        foreach (var h in schedule.TextList("holidays") ?? [])
+        {
+            if (!DateOnly.TryParseExact(h, "yyyy-MM-dd", System.Globalization.CultureInfo.InvariantCulture, System.Globalization.DateTimeStyles.None, out var d))
+            {
+                throw schedule.ErrorAt("holidays", $"\"{h}\" is not a date written as YYYY-MM-DD, e.g. \"2026-12-25\"");
+            }
+
+            holidays.Add(d);
+        }
+
+        try
+        {
+            return OccupancySchedule.Parse(text, holidays);
+        }
+        catch (ScheduleSyntaxException e)
+        {
+            throw schedule.ErrorAt("occupied", e.Message);
+        }
+    }
+
+    private static OutdoorAirSettings OutdoorAir(StudySection v, StudySection recovery, StudySection plant, OccupancySchedule schedule, List<string> assumptions)
+    {
+        if (!v.Present)
+        {
+            throw new StudyFileException(v.File, null, "ventilation",
+                "the study has no [ventilation] table; add one with airflow_cfm (or airflow_ls), heat_to_f, cool_to_f and max_rh_pct");
+        }
+
+        VentilationRate? rate = null;
+        bool anyRate = v.Has("people") || v.Has("area") || v.Has("per_person") || v.Has("per_area");
+        if (anyRate)
+        {
+            rate = new VentilationRate(
+                v.Number("people") ?? 0,
+                VolumeFlow.FromCubicMetresPerSecond(v.Number("per_person") ?? 0),
+                v.Number("area") ?? 0,
+                (v.Number("per_area") ?? 0) * 1000.0,
+                v.Number("zone_effectiveness") ?? 1.0);
+            if (rate.BreathingZoneAirflow.CubicMetresPerSecond <= 0)
+            {
+                throw v.ErrorAt(v.Has("people") ? "people" : "area",
+                    "people and area rates give no airflow: give people with per_person_cfm, and/or area_ft2 with per_area_cfm, all above zero");
+            }
+        }
+        else if (v.Has("zone_effectiveness"))
+        {
+            throw v.ErrorAt("zone_effectiveness", "zone_effectiveness applies to the people-and-area rates; give people, per_person_cfm, area_ft2 and per_area_cfm too, or remove it");
+        }
+
+        double? airflow = v.Number("airflow");
+        if (airflow is null && rate is null)
+        {
+            throw new StudyFileException(v.File, v.Line, "ventilation.airflow_cfm",
+                "[ventilation] needs the outdoor airflow: airflow_cfm (or airflow_ls), or people, per_person_cfm, area_ft2 and per_area_cfm");
+        }
+
+        if (v.Has("occupancy_profile"))
+        {
+            throw v.ErrorAt("occupancy_profile", "demand-controlled ventilation profiles are not supported by the outdoor-air engine yet; remove occupancy_profile");
+        }
+
+        var heatTo = Temperature.FromCelsius(v.RequiredNumber("heat_to"));
+        var coolTo = Temperature.FromCelsius(v.RequiredNumber("cool_to"));
+        if (heatTo > coolTo)
+        {
+            throw v.ErrorAt("heat_to", "the heating setpoint is above the cooling setpoint; heat_to must be at or below cool_to");
+        }
+
+        var settings = new OutdoorAirSettings
+        {
+            Airflow = airflow is double a ? VolumeFlow.FromCubicMetresPerSecond(a) : null,
+            Ventilation = rate,
+            FlowBasis = FlowBasisOf(v.Text("flow_basis")),
+            Operation = v.Text("operation") == "always" ? VentilationOperation.Always : VentilationOperation.Occupied,
+            Schedule = schedule,
+            HeatTo = heatTo,
+            CoolTo = coolTo,
+            MaxRelativeHumidity = v.RequiredNumber("max_rh_pct") / 100.0,
+            MinRelativeHumidity = v.Number("min_rh_pct") is double min && min > 0 ? min / 100.0 : null,
+            Recovery = Recovery(recovery, plant),
+        };
+        if (!v.Has("flow_basis"))
+        {
+            assumptions.Add("flow basis site: dry air at 70 F (21.1 C) and the site pressure (ventilation.flow_basis not given)");
+        }
+
+        var problems = settings.Problems();
+        if (problems.Count > 0)
+        {
+            throw new StudyFileException(v.File, v.Line, "ventilation", string.Join("; ", problems));
+        }
+
+        return settings;
+    }
+
+    private static EnergyRecoverySettings? Recovery(StudySection r, StudySection plant)
+    {
+        if (!r.Present || r.Bool("enabled") == false)
+        {
+            return null;
+        }
+
+        double es = r.Has("sensible_effectiveness") ? r.RequiredNumber("sensible_effectiveness") : throw r.Missing("sensible_effectiveness");
+        if (r.Has("frost_limit") != r.Has("frost_effectiveness"))
+        {
+            throw r.ErrorAt(r.Has("frost_limit") ? "frost_limit" : "frost_effectiveness",
+                "give frost_limit_f (or _c) and frost_effectiveness together, or neither");
+        }
+
+        double frost = r.Number("frost_effectiveness") ?? 0.0;
+        if (frost > es)
+        {
+            throw r.ErrorAt("frost_effectiveness", "the effectiveness below the frost limit cannot exceed the sensible effectiveness");
+        }
+
+        var settings = new EnergyRecoverySettings
+        {
+            SensibleEffectiveness = es,
+            LatentEffectiveness = r.Number("latent_effectiveness") ?? 0.0,
+            FrostLimit = r.Number("frost_limit") is double f ? Temperature.FromCelsius(f) : null,
+            FrostEffectiveness = frost,
+            PressureDropPa = r.Number("pressure_drop") ?? 0.0,
+            FanEfficiency = plant.Number("fan_efficiency") ?? PlantSettingsBuilder.DefaultFanEfficiency,
+        };
+        var problems = settings.Problems().ToList();
+        if (problems.Count > 0)
+        {
+            throw new StudyFileException(r.File, r.Line, "recovery", string.Join("; ", problems));
+        }
+
+        return settings;
+    }
+
+    internal static FlowBasis FlowBasisOf(string? text) => text switch
+    {
+        "standard" => FlowBasis.Standard,
+        "actual" => FlowBasis.Actual,
+        _ => FlowBasis.Site,
+    };
+}

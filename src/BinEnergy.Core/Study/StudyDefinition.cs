@@ -1,0 +1,20 @@
+using BinEnergy.Core.Units;
+
+namespace BinEnergy.Core.Study;
+
+/// <summary>A validated study file: name, display units, currency, climates and variants (the run is their cross product).</summary>
+/// <param name="File">The study file as the user named it.</param>
+/// <param name="Name">The study name.</param>
+/// <param name="Units">Display units of the outputs.</param>
+/// <param name="Currency">Currency code used in cost column names (lower case).</param>
+/// <param name="Hash">SHA-256 of the study file's text (line endings normalised), hex.</param>
+/// <param name="Climates">The climates, in file order.</param>
+/// <param name="Variants">The variants, in file order.</param>
+public sealed record StudyDefinition(
+    string File,
+    string Name,
+    UnitSystem Units,
+    string Currency,
+    string Hash,
+    IReadOnlyList<StudyClimate> Climates,
+    IReadOnlyList<StudyVariant> Variants);

@@ -1,0 +1,223 @@
+using BinEnergy.Core.Plant;
+using BinEnergy.Core.Units;
+
+namespace BinEnergy.Core.Study;
+
+/// <summary>
+/// Every table and key a study file may contain (docs/study.md is the reference for users).
+/// Each dimensional key carries its unit in its name; IP and SI spellings are both accepted and
+/// converted to SI here, once. Ranges are physical plausibility limits, in SI.
+/// </summary>
+internal static class StudySchema
+{
+    public static IReadOnlyList<SectionDefinition> Sections { get; } = Build();
+
+    /// <summary>Tables a variant may override.</summary>
+    public static IEnumerable<SectionDefinition> Overridable => Sections.Where(s => s.Overridable);
+
+    public static SectionDefinition? Find(string name) => Sections.FirstOrDefault(s => s.Name == name);
+
+    public static SectionDefinition Get(string name) => Find(name) ?? throw new KeyNotFoundException(name);
+
+    private static List<SectionDefinition> Build() =>
+    [
+        new("study", false,
+        [
+            Text("name", "Name of the study (used for the default output folder)."),
+            Choice("units", ["ip", "si"], "ip", "Units of the tables, charts and report."),
+            new KeyDefinition("bin_width", ValueKind.Number, TemperatureDifference("bin_width"), "Width of the dry-bulb bins.")
+            { Min = 0.1 / 1.8, Max = 20.0, DefaultText = "5 F (ip) or 2 C (si)", RangeHint = "bins between 0.1 F and 20 K wide" },
+            Text("currency", "Currency code of the prices, used in the cost column names (cost_usd).", "usd"),
+        ], false, "The study's name, display units and bin width."),
+
+        new("climate", true,
+        [
+            Text("name", "Name of the climate (a column of every table)."),
+            Text("weather", "Weather file, relative to the study file."),
+            Text("map", "Column map for other layouts: a shipped map name or a path relative to the study file."),
+            new KeyDefinition("elevation", ValueKind.Number, Length("elevation"), "Site elevation; overrides the file's metadata.")
+            { Min = -500, Max = 6000, RangeHint = "elevations between -500 m and 6,000 m" },
+        ], false, "One climate (weather file); repeat [[climate]] for several."),
+
+        new("schedule", false,
+        [
+            Text("occupied", "Occupied hours, e.g. \"Mon-Fri 07:00-19:00; Sat 08:00-13:00\" or \"always\".", "always"),
+            new KeyDefinition("holidays", ValueKind.TextList, Unitless("holidays"), "Dates (YYYY-MM-DD) treated as unoccupied."),
+        ], true, "The occupancy schedule."),
+
+        new("ventilation", false,
+        [
+            new KeyDefinition("airflow", ValueKind.Number, Flow("airflow"), "Outdoor airflow.") { Min = 0, MinExclusive = true, Max = 1000, RangeHint = "a positive airflow (up to 1,000 m3/s)" },
+            new KeyDefinition("people", ValueKind.Number, Unitless("people"), "Number of people (ventilation rate procedure).") { Min = 0, Max = 1e6 },
+            new KeyDefinition("area", ValueKind.Number, Area("area"), "Floor area (ventilation rate procedure).") { Min = 0, Max = 1e7 },
+            new KeyDefinition("per_person", ValueKind.Number, Flow("per_person"), "Outdoor air per person.") { Min = 0, Max = 0.1 },
+            new KeyDefinition("per_area", ValueKind.Number, PerArea("per_area"), "Outdoor air per unit floor area (cfm/ft2 or L/s per m2).") { Min = 0, Max = 0.02 },
+            new KeyDefinition("zone_effectiveness", ValueKind.Number, Unitless("zone_effectiveness"), "Zone air-distribution effectiveness.")
+            { Min = 0, MinExclusive = true, Max = 1.5, DefaultText = "1.0" },
+            Choice("flow_basis", ["site", "standard", "actual"], "site", "How volume flow turns into mass of dry air."),
+            Choice("operation", ["occupied", "always"], "occupied", "When outdoor air is supplied."),
+            new KeyDefinition("heat_to", ValueKind.Number, Temperature("heat_to"), "Heating setpoint of the outdoor air.") { Min = 0, Max = 40, RangeHint = "0 to 40 C (32 to 104 F)" },
+            new KeyDefinition("cool_to", ValueKind.Number, Temperature("cool_to"), "Cooling setpoint of the outdoor air.") { Min = 5, Max = 45, RangeHint = "5 to 45 C (41 to 113 F)" },
+            new KeyDefinition("max_rh_pct", ValueKind.Number, Unitless("max_rh_pct"), "Maximum indoor relative humidity at the cooling setpoint, %.")
+            { Min = 0, MinExclusive = true, Max = 100, RangeHint = "a percentage above 0 and at most 100" },
+            new KeyDefinition("min_rh_pct", ValueKind.Number, Unitless("min_rh_pct"), "Humidify below this indoor relative humidity at the heating setpoint, %.")
+            { Min = 0, Max = 100, RangeHint = "a percentage from 0 to 100" },
+            new KeyDefinition("occupancy_profile", ValueKind.NumberList, Unitless("occupancy_profile"),
+                "24 fractions (0..1) of the design airflow by hour of the day, for demand-controlled ventilation.") { Min = 0, Max = 1 },
+        ], true, "The outdoor air and the indoor targets."),
+
+        new("recovery", false,
+        [
+            Bool("enabled", "Set false to turn energy recovery off (e.g. in a variant).", "true"),
+            new KeyDefinition("sensible_effectiveness", ValueKind.Number, Unitless("sensible_effectiveness"), "Sensible effectiveness.") { Min = 0, Max = 1 },
+            new KeyDefinition("latent_effectiveness", ValueKind.Number, Unitless("latent_effectiveness"), "Latent effectiveness.") { Min = 0, Max = 1, DefaultText = "0" },
+            new KeyDefinition("frost_limit", ValueKind.Number, Temperature("frost_limit"), "Below this outdoor temperature the effectiveness drops (defrost).") { Min = -50, Max = 20 },
+            new KeyDefinition("frost_effectiveness", ValueKind.Number, Unitless("frost_effectiveness"), "Effectiveness below the frost limit.") { Min = 0, Max = 1 },
+            new KeyDefinition("pressure_drop", ValueKind.Number, PressureDrop("pressure_drop"), "Added pressure drop on each air stream.")
+            { Min = 0, Max = 2500, DefaultText = "0", RangeHint = "0 to 2,500 Pa (10 in. w.g.)" },
+        ], true, "Energy recovery between exhaust and outdoor air; leave the table out for none."),
+
+        new("economizer", false,
+        [
+            Bool("enabled", "Set false to evaluate no economizer (e.g. in a variant).", "true"),
+            new KeyDefinition("supply_airflow", ValueKind.Number, Flow("supply_airflow"), "Supply airflow (the maximum, for variable volume).") { Min = 0, MinExclusive = true, Max = 1000 },
+            new KeyDefinition("supply_airflow_min", ValueKind.Number, Flow("supply_airflow_min"), "Minimum supply airflow; gives variable volume.") { Min = 0, MinExclusive = true, Max = 1000 },
+            new KeyDefinition("min_outdoor_airflow", ValueKind.Number, Flow("min_outdoor_airflow"), "Minimum outdoor airflow.") { Min = 0, Max = 1000 },
+            Choice("flow_basis", ["site", "standard", "actual"], "the ventilation flow basis", "How volume flow turns into mass of dry air."),
+            new KeyDefinition("supply_temp", ValueKind.Number, Temperature("supply_temp"), "Supply air temperature.") { Min = 0, Max = 30 },
+            new KeyDefinition("return_temp", ValueKind.Number, Temperature("return_temp"), "Return air temperature.") { Min = 10, Max = 40 },
+            new KeyDefinition("return_rh_pct", ValueKind.Number, Unitless("return_rh_pct"), "Return air relative humidity, %.") { Min = 0, MinExclusive = true, Max = 100 },
+            new KeyDefinition("design_load", ValueKind.Number, PowerAlternatives("design_load"), "Building sensible cooling load at the design outdoor temperature.") { Min = 0, MinExclusive = true, Max = 1e8 },
+            new KeyDefinition("design_outdoor", ValueKind.Number, Temperature("design_outdoor"), "Design outdoor temperature of the load line.") { Min = 10, Max = 60 },
+            new KeyDefinition("balance_point", ValueKind.Number, Temperature("balance_point"), "Outdoor temperature at which the cooling load is zero.") { Min = -20, Max = 40 },
+            new KeyDefinition("controls", ValueKind.TextList, Unitless("controls"), "High-limit controls compared with the baseline.")
+            {
+                Choices = ["fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"],
+                DefaultText = "all five",
+            },
+            Bool("integrated", "true: the economizer keeps running while the coil trims; false: it locks out.", "true"),
+            new KeyDefinition("high_limit_drybulb", ValueKind.Number, Temperature("high_limit_drybulb"), "Dry-bulb high limit.") { Min = 0, Max = 40 },
+            new KeyDefinition("high_limit_enthalpy", ValueKind.Number, Enthalpy("high_limit_enthalpy"), "Enthalpy high limit (datum converted through the state).") { Min = 0, Max = 150e3 },
+            new KeyDefinition("high_limit_dewpoint", ValueKind.Number, Temperature("high_limit_dewpoint"), "Dew-point high limit.") { Min = -20, Max = 35 },
+            new KeyDefinition("coil_leaving_rh_pct", ValueKind.Number, Unitless("coil_leaving_rh_pct"), "Relative humidity of the air leaving the coil, %.")
+            { Min = 50, Max = 100, DefaultText = "90" },
+        ], true, "The air system and its economizer controls; leave the table out for none."),
+
+        new("plant", false,
+        [
+            Choice("heating_fuel", ["gas", "oil", "electric", "heat-pump"], "gas", "What heats."),
+            new KeyDefinition("heating_efficiency", ValueKind.Number, Unitless("heating_efficiency"), "Seasonal efficiency of a gas, oil or electric heater.")
+            { Min = 0, MinExclusive = true, Max = 1.2, DefaultText = "1.0 for electric; required for gas and oil", RangeHint = "an efficiency above 0 and at most 1.2" },
+            new KeyDefinition("heating_cop", ValueKind.NumberOrPoints, Rating("heating_cop", (v, _) => v), "Heat-pump COP: one number, or [outdoor temperature, COP] pairs.")
+            { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-50, 40) },
+            new KeyDefinition("cooling", ValueKind.NumberOrPoints,
+            [
+                .. Rating("cooling_cop", (v, _) => v),
+                .. Rating("cooling_eer", (v, _) => CoolingRating.CopFromEer(v)),
+                .. Rating("cooling_kw_per_ton", (v, _) => CoolingRating.CopFromKilowattsPerTon(v)),
+            ], "Cooling efficiency: COP, EER or kW/ton; one number, or [outdoor temperature, value] pairs.")
+            { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-10, 60), RangeHint = "a COP above 0 and at most 15" },
+            new KeyDefinition("fan_efficiency", ValueKind.Number, Unitless("fan_efficiency"), "Total fan efficiency for the fan energy of pressure drops.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "0.6" },
+            new KeyDefinition("humidifier_efficiency", ValueKind.Number, Unitless("humidifier_efficiency"), "Electric humidifier efficiency.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "1.0" },
+            Money("price_electricity", [("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Electricity price."),
+            Money("price_gas", [("per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Gas price."),
+            Money("price_oil", [("per_gal", (v, _) => v), ("per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Oil price."),
+            Money("carbon_electricity", [("kg_per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Carbon factor of electricity."),
+            Money("carbon_gas", [("kg_per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("kg_per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Carbon factor of gas."),
+            Money("carbon_oil", [("kg_per_gal", (v, _) => v), ("kg_per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Carbon factor of oil."),
+            new KeyDefinition("oil_heat_content", ValueKind.Number,
+            [
+                new("oil_heat_content_btu_gal", "Btu/gal", (v, _) => v * Conversions.JoulesPerBtu),
+                new("oil_heat_content_kwh_l", "kWh/L", (v, _) => v * FuelUnits.JoulesPerKilowattHour * FuelUnits.LitresPerGallon),
+            ], "Heat content of the oil.") { Min = 50e6, Max = 250e6, DefaultText = "138,500 Btu/gal (recalled from memory)" },
+        ], true, "Heating and cooling plant, fans, prices and carbon factors."),
+
+        new("variant", true,
+        [
+            Text("name", "Name of the variant (a column of every table)."),
+        ], false, "One variant: a name and overrides of any key, e.g. ventilation.airflow_cfm = 2600."),
+    ];
+
+    private static KeyDefinition Text(string name, string description, string? defaultText = null) =>
+        new(name, ValueKind.Text, Unitless(name), description) { DefaultText = defaultText };
+
+    private static KeyDefinition Bool(string name, string description, string defaultText) =>
+        new(name, ValueKind.Bool, Unitless(name), description) { DefaultText = defaultText };
+
+    private static KeyDefinition Choice(string name, string[] choices, string defaultText, string description) =>
+        new(name, ValueKind.Choice, Unitless(name), description) { Choices = choices, DefaultText = defaultText };
+
+    private static KeyDefinition Money(string name, (string Suffix, Func<double, UnitSystem, double> ToSi)[] units, string description) =>
+        new(name, ValueKind.Number, units.Select(u => new KeyAlternative(name + "_" + u.Suffix, u.Suffix.Replace('_', ' '), u.ToSi)).ToArray(), description)
+        { Min = 0, DefaultText = "0" };
+
+    private static KeyAlternative[] Unitless(string name) => [new(name, string.Empty, (v, _) => v)];
+
+    private static KeyAlternative[] Temperature(string b) =>
+    [
+        new(b + "_f", "F", (v, _) => Conversions.FahrenheitToCelsius(v)),
+        new(b + "_c", "C", (v, _) => v),
+    ];
+
+    private static KeyAlternative[] TemperatureDifference(string b) =>
+    [
+        new(b + "_f", "F", (v, _) => v / 1.8),
+        new(b + "_c", "C", (v, _) => v),
+    ];
+
+    private static KeyAlternative[] Flow(string b) =>
+    [
+        new(b + "_cfm", "cfm", (v, _) => v * Conversions.CubicMetresPerSecondPerCfm),
+        new(b + "_ls", "L/s", (v, _) => v / 1000.0),
+        new(b + "_m3h", "m3/h", (v, _) => v / 3600.0),
+    ];
+
+    private static KeyAlternative[] PerArea(string b) =>
+    [
+        new(b + "_cfm", "cfm/ft2", (v, _) => v * Conversions.CubicMetresPerSecondPerCfm / (Conversions.MetresPerFoot * Conversions.MetresPerFoot)),
+        new(b + "_ls", "L/s per m2", (v, _) => v / 1000.0),
+    ];
+
+    private static KeyAlternative[] Length(string b) =>
+    [
+        new(b + "_ft", "ft", (v, _) => v * Conversions.MetresPerFoot),
+        new(b + "_m", "m", (v, _) => v),
+    ];
+
+    private static KeyAlternative[] Area(string b) =>
+    [
+        new(b + "_ft2", "ft2", (v, _) => v * Conversions.MetresPerFoot * Conversions.MetresPerFoot),
+        new(b + "_m2", "m2", (v, _) => v),
+    ];
+
+    private static KeyAlternative[] PowerAlternatives(string b) =>
+    [
+        new(b + "_btuh", "Btu/h", (v, _) => Units.Power.FromBtuPerHour(v).Watts),
+        new(b + "_kw", "kW", (v, _) => v * 1000.0),
+    ];
+
+    private static KeyAlternative[] PressureDrop(string b) =>
+    [
+        new(b + "_inwc", "in. w.g.", (v, _) => v * Conversions.PascalsPerInchOfWater),
+        new(b + "_pa", "Pa", (v, _) => v),
+    ];
+
+    private static KeyAlternative[] Enthalpy(string b) =>
+    [
+        new(b + "_btu_lb", "Btu/lb", (v, _) => SpecificEnthalpy.FromBtuPerPound(v).JoulesPerKilogram),
+        new(b + "_kj_kg", "kJ/kg", (v, _) => v * 1000.0),
+    ];
+
+    /// <summary>
+    /// A rating that is one number or [temperature, value] pairs: the plain key reads the
+    /// temperatures in the study's display unit; <c>_f</c> and <c>_c</c> say the unit.
+    /// </summary>
+    private static KeyAlternative[] Rating(string b, Func<double, UnitSystem, double> toCop) =>
+    [
+        new(b, string.Empty, toCop, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+        new(b + "_f", "F", toCop, (t, _) => Conversions.FahrenheitToCelsius(t)),
+        new(b + "_c", "C", toCop, (t, _) => t),
+    ];
+}

@@ -1,0 +1,40 @@
+using BinEnergy.Core.Study;
+using BinEnergy.Reporting.Tables;
+
+namespace BinEnergy.Reporting.Study;
+
+/// <summary>
+/// Writes a study run into its output folder atomically: <c>tables/NAME.parquet</c> and
+/// <c>tables/NAME.csv</c> for every table, and <c>summary.json</c>. Extra content (charts,
+/// report) is added through the <c>extra</c> callback before the folder is committed.
+/// </summary>
+public static class StudyOutputWriter
+{
+    /// <summary>Writes the run into <paramref name="folder"/>; returns the tables written.</summary>
+    /// <exception cref="OutputFolderException">The folder exists and is not empty, and <paramref name="force"/> is false.</exception>
+    public static async Task<IReadOnlyList<ResultTable>> WriteAsync(StudyRunResult run, string folder, bool force, bool hourly,
+        Action<OutputFolder>? extra = null, CancellationToken ct = default)
+    {
+        using var output = OutputFolder.Begin(folder, force);
+        var tables = StudyTables.Build(run, hourly);
+        var metadata = new Dictionary<string, string>
+        {
+            ["binenergy.study"] = run.Study.Name,
+            ["binenergy.units"] = run.Study.Units == Core.Units.UnitSystem.IP ? "ip" : "si",
+            ["binenergy.engine_version"] = run.EngineVersion,
+            ["binenergy.study_sha256"] = run.Study.Hash,
+            ["binenergy.currency"] = run.Study.Currency,
+        };
+        foreach (var table in tables)
+        {
+            var meta = new Dictionary<string, string>(metadata) { ["binenergy.table"] = table.Name };
+            await ParquetTableWriter.WriteAsync(table, output.PathFor("tables", table.Name + ".parquet"), meta, ct);
+            CsvTableWriter.Write(table, output.PathFor("tables", table.Name + ".csv"));
+        }
+
+        await File.WriteAllTextAsync(output.PathFor("summary.json"), StudySummary.ToJson(run), ct);
+        extra?.Invoke(output);
+        output.Commit();
+        return tables;
+    }
+}

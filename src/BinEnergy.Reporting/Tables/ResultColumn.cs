@@ -1,0 +1,92 @@
+namespace BinEnergy.Reporting.Tables;
+
+/// <summary>
+/// One column of a <see cref="ResultTable"/>: a name (with its unit suffix, e.g.
+/// <c>heating_kbtu</c>), a kind and the values, one per row.
+/// </summary>
+public sealed class ResultColumn
+{
+    private readonly List<string> texts = [];
+    private readonly List<double> numbers = [];
+    private readonly List<int> integers = [];
+
+    internal ResultColumn(string name, ColumnKind kind)
+    {
+        Name = name;
+        Kind = kind;
+    }
+
+    /// <summary>Column name, lower snake case, unit-suffixed for quantities.</summary>
+    public string Name { get; }
+
+    /// <summary>Value type.</summary>
+    public ColumnKind Kind { get; }
+
+    /// <summary>Number of values.</summary>
+    public int Count => Kind switch
+    {
+        ColumnKind.Text => texts.Count,
+        ColumnKind.Number => numbers.Count,
+        _ => integers.Count,
+    };
+
+    /// <summary>The values of a text column.</summary>
+    public IReadOnlyList<string> Texts => Kind == ColumnKind.Text ? texts : throw WrongKind(ColumnKind.Text);
+
+    /// <summary>The values of a number column.</summary>
+    public IReadOnlyList<double> Numbers => Kind == ColumnKind.Number ? numbers : throw WrongKind(ColumnKind.Number);
+
+    /// <summary>The values of an integer column.</summary>
+    public IReadOnlyList<int> Integers => Kind == ColumnKind.Integer ? integers : throw WrongKind(ColumnKind.Integer);
+
+    /// <summary>True when <paramref name="value"/> can be stored in this column.</summary>
+    internal bool Accepts(object value) => Kind switch
+    {
+        ColumnKind.Text => value is string,
+        ColumnKind.Number => value is double or int,
+        _ => value is int,
+    };
+
+    internal ArgumentException WrongValue(object value) =>
+        new($"column '{Name}' holds {Kind} values; got {value?.GetType().Name ?? "null"}");
+
+    internal void Add(object value)
+    {
+        switch (Kind)
+        {
+            case ColumnKind.Text:
+                texts.Add(value as string ?? throw WrongValue(value));
+                break;
+            case ColumnKind.Number:
+                numbers.Add(value switch
+                {
+                    double d => d,
+                    int i => i,
+                    _ => throw WrongValue(value),
+                });
+                break;
+            default:
+                integers.Add(value is int n ? n : throw WrongValue(value));
+                break;
+        }
+    }
+
+    internal void AddRange(ResultColumn other)
+    {
+        switch (Kind)
+        {
+            case ColumnKind.Text:
+                texts.AddRange(other.texts);
+                break;
+            case ColumnKind.Number:
+                numbers.AddRange(other.numbers);
+                break;
+            default:
+                integers.AddRange(other.integers);
+                break;
+        }
+    }
+
+    private InvalidOperationException WrongKind(ColumnKind asked) =>
+        new($"column '{Name}' holds {Kind} values, not {asked}");
+}

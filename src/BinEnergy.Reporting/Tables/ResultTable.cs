@@ -1,0 +1,114 @@
+using System.Text.RegularExpressions;
+
+namespace BinEnergy.Reporting.Tables;
+
+/// <summary>
+/// A columnar result table in long format (one row per climate x variant x bin, month,
+/// control, ...): ordered, typed, unit-suffixed columns. Filled row by row with
+/// <see cref="AddRow"/> after the columns are declared; tables with the same columns append.
+/// Reporting only carries and writes these values; the engine computes them.
+/// </summary>
+public sealed partial class ResultTable
+{
+    private readonly List<ResultColumn> columns = [];
+    private readonly Dictionary<string, int> index = new(StringComparer.Ordinal);
+
+    /// <summary>Creates an empty table.</summary>
+    /// <param name="name">Table name, used as the file name (<c>annual</c> gives annual.parquet, annual.csv).</param>
+    public ResultTable(string name)
+    {
+        if (!ColumnNamePattern().IsMatch(name))
+        {
+            throw new ArgumentException($"table name '{name}' must be lower snake case");
+        }
+
+        Name = name;
+    }
+
+    /// <summary>Table name.</summary>
+    public string Name { get; }
+
+    /// <summary>The columns in order.</summary>
+    public IReadOnlyList<ResultColumn> Columns => columns;
+
+    /// <summary>Number of rows.</summary>
+    public int RowCount => columns.Count == 0 ? 0 : columns[0].Count;
+
+    /// <summary>The column with this name.</summary>
+    public ResultColumn this[string name] =>
+        index.TryGetValue(name, out int i) ? columns[i] : throw new KeyNotFoundException($"table '{Name}' has no column '{name}'");
+
+    /// <summary>True when a column of that name exists.</summary>
+    public bool HasColumn(string name) => index.ContainsKey(name);
+
+    /// <summary>Declares a text column.</summary>
+    public ResultTable Text(string name) => Declare(name, ColumnKind.Text);
+
+    /// <summary>Declares a floating-point column; the name must end with its unit (e.g. <c>_kbtu</c>).</summary>
+    public ResultTable Number(string name) => Declare(name, ColumnKind.Number);
+
+    /// <summary>Declares an integer column (whole hours, months).</summary>
+    public ResultTable Integer(string name) => Declare(name, ColumnKind.Integer);
+
+    /// <summary>Adds one row, values in column order (string, double or int as declared).</summary>
+    public void AddRow(params object[] values)
+    {
+        if (values.Length != columns.Count)
+        {
+            throw new ArgumentException($"table '{Name}' has {columns.Count} columns; a row of {values.Length} values was given");
+        }
+
+        // Check every value first, so a bad row leaves the table as it was.
+        for (int i = 0; i < values.Length; i++)
+        {
+            if (!columns[i].Accepts(values[i]))
+            {
+                throw columns[i].WrongValue(values[i]);
+            }
+        }
+
+        for (int i = 0; i < values.Length; i++)
+        {
+            columns[i].Add(values[i]);
+        }
+    }
+
+    /// <summary>Appends the rows of a table with the same columns (same names, kinds and order).</summary>
+    public void Append(ResultTable other)
+    {
+        if (other.columns.Count != columns.Count ||
+            other.columns.Zip(columns).Any(p => p.First.Name != p.Second.Name || p.First.Kind != p.Second.Kind))
+        {
+            throw new ArgumentException($"table '{other.Name}' does not have the columns of '{Name}'");
+        }
+
+        for (int i = 0; i < columns.Count; i++)
+        {
+            columns[i].AddRange(other.columns[i]);
+        }
+    }
+
+    private ResultTable Declare(string name, ColumnKind kind)
+    {
+        if (RowCount > 0)
+        {
+            throw new InvalidOperationException($"declare the columns of '{Name}' before adding rows");
+        }
+
+        if (!ColumnNamePattern().IsMatch(name))
+        {
+            throw new ArgumentException($"column name '{name}' must be lower snake case");
+        }
+
+        if (!index.TryAdd(name, columns.Count))
+        {
+            throw new ArgumentException($"table '{Name}' already has a column '{name}'");
+        }
+
+        columns.Add(new ResultColumn(name, kind));
+        return this;
+    }
+
+    [GeneratedRegex("^[a-z][a-z0-9_]*$")]
+    private static partial Regex ColumnNamePattern();
+}

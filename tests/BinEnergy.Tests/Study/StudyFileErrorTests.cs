@@ -1,0 +1,102 @@
+using BinEnergy.Core.Errors;
+using BinEnergy.Core.Study;
+
+namespace BinEnergy.Tests.Study;
+
+/// <summary>
+/// The corpus of malformed studies: each one is the example study with one mistake, and the
+/// test asserts the error names the file, the line and the key, and says how to fix it.
+/// </summary>
+public sealed class StudyFileErrorTests : IDisposable
+{
+    private readonly string folder = Directory.CreateTempSubdirectory("binenergy-study-errors-").FullName;
+
+    public StudyFileErrorTests()
+    {
+        // Only the existence of the weather file matters when the study file is read.
+        File.WriteAllText(Path.Combine(folder, "harbor.csv"), "time,drybulb_c,dewpoint_c\n");
+    }
+
+    public void Dispose() => Directory.Delete(folder, recursive: true);
+
+    public static TheoryData<string, string, string, string, string> Corpus()
+    {
+        var data = new TheoryData<string, string, string, string, string>();
+        void Replace(string name, string find, string replacement, string key, string message) =>
+            Add(name, ExampleStudy.ReplaceLine(find, replacement), key, message);
+        void Add(string name, (string Text, int Line) study, string key, string message) =>
+            data.Add(name, study.Text, $"line {study.Line}", key, message);
+
+        Replace("syntax error (unclosed table header)", "[ventilation]", "[ventilation", "harbor-study.toml", "this is not valid TOML");
+        Replace("unknown key with a near match", "airflow_cfm = 2000", "airflw_cfm = 2000", "key ventilation.airflw_cfm", "did you mean airflow_cfm?");
+        Replace("wrong unit suffix", "airflow_cfm = 2000", "airflow_cmh = 2000", "key ventilation.airflow_cmh",
+            "'cmh' is not a unit this key accepts: write one of airflow_cfm (cfm), airflow_ls (L/s), airflow_m3h (m3/h)");
+        Replace("unit missing from the name", "heat_to_f = 70", "heat_to = 70", "key ventilation.heat_to", "'heat_to' needs its unit in its name: write one of heat_to_f (F), heat_to_c (C)");
+        Replace("missing weather file", "weather = \"harbor.csv\"", "weather = \"harbour.csv\"", "key climate.weather", "weather file not found");
+        Replace("negative airflow", "airflow_cfm = 2000", "airflow_cfm = -2000", "key ventilation.airflow_cfm", "-2000 cfm is out of range (negative values have no physical meaning here)");
+        Replace("variant overriding an unknown key", "ventilation.airflow_cfm = 2600", "ventilation.airflow_cfn = 2600", "key variant.ventilation.airflow_cfn",
+            "this variant overrides an unknown key: unknown key 'airflow_cfn' in [ventilation]; did you mean airflow_cfm?");
+        Replace("duplicate variant names", "name = \"plus-30\"", "name = \"minimum\"", "key variant.name", "variant \"minimum\" is already defined on line 57; variant names must be unique");
+        Replace("misspelled table", "[plant]", "[plnat]", "key plnat", "unknown table [plnat]; did you mean [plant]?");
+        Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
+        Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");
+        Replace("effectiveness above one", "sensible_effectiveness = 0.70", "sensible_effectiveness = 1.7", "key recovery.sensible_effectiveness", "1.7 is out of range: expected a value between 0 and 1");
+        Replace("relative humidity above 100", "max_rh_pct = 50", "max_rh_pct = 150", "key ventilation.max_rh_pct", "150 is out of range: expected a percentage above 0 and at most 100");
+        Replace("variant overriding a climate", "recovery.enabled = false", "climate.weather = \"other.csv\"", "key variant.climate.weather", "climates are the other axis of the run");
+        Replace("a rating point that is not a pair", "cooling_cop = [[65, 4.2]", "cooling_cop = [[65, 4.2, 1], [95, 3.2]]", "key plant.cooling_cop", "each point must be a pair [outdoor temperature, value]");
+        Replace("unknown economizer control", "controls = [", "controls = [\"fixed-drybulbs\"]", "key economizer.controls", "\"fixed-drybulbs\" is not one of fixed-drybulb, differential-drybulb, fixed-enthalpy, differential-enthalpy, fixed-dewpoint; did you mean \"fixed-drybulb\"?");
+        Replace("misspelled fuel", "heating_fuel = \"gas\"", "heating_fuel = \"gaz\"", "key plant.heating_fuel", "did you mean \"gas\"?");
+        Replace("variant key without its table", "ventilation.airflow_cfm = 2600", "airflow_cfm = 2600", "key variant.airflow_cfm", "did you mean ventilation.airflow_cfm?");
+        Replace("the same key twice", "cool_to_f = 75", "heat_to_f = 75", "ventilation", "is already defined");
+        Replace("the same value in two units", "cool_to_f = 75", "heat_to_c = 21", "key ventilation.heat_to_c", "heat_to_f (line 19) already sets this value; give it once, in one unit");
+        Replace("balance point below absolute plausibility", "balance_point_f = 55", "balance_point_f = -400", "key economizer.balance_point_f", "-400 F is out of range");
+        Replace("price that is negative", "price_gas_per_therm = 1.10", "price_gas_per_therm = -1.10", "key plant.price_gas_per_therm", "out of range (negative values have no physical meaning here): expected zero or more");
+        Replace("a key above every table", "[study]", "name = \"x\"\n[study]", "key name", "keys must be inside a table");
+        return data;
+    }
+
+    [Theory]
+    [MemberData(nameof(Corpus))]
+    public void MalformedStudy_GivesFileLineKeyAndFix(string name, string text, string line, string key, string message)
+    {
+        string path = Path.Combine(folder, "harbor-study.toml");
+        File.WriteAllText(path, text);
+        var e = Assert.Throws<StudyFileException>(() => StudyFileReader.Read(path));
+        Assert.IsAssignableFrom<InputDataException>(e);
+        Assert.True(e.Message.StartsWith(path + ", " + line, StringComparison.Ordinal), $"{name}: '{e.Message}' should start with the file and {line}");
+        Assert.True(e.Message.Contains(key, StringComparison.Ordinal), $"{name}: '{e.Message}' should name {key}");
+        Assert.True(e.Message.Contains(message, StringComparison.Ordinal), $"{name}: '{e.Message}' should say '{message}'");
+    }
+
+    [Fact]
+    public void ExampleStudy_ReadsAsWritten()
+    {
+        string path = Path.Combine(folder, "harbor-study.toml");
+        File.WriteAllText(path, ExampleStudy.Text);
+        var study = StudyFileReader.Read(path);
+        Assert.Equal("Harbor office ventilation options", study.Name);
+        Assert.Equal(["harbor"], study.Climates.Select(c => c.Name));
+        Assert.Equal(["minimum", "plus-30", "no-recovery"], study.Variants.Select(v => v.Name));
+        Assert.Equal(["ventilation.airflow_cfm"], study.Variants[1].Overrides);
+        Assert.Equal(64, study.Hash.Length);
+    }
+
+    [Fact]
+    public void MissingStudyFile_NamesThePath()
+    {
+        string path = Path.Combine(folder, "nowhere.toml");
+        var e = Assert.Throws<StudyFileException>(() => StudyFileReader.Read(path));
+        Assert.Contains("nowhere.toml: the study file does not exist", e.Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void StudyWithoutClimate_SaysHowToAddOne()
+    {
+        string text = ExampleStudy.Text.Replace("[[climate]]\nname = \"harbor\"\nweather = \"harbor.csv\"", string.Empty, StringComparison.Ordinal);
+        text = string.Join('\n', text.Split('\n').Where(l => !l.StartsWith("name = \"harbor\"", StringComparison.Ordinal) && !l.StartsWith("weather =", StringComparison.Ordinal) && l != "[[climate]]"));
+        string path = Path.Combine(folder, "no-climate.toml");
+        File.WriteAllText(path, text);
+        var e = Assert.Throws<StudyFileException>(() => StudyFileReader.Read(path));
+        Assert.Contains("the study has no climate; add a [[climate]] table", e.Message, StringComparison.Ordinal);
+    }
+}

@@ -1,0 +1,331 @@
+using System.Globalization;
+using System.Text.Json;
+using BinEnergy.Cli;
+using BinEnergy.Core.Binning;
+using BinEnergy.Core.Loads;
+using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Core.Schedules;
+using BinEnergy.Core.Units;
+using BinEnergy.Core.Weather;
+using BinEnergy.Tests.Support;
+
+namespace BinEnergy.Tests.Study;
+
+/// <summary>
+/// Runs the example study end to end through the command line on an invented climate, and
+/// checks the outputs against the outdoor-air engine called directly (one engine, not two)
+/// and against an outside reader (DuckDB through its npm package).
+/// </summary>
+public sealed class StudyRunTests : IDisposable
+{
+    private readonly string folder = Directory.CreateTempSubdirectory("binenergy-study-run-").FullName;
+
+    public StudyRunTests()
+    {
+        // An invented mild coastal climate ("harbor"), 8,760 hours from the test synthesizer.
+        var weather = SyntheticWeather.Year(meanC: 11, annualSwingK: 13, dailySwingK: 5, spreadK: 3, name: "Harbor (invented)");
+        using var writer = new StreamWriter(Path.Combine(folder, "harbor.csv"));
+        OpenLayoutWriter.Write(weather, writer);
+    }
+
+    public void Dispose() => Directory.Delete(folder, recursive: true);
+
+    private string StudyPath(string text, string name = "harbor-study.toml")
+    {
+        string path = Path.Combine(folder, name);
+        File.WriteAllText(path, text);
+        return path;
+    }
+
+    private static (int Code, string Out, string Err) Cli(params string[] args)
+    {
+        var stdout = new StringWriter();
+        var stderr = new StringWriter();
+        int code = CliApp.Run(args, stdout, stderr);
+        return (code, stdout.ToString(), stderr.ToString());
+    }
+
+    private static List<Dictionary<string, string>> ReadCsv(string path)
+    {
+        var lines = File.ReadAllLines(path);
+        var header = lines[0].Split(',');
+        return lines.Skip(1).Select(l => header.Zip(l.Split(',')).ToDictionary(p => p.First, p => p.Second)).ToList();
+    }
+
+    private static double D(string s) => double.Parse(s, CultureInfo.InvariantCulture);
+
+    [Fact]
+    public void ExampleStudy_ReproducesTheOutdoorAirEngineExactly()
+    {
+        string out1 = Path.Combine(folder, "out");
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
+        Assert.True(code == 0, err);
+        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        Assert.Equal(6, annual.Count); // 1 climate x 3 variants x 2 methods
+
+        // The same settings written out by hand from the example study, given to the engine directly.
+        var weather = WeatherReader.Read(Path.Combine(folder, "harbor.csv"));
+        var recovery = new EnergyRecoverySettings
+        {
+            SensibleEffectiveness = 0.70,
+            LatentEffectiveness = 0.55,
+            FrostLimit = Temperature.FromFahrenheit(10),
+            FrostEffectiveness = 0.35,
+            PressureDropPa = 0.8 * Conversions.PascalsPerInchOfWater,
+            FanEfficiency = 0.6,
+        };
+        var baseSettings = new OutdoorAirSettings
+        {
+            Airflow = VolumeFlow.FromCfm(2000),
+            FlowBasis = FlowBasis.Site,
+            Operation = VentilationOperation.Occupied,
+            Schedule = OccupancySchedule.Parse("Mon-Fri 07:00-19:00; Sat 08:00-13:00"),
+            HeatTo = Temperature.FromFahrenheit(70),
+            CoolTo = Temperature.FromFahrenheit(75),
+            MaxRelativeHumidity = 0.50,
+            Recovery = recovery,
+        };
+        var variants = new Dictionary<string, OutdoorAirSettings>
+        {
+            ["minimum"] = baseSettings,
+            ["plus-30"] = baseSettings with { Airflow = VolumeFlow.FromCfm(2600) },
+            ["no-recovery"] = baseSettings with { Recovery = null },
+        };
+        foreach (var (variant, settings) in variants)
+        {
+            var engine = OutdoorAirCalculator.Compute(weather, settings, new DryBulbBinScale(5, UnitSystem.IP));
+            foreach (var (method, totals) in new[] { ("bin", engine.Bin), ("hourly", engine.Hourly) })
+            {
+                var row = annual.Single(r => r["variant"] == variant && r["method"] == method);
+                Assert.Equal(totals.HoursVentilated, int.Parse(row["hours_ventilated"], CultureInfo.InvariantCulture));
+                Assert.Equal(totals.Heating.Kbtu, D(row["heating_kbtu"]));
+                Assert.Equal(totals.CoolingSensible.Kbtu, D(row["cooling_sensible_kbtu"]));
+                Assert.Equal(totals.CoolingLatent.Kbtu, D(row["cooling_latent_kbtu"]));
+                Assert.Equal(totals.RecoveredHeating.Kbtu, D(row["recovered_heating_kbtu"]));
+                Assert.Equal(totals.RecoveredCooling.Kbtu, D(row["recovered_cooling_kbtu"]));
+                Assert.Equal(totals.FanEnergy.KilowattHours, D(row["fan_kwh"]), 9);
+            }
+        }
+
+        // Loads scale linearly with airflow: plus-30 carries 1.3 times the heating of minimum (exact up to rounding).
+        double h0 = D(annual.Single(r => r["variant"] == "minimum" && r["method"] == "bin")["heating_kbtu"]);
+        double h1 = D(annual.Single(r => r["variant"] == "plus-30" && r["method"] == "bin")["heating_kbtu"]);
+        Assert.Equal(1.3, h1 / h0, 9);
+
+        // Gas bought by the bin method: heating / 0.85 in therms, priced at $1.10 (hand check, 1 therm = 100 kBtu).
+        var minBin = annual.Single(r => r["variant"] == "minimum" && r["method"] == "bin");
+        Assert.Equal(h0 / 0.85 / 100.0, D(minBin["gas_therm"]), 6);
+        Assert.Equal(h0 / 0.85 / 100.0 * 1.10, D(minBin["heating_cost_usd"]), 6);
+    }
+
+    [Fact]
+    public void ExampleStudy_ReproducesTheOutdoorAirCommandExactly()
+    {
+        string out1 = Path.Combine(folder, "out");
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
+        Assert.True(code == 0, err);
+        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        string[] common = ["outdoor-air", Path.Combine(folder, "harbor.csv"), "--heat-to", "70", "--cool-to", "75", "--max-rh", "50",
+            "--occupied", "Mon-Fri 07:00-19:00; Sat 08:00-13:00", "--flow-basis", "site", "--json"];
+        string[] recovery = ["--recovery-sensible", "0.70", "--recovery-latent", "0.55", "--frost-limit", "10", "--frost-effectiveness", "0.35",
+            "--recovery-pressure", "0.8", "--fan-efficiency", "0.6"];
+        var variants = new Dictionary<string, string[]>
+        {
+            ["minimum"] = [.. common, "--airflow", "2000", .. recovery],
+            ["plus-30"] = [.. common, "--airflow", "2600", .. recovery],
+            ["no-recovery"] = [.. common, "--airflow", "2000"],
+        };
+        foreach (var (variant, args) in variants)
+        {
+            var (c, json, e) = Cli(args);
+            Assert.True(c == 0, e);
+            using var doc = JsonDocument.Parse(json);
+            foreach (var method in new[] { "bin", "hourly" })
+            {
+                var expected = doc.RootElement.GetProperty(method);
+                var row = annual.Single(r => r["variant"] == variant && r["method"] == method);
+                Assert.Equal(expected.GetProperty("hours_ventilated").GetInt32(), int.Parse(row["hours_ventilated"], CultureInfo.InvariantCulture));
+                foreach (var figure in new[] { "heating", "cooling_sensible", "cooling_latent", "humidification", "recovered_heating", "recovered_cooling" })
+                {
+                    Assert.Equal(expected.GetProperty(figure).GetDouble(), D(row[figure + "_kbtu"]));
+                }
+
+                // The command gives fan energy in kBtu in IP; the table in kWh (1 kWh = 3412.14 Btu, DESIGN 3).
+                Assert.Equal(expected.GetProperty("fan_energy").GetDouble(), D(row["fan_kwh"]) * Conversions.BtuPerKilowattHour / 1000.0, 6);
+            }
+        }
+    }
+
+    [Fact]
+    public void ExampleStudy_ReproducesTheEconomizerCommandExactly()
+    {
+        string out1 = Path.Combine(folder, "out");
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
+        Assert.True(code == 0, err);
+        var rows = ReadCsv(Path.Combine(out1, "tables", "economizer.csv"));
+
+        // The [economizer] table of the example, given to the economizer command.
+        var (code2, json, err2) = Cli("economizer", Path.Combine(folder, "harbor.csv"), "--supply-airflow", "10000", "--min-outdoor-airflow", "2000",
+            "--supply-temp", "55", "--return-temp", "75", "--return-rh", "50", "--design-load", "300000", "--design-outdoor", "95",
+            "--balance-point", "55", "--occupied", "Mon-Fri 07:00-19:00; Sat 08:00-13:00", "--high-limit-drybulb", "75",
+            "--high-limit-enthalpy", "28", "--high-limit-dewpoint", "55", "--json");
+        Assert.True(code2 == 0, err2);
+        using var doc = JsonDocument.Parse(json);
+        var controls = doc.RootElement.GetProperty("controls");
+        string[] names = ["none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"];
+        Assert.Equal(names.Length * 2 * 3, rows.Count); // controls x methods x variants (the economizer does not depend on the ventilation variants here)
+        foreach (var variant in new[] { "minimum", "plus-30", "no-recovery" })
+        {
+            foreach (var name in names)
+            {
+                var command = name == "none" ? doc.RootElement.GetProperty("baseline") : controls.GetProperty(name);
+                foreach (var method in new[] { "bin", "hourly" })
+                {
+                    var expected = command.GetProperty(method);
+                    var row = rows.Single(r => r["variant"] == variant && r["control"] == name && r["method"] == method);
+                    Assert.Equal(expected.GetProperty("hours_free").GetDouble(), D(row["hours_free"]));
+                    Assert.Equal(expected.GetProperty("hours_integrated").GetDouble(), D(row["hours_integrated"]));
+                    Assert.Equal(expected.GetProperty("hours_minimum").GetDouble(), D(row["hours_minimum"]));
+                    Assert.Equal(expected.GetProperty("coil_total").GetDouble(), D(row["coil_total_kbtu"]));
+                    Assert.Equal(expected.GetProperty("savings").GetDouble(), D(row["savings_kbtu"]));
+                }
+            }
+        }
+
+        // Compressor energy is the coil energy through the cooling COP (between 2.6 and 4.2 in the example): a bracket check.
+        var baseline = rows.Single(r => r["variant"] == "minimum" && r["control"] == "none" && r["method"] == "bin");
+        double coilKwh = D(baseline["coil_total_kbtu"]) * 1000 / 3412.14; // 1 kWh = 3412.14 Btu (DESIGN 3)
+        Assert.InRange(D(baseline["compressor_kwh"]), coilKwh / 4.2, coilKwh / 2.6);
+        Assert.Equal(D(baseline["compressor_kwh"]) * 0.14, D(baseline["compressor_cost_usd"]), 6);
+    }
+
+    [Fact]
+    public void ParquetTables_ReadByDuckDb_MatchCsvAndSummary()
+    {
+        string out1 = Path.Combine(folder, "out");
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1, "--hourly");
+        Assert.True(code == 0, err);
+        var sums = new Dictionary<string, string[]>
+        {
+            ["annual"] = ["hours_ventilated", "heating_kbtu", "cooling_latent_kbtu", "cost_usd", "carbon_kg"],
+            ["bins"] = ["hours", "hours_occupied", "heating_kbtu"],
+            ["monthly"] = ["month", "heating_kbtu", "electricity_kwh"],
+            ["economizer"] = ["hours_free", "coil_total_kbtu", "savings_cost_usd"],
+            ["peaks"] = ["drybulb_f", "total_btuh"],
+            ["hourly"] = ["occupied", "heating_kbtu"],
+        };
+        var duck = NodeReference.Run<Dictionary<string, DuckTable>>("duckdb-tables.mjs", new { folder = out1, sums });
+        foreach (var (table, columns) in sums)
+        {
+            string csvPath = Path.Combine(out1, "tables", table + ".csv");
+            var header = File.ReadLines(csvPath).First().Split(',');
+            var rows = ReadCsv(csvPath);
+            var seen = duck[table];
+            Assert.Equal(rows.Count, seen.rows);
+            Assert.Equal(header, seen.columns.Select(c => c.name));
+            foreach (var c in seen.columns)
+            {
+                // Proper types: names are strings, quantities doubles, hours and months 32-bit integers.
+                string expected = c.name is "climate" or "variant" or "method" or "control" or "integration" or "condition" or "time" ? "VARCHAR"
+                    : c.name is "hours_ventilated" or "hours" or "hours_occupied" or "month" or "hour" or "occupied" ? "INTEGER" : "DOUBLE";
+                Assert.True(expected == c.type, $"{table}.{c.name} is {c.type}, expected {expected}");
+            }
+
+            foreach (var col in columns)
+            {
+                double csvSum = rows.Sum(r => D(r[col]));
+                Assert.Equal(csvSum, seen.sums[col]!.Value, Math.Max(1e-9, Math.Abs(csvSum) * 1e-12));
+            }
+
+            Assert.Equal("Harbor office ventilation options", seen.metadata["binenergy.study"]);
+            Assert.Equal("ip", seen.metadata["binenergy.units"]);
+            Assert.False(string.IsNullOrEmpty(seen.metadata["binenergy.engine_version"]));
+        }
+
+        // 8,760 hours x 3 variants in the hourly table; bins hold every hour of the record once per variant.
+        Assert.Equal(8760 * 3, duck["hourly"].rows);
+        Assert.Equal(8760.0 * 3, duck["bins"].sums["hours"]);
+
+        // summary.json carries the same headline numbers as the annual table's bin rows.
+        using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
+        double summaryHeating = summary.RootElement.GetProperty("cases").EnumerateArray().Sum(c => c.GetProperty("bin").GetProperty("heating_kbtu").GetDouble());
+        double annualBinHeating = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "bin").Sum(r => D(r["heating_kbtu"]));
+        Assert.Equal(annualBinHeating, summaryHeating, 6);
+        Assert.Equal(64, summary.RootElement.GetProperty("study_sha256").GetString()!.Length);
+
+        // The monthly table's heating adds up to the hourly method's annual heating.
+        double monthly = duck["monthly"].sums["heating_kbtu"]!.Value;
+        double annualHourly = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
+        Assert.Equal(annualHourly, monthly, 6);
+    }
+
+    [Fact]
+    public void NonEmptyOutputFolder_IsRefusedWithoutForce_AndAFailedRunLeavesItAsItWas()
+    {
+        string out1 = Path.Combine(folder, "out");
+        Directory.CreateDirectory(out1);
+        File.WriteAllText(Path.Combine(out1, "keep.txt"), "earlier results");
+
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
+        Assert.Equal(ExitCodes.BadInput, code);
+        Assert.Contains("already exists and is not empty: add --force", err, StringComparison.Ordinal);
+
+        // A study that fails while running (a schedule the engine rejects) leaves the folder untouched, even with --force.
+        var (bad, _) = ExampleStudy.ReplaceLine("occupied = \"Mon-Fri", "occupied = \"Mon-Fry 07:00-19:00\"");
+        var (code2, _, err2) = Cli("run", StudyPath(bad, "bad.toml"), "--out", out1, "--force");
+        Assert.Equal(ExitCodes.BadInput, code2);
+        Assert.Contains("key schedule.occupied", err2, StringComparison.Ordinal);
+        Assert.Equal(["keep.txt"], Directory.GetFileSystemEntries(out1).Select(Path.GetFileName));
+        Assert.Empty(Directory.GetDirectories(folder, ".out.partial-*"));
+
+        // With --force a good run replaces it as a whole.
+        var (code3, _, err3) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1, "--force");
+        Assert.True(code3 == 0, err3);
+        Assert.False(File.Exists(Path.Combine(out1, "keep.txt")));
+        Assert.True(File.Exists(Path.Combine(out1, "tables", "annual.parquet")));
+    }
+
+    [Fact]
+    public void VariantBelowPeopleAndAreaMinimum_WarnsAboutOccupantsAndTheCode()
+    {
+        // 50 people x 5 cfm + 10,000 ft2 x 0.06 cfm/ft2 = 850 cfm (rates invented for the test); the "tight" variant gives 600 cfm.
+        string text = ExampleStudy.Text.Replace("\nairflow_cfm = 2000", "\nairflow_cfm = 2000\npeople = 50\nper_person_cfm = 5\narea_ft2 = 10000\nper_area_cfm = 0.06", StringComparison.Ordinal)
+            + "\n[[variant]]\nname = \"tight\"\nventilation.airflow_cfm = 600\n";
+        string out1 = Path.Combine(folder, "out");
+        var (code, stdout, err) = Cli("run", StudyPath(text), "--out", out1);
+        Assert.True(code == 0, err);
+        Assert.Contains("harbor / tight: The airflow 600 cfm", err, StringComparison.Ordinal);
+        Assert.Contains("below the people-and-area minimum you entered, 850 cfm", err, StringComparison.Ordinal);
+        Assert.Contains("harms occupants", err, StringComparison.Ordinal);
+        Assert.Contains("licensed engineer", stdout, StringComparison.Ordinal);
+        using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
+        var tight = summary.RootElement.GetProperty("cases").EnumerateArray().Single(c => c.GetProperty("variant").GetString() == "tight");
+        Assert.Contains(tight.GetProperty("warnings").EnumerateArray(), w => w.GetString()!.Contains("locally adopted code", StringComparison.Ordinal));
+        var minimum = summary.RootElement.GetProperty("cases").EnumerateArray().First(c => c.GetProperty("variant").GetString() == "minimum");
+        Assert.DoesNotContain(minimum.GetProperty("warnings").EnumerateArray(), w => w.GetString()!.Contains("people-and-area", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void SiStudy_UsesSiColumnNames()
+    {
+        string text = ExampleStudy.Text.Replace("units = \"ip\"", "units = \"si\"", StringComparison.Ordinal)
+            .Replace("bin_width_f = 5", "bin_width_c = 2", StringComparison.Ordinal)
+
+            // A rating key without a temperature suffix reads its temperatures in the study's units: say F explicitly.
+            .Replace("cooling_cop = ", "cooling_cop_f = ", StringComparison.Ordinal);
+        string out1 = Path.Combine(folder, "out-si");
+        var (code, _, err) = Cli("run", StudyPath(text), "--out", out1);
+        Assert.True(code == 0, err);
+        var header = File.ReadLines(Path.Combine(out1, "tables", "bins.csv")).First().Split(',');
+        Assert.Contains("bin_low_c", header);
+        Assert.Contains("heating_kwh", header);
+        Assert.Contains("mean_humidity_ratio_kg_kg", header);
+        Assert.Contains("gas_kwh", header);
+        var bins = ReadCsv(Path.Combine(out1, "tables", "bins.csv"));
+        Assert.All(bins, b => Assert.Equal(2.0, D(b["bin_high_c"]) - D(b["bin_low_c"]), 9));
+    }
+
+    private sealed record DuckTable(int rows, List<DuckColumn> columns, Dictionary<string, double?> sums, Dictionary<string, string> metadata);
+
+    private sealed record DuckColumn(string name, string type, string nullable);
+}
