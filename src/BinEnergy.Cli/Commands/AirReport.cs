@@ -35,18 +35,32 @@ internal sealed record AirReport(AirState State, UnitSystem Units, string Pressu
     public IReadOnlyDictionary<string, string> UnitNames => Ip
         ? new Dictionary<string, string>
         {
-            ["drybulb"] = "F", ["wetbulb"] = "F", ["dewpoint"] = "F", ["rh_pct"] = "%",
-            ["humidity_ratio"] = "lb/lb", ["enthalpy"] = "Btu/lb (dry air, 0 F datum)",
-            ["specific_volume"] = "ft3/lb (dry air)", ["density"] = "lb/ft3", ["pressure"] = "psia",
-            ["sensible_factor"] = "Btu/(h cfm F)", ["latent_factor"] = "Btu/(h cfm) per lb/lb",
+            ["drybulb"] = "F",
+            ["wetbulb"] = "F",
+            ["dewpoint"] = "F",
+            ["rh_pct"] = "%",
+            ["humidity_ratio"] = "lb/lb",
+            ["enthalpy"] = "Btu/lb (dry air, 0 F datum)",
+            ["specific_volume"] = "ft3/lb (dry air)",
+            ["density"] = "lb/ft3",
+            ["pressure"] = "psia",
+            ["sensible_factor"] = "Btu/(h cfm F)",
+            ["latent_factor"] = "Btu/(h cfm) per lb/lb",
             ["total_factor"] = "Btu/(h cfm) per Btu/lb",
         }
         : new Dictionary<string, string>
         {
-            ["drybulb"] = "C", ["wetbulb"] = "C", ["dewpoint"] = "C", ["rh_pct"] = "%",
-            ["humidity_ratio"] = "kg/kg", ["enthalpy"] = "kJ/kg (dry air, 0 C datum)",
-            ["specific_volume"] = "m3/kg (dry air)", ["density"] = "kg/m3", ["pressure"] = "kPa",
-            ["sensible_factor"] = "W/(L/s K)", ["latent_factor"] = "W/(L/s) per kg/kg",
+            ["drybulb"] = "C",
+            ["wetbulb"] = "C",
+            ["dewpoint"] = "C",
+            ["rh_pct"] = "%",
+            ["humidity_ratio"] = "kg/kg",
+            ["enthalpy"] = "kJ/kg (dry air, 0 C datum)",
+            ["specific_volume"] = "m3/kg (dry air)",
+            ["density"] = "kg/m3",
+            ["pressure"] = "kPa",
+            ["sensible_factor"] = "W/(L/s K)",
+            ["latent_factor"] = "W/(L/s) per kg/kg",
             ["total_factor"] = "W/(L/s) per kJ/kg",
         };
 

@@ -145,7 +145,8 @@ public static class MoistAir
 
     /// <summary>
     /// Thermodynamic wet-bulb in C from dry-bulb and humidity ratio: eqs. 33 and 35 solved for
-    /// t* by Brent's method between the dew point and the dry-bulb.
+    /// t* between the dew point and the dry-bulb, by Brent's method, or by bisection where the
+    /// bracket straddles 0 C (see the comment in the body).
     /// </summary>
     public static double WetBulb(double dryBulbC, double humidityRatio, double pressurePa)
     {
@@ -164,10 +165,27 @@ public static class MoistAir
             return dryBulbC;
         }
 
-        double f(double tStar) => HumidityRatioFromWetBulbUnchecked(dryBulbC, tStar, pressurePa) - humidityRatio;
+        // The residual is scaled by h_fg / c_p (about 2,486 K per kg/kg), the slope of a wet-bulb
+        // line, so that it reads in kelvin and the solver's tolerance means the same at every state.
+        const double scale = LatentHeat / DryAirSpecificHeat;
+        double f(double tStar) => (HumidityRatioFromWetBulbUnchecked(dryBulbC, tStar, pressurePa) - humidityRatio) * scale;
         if (f(low) >= 0)
         {
             return low;
+        }
+
+        if (f(dryBulbC) <= 0)
+        {
+            return dryBulbC; // saturated to within rounding
+        }
+
+        // Eqs. 33 (over water) and 35 (over ice) do not meet exactly at 0 C, so a narrow band of
+        // states has a root on each side (up to about 0.7 K apart). Where the bracket straddles
+        // 0 C, bisection over [dew point, dry-bulb] picks the root, the same convention as the
+        // reference implementation psychrolib; elsewhere the root is unique and Brent is faster.
+        if (low < 0.0 && dryBulbC > 0.0)
+        {
+            return Bisection.FindRoot(f, low, dryBulbC, SolverAccuracyK, 200);
         }
 
         return Brent.FindRoot(f, low, dryBulbC, SolverAccuracyK, 200);
