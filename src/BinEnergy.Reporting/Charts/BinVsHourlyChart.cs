@@ -18,7 +18,7 @@ public static class BinVsHourlyChart
     {
         ArgumentNullException.ThrowIfNull(data);
         var rows = data.Rows;
-        var canvas = new ChartCanvas(ChartCanvas.TitleFor("Bin method against the hourly check", data.Subject), "Annual quantity (bin method vs hourly, difference)", $"Annual energy ({data.EnergyUnit})");
+        var canvas = new ChartCanvas(ChartCanvas.TitleFor("Bin method against the hourly check", data.Subject), "Annual quantity, with the bin method's difference from hourly", $"Annual energy ({data.EnergyUnit})");
         var bars = canvas.GroupedBars(rows.Count,
         [
             new BarLayer(BinLabel, rows.Select(r => r.BinMethod).ToArray(), ChartPalette.Navy),

@@ -16,6 +16,7 @@ internal sealed class ChartCanvas
     public const float LegendSize = 13;
 
     private readonly List<PlottedSeries> series = [];
+    private IReadOnlyList<string>? categories;
     private bool isEmpty;
 
     public ChartCanvas(string title, string xLabel, string yLabel)
@@ -42,6 +43,8 @@ internal sealed class ChartCanvas
         Plot.Legend.FontName = ChartFonts.FamilyName;
         Plot.Legend.OutlineColor = ChartPalette.Rule.ToScottPlot();
         Plot.Legend.Orientation = Orientation.Horizontal;
+        Plot.Legend.TightHorizontalWrapping = true;
+        Plot.Legend.ShadowColor = Colors.Transparent;
     }
 
     public Plot Plot { get; }
@@ -191,30 +194,85 @@ internal sealed class ChartCanvas
         return scatter;
     }
 
-    /// <summary>Category tick labels at positions 0 .. n-1 on the bottom axis; long or many
-    /// labels are turned 30 degrees so they do not overlap.</summary>
-    public void CategoryTicks(IReadOnlyList<string> labels)
+    /// <summary>Category tick labels at positions 0 .. n-1 on the bottom axis, laid out when
+    /// the chart is rendered (see <see cref="LayOutCategories"/>).</summary>
+    public void CategoryTicks(IReadOnlyList<string> labels) => categories = labels;
+
+    /// <summary>
+    /// Wraps each category label at spaces to fit the width a category gets at this size (about
+    /// 7.5 px per character at the tick font size); when a label would still need more than three
+    /// lines, all labels are turned 30 degrees instead.
+    /// </summary>
+    internal static (string[] Labels, bool Rotate) LayOutCategories(IReadOnlyList<string> labels, int widthPx)
     {
+        if (labels.Count == 0)
+        {
+            return ([], false);
+        }
+
+        int perLine = Math.Max(6, (int)(widthPx * 0.85 / labels.Count / 7.5));
+        var wrapped = labels.Select(l => Wrap(l, perLine)).ToArray();
+        bool rotate = wrapped.Any(w => w.Count > 3 || w.Any(line => line.Length > perLine * 1.25));
+        return rotate ? (labels.ToArray(), true) : (wrapped.Select(w => string.Join("\n", w)).ToArray(), false);
+    }
+
+    private static List<string> Wrap(string text, int perLine)
+    {
+        var lines = new List<string>();
+        foreach (var paragraph in text.Split('\n'))
+        {
+            string current = "";
+            foreach (var word in paragraph.Split(' ', StringSplitOptions.RemoveEmptyEntries))
+            {
+                if (current.Length == 0)
+                {
+                    current = word;
+                }
+                else if (current.Length + 1 + word.Length <= perLine)
+                {
+                    current += " " + word;
+                }
+                else
+                {
+                    lines.Add(current);
+                    current = word;
+                }
+            }
+
+            lines.Add(current);
+        }
+
+        return lines;
+    }
+
+    private void ApplyCategories(ChartSize size)
+    {
+        if (categories is null)
+        {
+            return;
+        }
+
+        var (labels, rotate) = LayOutCategories(categories, size.Width);
         var ticks = new ScottPlot.TickGenerators.NumericManual();
-        for (int i = 0; i < labels.Count; i++)
+        for (int i = 0; i < labels.Length; i++)
         {
             ticks.AddMajor(i, labels[i]);
         }
 
-        Plot.Axes.Bottom.TickGenerator = ticks;
-        int longest = labels.Count == 0 ? 0 : labels.Max(l => l.Length);
-        if (labels.Count * Math.Max(longest, 4) > 70)
+        var axis = Plot.Axes.Bottom;
+        axis.TickGenerator = ticks;
+        axis.MajorTickStyle.Length = 0;
+        axis.MinorTickStyle.Length = 0;
+        if (rotate)
         {
-            Plot.Axes.Bottom.TickLabelStyle.Rotation = -30;
-            Plot.Axes.Bottom.TickLabelStyle.Alignment = Alignment.MiddleRight;
-            Plot.Axes.Bottom.MinimumSize = Math.Min(160, 20 + 7.5f * longest);
+            int longest = labels.Max(l => l.Length);
+            axis.TickLabelStyle.Rotation = -30;
+            axis.TickLabelStyle.Alignment = Alignment.UpperRight;
+            axis.MinimumSize = Math.Min(size.Height / 3f, 30 + 3.8f * longest);
         }
-
-        Plot.Axes.Bottom.MajorTickStyle.Length = 0;
-        Plot.Axes.Bottom.MinorTickStyle.Length = 0;
     }
 
-    /// <summary>Marks the chart as having nothing to draw: a centred note, axes 0 to 1.</summary>
+    /// <summary>Marks the chart as having nothing to draw: a centred note, axes without ticks.</summary>
     public void NoData(string message)
     {
         isEmpty = true;
@@ -225,6 +283,11 @@ internal sealed class ChartCanvas
         note.LabelBorderColor = ChartPalette.Rule.ToScottPlot();
         note.LabelShadowColor = Colors.Transparent;
         Plot.Axes.SetLimits(0, 1, 0, 1);
+        foreach (var axis in Plot.Axes.GetAxes())
+        {
+            axis.TickGenerator = new ScottPlot.TickGenerators.NumericManual();
+            axis.MinimumSize = Math.Max(axis.MinimumSize, 40);
+        }
     }
 
     /// <summary>Shows the legend below the data area when it has entries.</summary>
@@ -243,6 +306,7 @@ internal sealed class ChartCanvas
             throw new ArgumentOutOfRangeException(nameof(size), size, "charts need at least 200 x 150 px to stay readable");
         }
 
+        ApplyCategories(size);
         byte[] png = Plot.GetImageBytes(size.Width, size.Height, ImageFormat.Png);
         string svg = Plot.GetSvgXml(size.Width, size.Height);
         return new RenderedChart(fileStem, Title, description, size, png, svg, series.ToArray(), isEmpty);

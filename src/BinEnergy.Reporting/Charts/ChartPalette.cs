@@ -63,12 +63,12 @@ public static class ChartPalette
 
     /// <summary>
     /// Stops of the density colour ramp for hours on the psychrometric chart, few hours to
-    /// many: cream, orange, umber, near-black brown. Lightness falls steadily (L* 96, 65, 36,
-    /// 17), so the ramp reads the same in grey and to colour-blind readers.
+    /// many: straw, orange, umber, near-black brown. Lightness falls steadily (L* 89, 65, 36,
+    /// 15), so the ramp reads the same in grey and to colour-blind readers.
     /// </summary>
     public static IReadOnlyList<ChartColor> DensityRamp { get; } =
     [
-        new("cream", "#FFF4D6"),
+        new("straw", "#F7DE9E"),
         Orange,
         Umber,
         new("dark brown", "#3A1F08"),

@@ -24,11 +24,6 @@ public static class PsychrometricChart
 
         string title = ChartCanvas.TitleFor("Hourly weather on the psychrometric chart", data.Subject);
         string yLabel = $"Humidity ratio ({data.HumidityRatioUnit} dry air)";
-        if (!string.IsNullOrWhiteSpace(data.PressureNote))
-        {
-            yLabel += ", " + data.PressureNote.Trim();
-        }
-
         var canvas = new ChartCanvas(title, $"Dry-bulb ({data.TemperatureUnit})", yLabel);
         var plot = canvas.Plot;
         var hours = Enumerable.Range(0, data.HourDryBulb.Count)
@@ -52,15 +47,14 @@ public static class PsychrometricChart
         // Region first, beneath the hours.
         if (data.EconomizerRegion is { } economizer)
         {
-            var fill = Polygon(plot, economizer, ChartPalette.PaleBlue.ToScottPlot().WithAlpha(0.55), Colors.Transparent, 0);
+            Polygon(plot, economizer, ChartPalette.PaleBlue.ToScottPlot().WithAlpha(0.55), Colors.Transparent, 0);
             canvas.Record(new PlottedSeries(economizer.Label, PlottedSeriesKind.Area, economizer.X, economizer.Y));
             canvas.LegendFill(economizer.Label, ChartPalette.PaleBlue);
-            _ = fill;
         }
 
         // Hours as a 2-D histogram.
-        double dx = data.DryBulbCell ?? NiceStep((xMax - xMin) / 45.0);
-        double dy = data.HumidityRatioCell ?? NiceStep(yTop / 30.0);
+        double dx = data.DryBulbCell ?? NiceStep((xMax - xMin) / 55.0);
+        double dy = data.HumidityRatioCell ?? NiceStep(yTop / 60.0);
         double left = Math.Floor(xMin / dx) * dx;
         int cols = Math.Max(1, (int)Math.Ceiling((xMax - left) / dx + 1e-9));
         int rows = Math.Max(1, (int)Math.Ceiling(yTop / dy + 1e-9));
@@ -135,6 +129,16 @@ public static class PsychrometricChart
         }
 
         canvas.LegendFill(HoursLabel + " (density)", ChartPalette.Orange);
+        if (!string.IsNullOrWhiteSpace(data.PressureNote))
+        {
+            var note = plot.Add.Annotation(data.PressureNote.Trim(), Alignment.UpperLeft);
+            note.LabelFontSize = ChartCanvas.TickSize;
+            note.LabelFontName = ChartFonts.FamilyName;
+            note.LabelBackgroundColor = Colors.White.WithAlpha(0.85);
+            note.LabelBorderColor = Colors.Transparent;
+            note.LabelShadowColor = Colors.Transparent;
+        }
+
         if (hours.Length == 0)
         {
             canvas.NoData("No hourly weather to show");
@@ -209,7 +213,7 @@ public static class PsychrometricChart
 
         double magnitude = Math.Pow(10, Math.Floor(Math.Log10(raw)));
         double f = raw / magnitude;
-        double nice = f <= 1 ? 1 : f <= 2 ? 2 : f <= 2.5 ? 2.5 : f <= 5 ? 5 : 10;
+        double nice = f <= 1.5 ? 1 : f <= 2.25 ? 2 : f <= 3.5 ? 2.5 : f <= 7 ? 5 : 10;
         return nice * magnitude;
     }
 

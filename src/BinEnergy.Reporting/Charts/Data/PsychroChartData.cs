@@ -90,8 +90,8 @@ public sealed record PsychroChartData
             TemperatureUnit = units == UnitSystem.IP ? "F" : "C",
             HumidityRatioUnit = units == UnitSystem.IP ? "gr/lb" : "g/kg",
             PressureNote = units == UnitSystem.IP
-                ? FormattableString.Invariant($"curves at {pressure.In(units):0.00} psia")
-                : FormattableString.Invariant($"curves at {pressure.In(units):0.0} kPa"),
+                ? FormattableString.Invariant($"Curves drawn at {pressure.In(units):0.00} psia")
+                : FormattableString.Invariant($"Curves drawn at {pressure.In(units):0.0} kPa"),
             HourDryBulb = dryBulbC.Select(t => DryBulb(t, units)).ToArray(),
             HourHumidityRatio = humidityRatio.Select(w => Humidity(w, units)).ToArray(),
             SaturationCurve = Line("Saturation (100 %)", ChartCurves.SaturationCurve(fromC, toC, pressurePa)),
