@@ -20,12 +20,14 @@ internal static class BinAxis
         return (mid, width);
     }
 
-    /// <summary>Sets x limits to the outer bin edges plus half a bin.</summary>
+    /// <summary>Sets x limits to the outer bin edges plus half a bin, and at least six bins
+    /// wide so that one or two bars do not fill the chart.</summary>
     public static void FitX(ScottPlot.Plot plot, IReadOnlyList<(double Low, double High)> bins)
     {
         double low = bins.Min(b => b.Low);
         double high = bins.Max(b => b.High);
-        double pad = bins.Min(b => b.High - b.Low) * 0.5;
+        double width = bins.Min(b => b.High - b.Low);
+        double pad = Math.Max(width * 0.5, (6 * width - (high - low)) / 2);
         plot.Axes.SetLimitsX(low - pad, high + pad);
     }
 }

@@ -48,8 +48,8 @@ public static class BinHoursChart
             var wb = rows.Where(r => r.MeanCoincidentWetBulb is not null).Select(r => r.MeanCoincidentWetBulb!.Value).ToArray();
             if (wb.Length > 0)
             {
-                double span = Math.Max(wb.Max() - wb.Min(), 10);
-                canvas.Plot.Axes.SetLimitsY(wb.Min() - span * 0.1, wb.Max() + span * 0.1, right);
+                double pad = Math.Max((wb.Max() - wb.Min()) * 0.1, 5);
+                canvas.Plot.Axes.SetLimitsY(wb.Min() - pad, wb.Max() + pad, right);
             }
         }
 
