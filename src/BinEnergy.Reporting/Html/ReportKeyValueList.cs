@@ -1,0 +1,4 @@
+namespace BinEnergy.Reporting.Html;
+
+/// <summary>A list of labelled values, shown as a definition list.</summary>
+public sealed record ReportKeyValueList(IReadOnlyList<ReportKeyValue> Items) : ReportBlock;
