@@ -58,5 +58,11 @@ internal static class CommandRegistry
             .WithDescription("Run a study file: every climate x variant, into tables (Parquet, CSV) and summary.json.")
             .WithExample("run", "harbor-study.toml")
             .WithExample("run", "harbor-study.toml", "--out", "reports/harbor", "--hourly", "--force");
+
+        config.AddCommand<DemoCommand>("demo")
+            .WithData(output)
+            .WithDescription("Runs the bundled demo study (invented climates, four ventilation options, economizer comparison) into reports/demo/.")
+            .WithExample("demo")
+            .WithExample("demo", "--out", "my-demo");
     }
 }

@@ -37,11 +37,15 @@ public sealed class RunCommand : Command<RunCommand.Settings>
         public bool Json { get; init; }
     }
 
-    public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
+    public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken) =>
+        RunStudy((CommandOutput)context.Data!, settings.Study, settings.Out, settings.Hourly, settings.Force, settings.Json, cancellationToken);
+
+    /// <summary>Runs a study file into a folder (tables, charts, report, summary); shared by <c>run</c> and <c>demo</c>.</summary>
+    internal static int RunStudy(CommandOutput output, string studyPath, string? outDir, bool hourly, bool force, bool json, CancellationToken cancellationToken)
     {
-        var output = (CommandOutput)context.Data!;
-        var study = StudyFileReader.Read(settings.Study);
-        string folder = settings.Out ?? Path.Combine("reports", FolderName(study.Name));
+        var settings = (Hourly: hourly, Force: force, Json: json);
+        var study = StudyFileReader.Read(studyPath);
+        string folder = outDir ?? Path.Combine("reports", FolderName(study.Name));
         if (!settings.Force && Directory.Exists(folder) && Directory.EnumerateFileSystemEntries(folder).Any())
         {
             throw new Reporting.Tables.OutputFolderException(
@@ -74,7 +78,9 @@ public sealed class RunCommand : Command<RunCommand.Settings>
             run = StudyRunner.Run(study, settings.Hourly, null, cancellationToken);
         }
 
-        var tables = StudyOutputWriter.WriteAsync(run, folder, settings.Force, settings.Hourly, ct: cancellationToken).GetAwaiter().GetResult();
+        var runAt = DateTimeOffset.UtcNow;
+        var tables = StudyOutputWriter.WriteAsync(run, folder, settings.Force, settings.Hourly,
+            extra: o => Reporting.Study.StudyReport.WriteInto(o, run, runAt), ct: cancellationToken).GetAwaiter().GetResult();
         foreach (var w in run.Warnings)
         {
             output.Error.WriteLine("warning: " + w);
@@ -120,7 +126,8 @@ public sealed class RunCommand : Command<RunCommand.Settings>
 
         console.Write(table);
         console.MarkupLine($"Wrote [bold]{Markup.Escape(Path.GetFullPath(folder))}[/]: " +
-            Markup.Escape(string.Join(", ", tables.Select(t => $"{t.Name} ({t.Rows} rows)"))) + " as Parquet and CSV in tables/, and summary.json.");
+            Markup.Escape(string.Join(", ", tables.Select(t => $"{t.Name} ({t.Rows} rows)"))) + " as Parquet and CSV in tables/, charts in charts/, and summary.json.");
+        console.MarkupLine($"Report: [bold]{Markup.Escape(Path.GetFullPath(Path.Combine(folder, "report.html")))}[/]");
         if (run.Warnings.Count > 0)
         {
             console.MarkupLine($"[yellow]{run.Warnings.Count} warning(s)[/] (on standard error and in summary.json).");
