@@ -286,7 +286,10 @@ internal sealed class ChartCanvas
         foreach (var axis in Plot.Axes.GetAxes())
         {
             axis.TickGenerator = new ScottPlot.TickGenerators.NumericManual();
-            axis.MinimumSize = Math.Max(axis.MinimumSize, 40);
+            if (axis != Plot.Axes.Top)
+            {
+                axis.MinimumSize = Math.Max(axis.MinimumSize, 40);
+            }
         }
     }
 
@@ -308,7 +311,10 @@ internal sealed class ChartCanvas
 
         ApplyCategories(size);
         byte[] png = Plot.GetImageBytes(size.Width, size.Height, ImageFormat.Png);
-        string svg = Plot.GetSvgXml(size.Width, size.Height);
+        // ScottPlot embeds heatmaps in SVG as small bitmaps; keep their cells sharp when a
+        // viewer scales them up, as in the PNG.
+        string svg = Plot.GetSvgXml(size.Width, size.Height)
+            .Replace("<image ", "<image style=\"image-rendering:pixelated\" ", StringComparison.Ordinal);
         return new RenderedChart(fileStem, Title, description, size, png, svg, series.ToArray(), isEmpty);
     }
 

@@ -253,6 +253,7 @@ public class ChartRenderingTests
         var chart = PsychrometricChart.Render(data);
         Assert.Equal("g/kg", data.HumidityRatioUnit);
         Assert.Equal(climate.Hours, chart.SeriesLabelled(PsychrometricChart.HoursLabel).Total, 9);
+        Assert.Contains("image-rendering:pixelated", chart.Svg, StringComparison.Ordinal); // density cells stay sharp in SVG viewers
         ChartReview.Save(chart, "si-enthalpy");
     }
 
