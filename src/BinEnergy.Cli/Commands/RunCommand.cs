@@ -97,12 +97,7 @@ public sealed class RunCommand : Command<RunCommand.Settings>
     }
 
     /// <summary>A folder name from the study name: lower case, spaces and punctuation to dashes.</summary>
-    internal static string FolderName(string studyName)
-    {
-        var chars = studyName.ToLowerInvariant().Select(c => char.IsAsciiLetterOrDigit(c) ? c : '-').ToArray();
-        string name = string.Join("-", new string(chars).Split('-', StringSplitOptions.RemoveEmptyEntries));
-        return name.Length == 0 ? "study" : name;
-    }
+    internal static string FolderName(string studyName) => Reporting.Study.StudyReport.Slug(studyName, "study");
 
     private static void WriteSummary(IAnsiConsole console, StudyRunResult run, string folder, List<(string Name, int Rows)> tables)
     {

@@ -219,11 +219,12 @@ public static class StudyReport
         return values;
     }
 
-    private static string Slug(string name)
+    /// <summary>A file-name-safe form of a name: lower case ASCII letters and digits, other runs to one dash.</summary>
+    public static string Slug(string name, string fallback = "climate")
     {
         var chars = name.ToLowerInvariant().Select(ch => char.IsAsciiLetterOrDigit(ch) ? ch : '-').ToArray();
         string s = string.Join("-", new string(chars).Split('-', StringSplitOptions.RemoveEmptyEntries));
-        return s.Length == 0 ? "climate" : s;
+        return s.Length == 0 ? fallback : s;
     }
 
     private static string Pct(double bin, double hourly) =>
