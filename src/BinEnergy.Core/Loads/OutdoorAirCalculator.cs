@@ -1,3 +1,4 @@
+using System.Runtime.InteropServices;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Climate;
 using BinEnergy.Core.Psychrometrics;
@@ -19,6 +20,13 @@ namespace BinEnergy.Core.Loads;
 /// humidity ratio at the site pressure (bins). The recovery device's fan penalty is
 /// P = 2 V dp / eta (both air streams), charged in every ventilated hour unless the air
 /// bypasses an idle device. The per-hour loop reads the record's columns and allocates nothing.
+/// <para>With <see cref="OutdoorAirSettings.AirflowMultipliers"/> (e.g. demand-controlled
+/// ventilation) each hour's volume flow, and with it the fan penalty, is the airflow times
+/// the multiplier of the hour's clock hour. The loads are linear in the airflow, so the hourly
+/// method scales each hour's loads; the bin method uses, per bin (and per joint cell) and
+/// occupancy class, the mean multiplier over the bin's ventilated hours, which is exact for
+/// the flow-weighted hours and keeps the bin's state at its midpoint and mean humidity ratio.
+/// The design-day peaks stay at the full airflow (what the equipment must handle).</para>
 /// </remarks>
 public static class OutdoorAirCalculator
 {
@@ -62,7 +70,15 @@ public static class OutdoorAirCalculator
         var flow = new FlowModel(settings, sitePressure);
         bool always = settings.Operation == VentilationOperation.Always;
 
+        var profile = settings.AirflowMultipliers;
+        var byHour = new double[24];
+        for (int h = 0; h < 24; h++)
+        {
+            byHour[h] = profile is null ? 1.0 : profile[h];
+        }
+
         var binSums = new LoadSums[table.Rows.Count];
+        var binMultiplierSums = new double[table.Rows.Count];
         var monthSums = new LoadSums[12];
         var hourly = default(LoadSums);
         double densitySum = 0;
@@ -82,10 +98,13 @@ public static class OutdoorAirCalculator
             double rho = flow.Density(t[i], w[i], p[i]);
             densitySum += rho;
             load.Evaluate(t[i], w[i], out var s);
-            double m = rho * flow.VolumeM3PerS;
-            double fan = flow.FanPower(s.Recovering);
+            double f = byHour[times[i].Hour];
+            double m = rho * flow.VolumeM3PerS * f;
+            double fan = flow.FanPower(s.Recovering) * f;
             hourly.Add(s, m, fan, 1);
-            binSums[scale.IndexOf(t[i]) - first].Add(s, m, fan, 1);
+            int bin = scale.IndexOf(t[i]) - first;
+            binSums[bin].Add(s, m, fan, 1);
+            binMultiplierSums[bin] += f;
             monthSums[times[i].Month - 1].Add(s, m, fan, 1);
         }
 
@@ -99,7 +118,8 @@ public static class OutdoorAirCalculator
             var own = default(LoadSums);
             if (!stats.IsEmpty)
             {
-                AddBin(ref own, load, flow, BinTemperature(settings, row.Mid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure);
+                double f = binSums[b].Hours > 0 ? binMultiplierSums[b] / binSums[b].Hours : 1.0;
+                AddBin(ref own, load, flow, BinTemperature(settings, row.Mid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
                 binMethod.Add(own);
             }
 
@@ -110,13 +130,17 @@ public static class OutdoorAirCalculator
         if (jointScale is HumidityBinScale js)
         {
             var cells = JointBinTable.Build(weather, scale, js, occupied);
+            var cellMultipliers = profile is null ? null : JointCellMultipliers(weather, scale, js, byHour, occupied, always);
             var sums = default(LoadSums);
             foreach (var cell in cells.Cells)
             {
                 var stats = cell.For(occupancy);
                 if (!stats.IsEmpty)
                 {
-                    AddBin(ref sums, load, flow, BinTemperature(settings, cell.DryBulbMid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure);
+                    double f = cellMultipliers is not null && cellMultipliers.TryGetValue((cell.DryBulbIndex, cell.HumidityIndex), out var c) && c.Hours > 0
+                        ? c.Sum / c.Hours
+                        : 1.0;
+                    AddBin(ref sums, load, flow, BinTemperature(settings, cell.DryBulbMid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
                 }
             }
 
@@ -171,11 +195,31 @@ public static class OutdoorAirCalculator
     private static double BinTemperature(OutdoorAirSettings settings, Temperature mid, BinStatistics stats) =>
         settings.BinPoint == BinEvaluationPoint.MeanDryBulb ? stats.MeanDryBulb.Celsius : mid.Celsius;
 
-    private static void AddBin(ref LoadSums sums, OutdoorAirLoad load, FlowModel flow, double t, double w, int hours, double sitePressure)
+    private static void AddBin(ref LoadSums sums, OutdoorAirLoad load, FlowModel flow, double t, double w, int hours, double sitePressure, double multiplier)
     {
         load.Evaluate(t, w, out var s);
-        double m = flow.Density(t, w, sitePressure) * flow.VolumeM3PerS;
-        sums.Add(s, m, flow.FanPower(s.Recovering), hours);
+        double m = flow.Density(t, w, sitePressure) * flow.VolumeM3PerS * multiplier;
+        sums.Add(s, m, flow.FanPower(s.Recovering) * multiplier, hours);
+    }
+
+    /// <summary>Mean airflow multiplier over the ventilated hours of each joint cell, by (dry-bulb index, humidity index).</summary>
+    private static Dictionary<(int K, int J), (double Sum, int Hours)> JointCellMultipliers(HourlyWeather weather, DryBulbBinScale scale,
+        HumidityBinScale js, double[] byHour, bool[] occupied, bool always)
+    {
+        var t = weather.DryBulbC;
+        var w = weather.HumidityRatio;
+        var times = weather.Times;
+        var result = new Dictionary<(int K, int J), (double Sum, int Hours)>();
+        for (int i = 0; i < t.Length; i++)
+        {
+            if (always || occupied[i])
+            {
+                ref var entry = ref CollectionsMarshal.GetValueRefOrAddDefault(result, (scale.IndexOf(t[i]), js.IndexOf(w[i])), out _);
+                entry = (entry.Sum + byHour[times[i].Hour], entry.Hours + 1);
+            }
+        }
+
+        return result;
     }
 
     private static List<string> Warnings(HourlyWeather weather, OutdoorAirSettings settings, int hoursVentilated)

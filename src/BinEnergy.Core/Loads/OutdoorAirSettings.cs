@@ -45,6 +45,19 @@ public sealed record OutdoorAirSettings
     /// <summary>An energy recovery device, or none.</summary>
     public EnergyRecoverySettings? Recovery { get; init; }
 
+    /// <summary>
+    /// Optional airflow multipliers by hour of the day (24 values, 0 to 1, index 0 for the hour
+    /// beginning at 00:00 local time of the record): each ventilated hour's airflow is
+    /// <see cref="EffectiveAirflow"/> times the hour's multiplier, e.g. demand-controlled
+    /// ventilation (<see cref="VentilationRate.DemandControlledMultipliers"/>). Null for a
+    /// constant airflow.
+    /// </summary>
+    /// <remarks>
+    /// Reducing outdoor air below what the occupants need harms them: a profile must follow the
+    /// locally adopted code and the responsible licensed engineer's control design.
+    /// </remarks>
+    public IReadOnlyList<double>? AirflowMultipliers { get; init; }
+
     /// <summary>Where the bin method evaluates each bin (default the midpoint, the classic method).</summary>
     public BinEvaluationPoint BinPoint { get; init; } = BinEvaluationPoint.Midpoint;
 
@@ -96,6 +109,11 @@ public sealed record OutdoorAirSettings
             // Comparing vapour pressures compares humidity ratios at any one total pressure (Handbook ch. 1, eq. 20).
             problems.Add(FormattableString.Invariant(
                 $"minimum RH {lo * 100:0.#} % at the heating setpoint holds as much water as the maximum RH {MaxRelativeHumidity * 100:0.#} % at the cooling setpoint or more: lower the minimum or raise the maximum"));
+        }
+
+        if (AirflowMultipliers is { } profile && (profile.Count != 24 || profile.Any(f => !(f >= 0 && f <= 1))))
+        {
+            problems.Add(FormattableString.Invariant($"the airflow multipliers must be 24 values (one per hour of the day), each from 0 to 1; got {profile.Count} values"));
         }
 
         if (Recovery is not null)

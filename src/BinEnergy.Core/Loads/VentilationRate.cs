@@ -30,6 +30,39 @@ public sealed record VentilationRate(
     /// <summary>Zone outdoor airflow V_oz = V_bz / E_z.</summary>
     public VolumeFlow OutdoorAirflow => (1.0 / ZoneEffectiveness) * BreathingZoneAirflow;
 
+    /// <summary>
+    /// Airflow multipliers by hour of the day for demand-controlled ventilation: with the
+    /// occupancy fraction f(h) resetting the people component, the hour's zone airflow is
+    /// V_oz(h) = (R_p P_z f(h) + R_a A_z) / E_z (ASHRAE Standard 62.1 ventilation rate
+    /// procedure; demand-controlled ventilation resets the people part only, the area part
+    /// stays), returned as V_oz(h) / V_oz, each 0 to 1.
+    /// </summary>
+    /// <param name="occupancy">24 occupancy fractions, 0 to 1, index 0 for the hour beginning at 00:00.</param>
+    /// <exception cref="ArgumentException">Not 24 fractions from 0 to 1, or the rates give no airflow.</exception>
+    public double[] DemandControlledMultipliers(IReadOnlyList<double> occupancy)
+    {
+        ArgumentNullException.ThrowIfNull(occupancy);
+        if (occupancy.Count != 24 || occupancy.Any(f => !(f >= 0 && f <= 1)))
+        {
+            throw new ArgumentException("give 24 occupancy fractions, each from 0 to 1", nameof(occupancy));
+        }
+
+        double people = People * PerPerson.LitresPerSecond;
+        double area = FloorAreaSquareMetres * PerAreaLitresPerSecondPerSquareMetre;
+        if (!(people + area > 0))
+        {
+            throw new ArgumentException("the people and area rates give no airflow", nameof(occupancy));
+        }
+
+        var multipliers = new double[24];
+        for (int h = 0; h < 24; h++)
+        {
+            multipliers[h] = (people * occupancy[h] + area) / (people + area);
+        }
+
+        return multipliers;
+    }
+
     /// <summary>The same rates given in IP: cfm per person, floor area in ft2, cfm per ft2.</summary>
     public static VentilationRate FromIp(double people, double cfmPerPerson, double floorAreaSquareFeet, double cfmPerSquareFoot,
         double zoneEffectiveness = 1.0) =>

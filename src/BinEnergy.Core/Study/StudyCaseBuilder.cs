@@ -95,10 +95,7 @@ public static class StudyCaseBuilder
                 "[ventilation] needs the outdoor airflow: airflow_cfm (or airflow_ls), or people, per_person_cfm, area_ft2 and per_area_cfm");
         }
 
-        if (v.Has("occupancy_profile"))
-        {
-            throw v.ErrorAt("occupancy_profile", "demand-controlled ventilation profiles are not supported by the outdoor-air engine yet; remove occupancy_profile");
-        }
+        var multipliers = DemandControl(v, rate, airflow, assumptions);
 
         var heatTo = Temperature.FromCelsius(v.RequiredNumber("heat_to"));
         var coolTo = Temperature.FromCelsius(v.RequiredNumber("cool_to"));
@@ -119,6 +116,7 @@ public static class StudyCaseBuilder
             MaxRelativeHumidity = v.RequiredNumber("max_rh_pct") / 100.0,
             MinRelativeHumidity = v.Number("min_rh_pct") is double min && min > 0 ? min / 100.0 : null,
             Recovery = Recovery(recovery, plant),
+            AirflowMultipliers = multipliers,
         };
         if (!v.Has("flow_basis"))
         {
@@ -132,6 +130,43 @@ public static class StudyCaseBuilder
         }
 
         return settings;
+    }
+
+    /// <summary>
+    /// The airflow multipliers of <c>occupancy_profile</c> (demand-controlled ventilation by the
+    /// ventilation rate procedure: the people part follows the profile, the area part stays), or
+    /// null without one.
+    /// </summary>
+    private static double[]? DemandControl(StudySection v, VentilationRate? rate, double? airflow, List<string> assumptions)
+    {
+        var profile = v.NumberList("occupancy_profile");
+        if (profile is null)
+        {
+            return null;
+        }
+
+        if (airflow is not null || rate is null)
+        {
+            throw v.ErrorAt("occupancy_profile",
+                "an occupancy profile resets the people part of the people-and-area rates, so it needs people, per_person_cfm (and area_ft2, per_area_cfm) without airflow_cfm; remove airflow_cfm (or airflow_ls) or remove occupancy_profile");
+        }
+
+        if (profile.Count != 24)
+        {
+            throw v.ErrorAt("occupancy_profile",
+                $"give 24 fractions, one per hour of the day from the hour beginning 00:00 to the hour beginning 23:00; got {profile.Count}");
+        }
+
+        if (!(rate.People * rate.PerPerson.CubicMetresPerSecond > 0))
+        {
+            throw v.ErrorAt("occupancy_profile",
+                "an occupancy profile resets the people part of the airflow, but people x per_person_cfm is zero; give people and per_person_cfm, or remove occupancy_profile");
+        }
+
+        var multipliers = rate.DemandControlledMultipliers(profile);
+        assumptions.Add(FormattableString.Invariant(
+            $"demand-controlled ventilation: hourly airflow (R_p P_z x occupancy fraction + R_a A_z) / E_z, from {multipliers.Min() * 100:0.#} % to {multipliers.Max() * 100:0.#} % of the design airflow; the occupancy fractions must reflect real occupancy and the control must meet the local code (too little outdoor air harms occupants)"));
+        return multipliers;
     }
 
     private static EnergyRecoverySettings? Recovery(StudySection r, StudySection plant)
