@@ -70,18 +70,13 @@ internal sealed class EconomizerReport(EconomizerEvaluation result, UnitSystem u
         return json;
     }
 
-    private Dictionary<string, object?> TotalsJson(EconomizerTotals t, Energy savings, double? pct) => new()
+    private Dictionary<string, object?> TotalsJson(EconomizerTotals t, Energy savings, double? pct)
     {
-        ["hours_no_cooling"] = t.HoursNoCooling,
-        ["hours_free"] = t.HoursFree,
-        ["hours_integrated"] = t.HoursIntegrated,
-        ["hours_minimum"] = t.HoursMinimum,
-        ["coil_sensible"] = E(t.CoilSensible),
-        ["coil_latent"] = E(t.CoilLatent),
-        ["coil_total"] = E(t.CoilTotal),
-        ["savings"] = E(savings),
-        ["savings_pct"] = pct,
-    };
+        var json = BinTotalsJson(t);
+        json["savings"] = E(savings);
+        json["savings_pct"] = pct;
+        return json;
+    }
 
     private Dictionary<string, object?> BinJson(EconomizerBinRow row, int b)
     {
