@@ -74,7 +74,7 @@ public static class OutdoorAirCalculator
         var byHour = new double[24];
         for (int h = 0; h < 24; h++)
         {
-            byHour[h] = profile is null ? 1.0 : profile[h];
+            byHour[h] = settings.AirflowMultiplier(h);
         }
 
         var binSums = new LoadSums[table.Rows.Count];

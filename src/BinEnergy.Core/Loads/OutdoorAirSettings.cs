@@ -58,6 +58,9 @@ public sealed record OutdoorAirSettings
     /// </remarks>
     public IReadOnlyList<double>? AirflowMultipliers { get; init; }
 
+    /// <summary>The airflow multiplier of the hour beginning at <paramref name="hourOfDay"/> (1 without a profile).</summary>
+    public double AirflowMultiplier(int hourOfDay) => AirflowMultipliers is { } profile ? profile[hourOfDay] : 1.0;
+
     /// <summary>Where the bin method evaluates each bin (default the midpoint, the classic method).</summary>
     public BinEvaluationPoint BinPoint { get; init; } = BinEvaluationPoint.Midpoint;
 

@@ -230,9 +230,12 @@ public static class StudyRunner
 
             double w = weather.HumidityRatio[i];
             double rho = FlowBasisDensity.For(s.FlowBasis, sitePressure, t, w, weather.PressurePa[i]);
-            var rates = load.At(Temperature.FromCelsius(t), HumidityRatio.FromKilogramsPerKilogram(w), rho * volume);
+
+            // Demand-controlled ventilation scales the hour's airflow, and with it the loads and the fan penalty.
+            double multiplier = s.AirflowMultiplier(weather.Times[i].Hour);
+            var rates = load.At(Temperature.FromCelsius(t), HumidityRatio.FromKilogramsPerKilogram(w), rho * volume * multiplier);
             bool recovering = rates.RecoveredHeating.Watts > 0 || rates.RecoveredCooling.Watts > 0;
-            double fan = r is not null && r.BypassWhenIdle && !recovering ? 0.0 : fanW;
+            double fan = (r is not null && r.BypassWhenIdle && !recovering ? 0.0 : fanW) * multiplier;
             var totals = new OutdoorAirTotals(
                 Energy.FromPower(rates.Heating, 1), Energy.FromPower(rates.CoolingSensible, 1), Energy.FromPower(rates.CoolingLatent, 1),
                 Energy.FromPower(rates.Humidification, 1), Energy.FromPower(rates.RecoveredHeating, 1), Energy.FromPower(rates.RecoveredCooling, 1),

@@ -52,6 +52,22 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("balance point below absolute plausibility", "balance_point_f = 55", "balance_point_f = -400", "key economizer.balance_point_f", "-400 F is out of range");
         Replace("price that is negative", "price_gas_per_therm = 1.10", "price_gas_per_therm = -1.10", "key plant.price_gas_per_therm", "out of range (negative values have no physical meaning here): expected zero or more");
         Replace("a key above every table", "[study]", "name = \"x\"\n[study]", "key name", "keys must be inside a table");
+
+        // Demand-controlled ventilation: the profile resets the people part of the people-and-area rates.
+        void Profile(string name, string ventilation, string message)
+        {
+            string text = ExampleStudy.ReplaceLine("airflow_cfm = 2000", ventilation).Text;
+            Add(name, (text, ExampleStudy.LineOf(text, "occupancy_profile")), "key ventilation.occupancy_profile", message);
+        }
+
+        static string Fractions(int count, double value = 0.5) => "[" + string.Join(", ", Enumerable.Repeat(value.ToString(System.Globalization.CultureInfo.InvariantCulture), count)) + "]";
+        const string Rates = "people = 40\nper_person_cfm = 5\narea_ft2 = 10000\nper_area_cfm = 0.06\n";
+        Profile("occupancy profile with a fixed airflow", "airflow_cfm = 2000\noccupancy_profile = " + Fractions(24),
+            "an occupancy profile resets the people part of the people-and-area rates, so it needs people, per_person_cfm (and area_ft2, per_area_cfm) without airflow_cfm");
+        Profile("occupancy profile of 23 hours", Rates + "occupancy_profile = " + Fractions(23), "give 24 fractions, one per hour of the day");
+        Profile("occupancy fraction above one", Rates + "occupancy_profile = " + Fractions(24, 1.5), "out of range");
+        Profile("occupancy profile without people", "people = 0\nper_person_cfm = 5\narea_ft2 = 10000\nper_area_cfm = 0.06\noccupancy_profile = " + Fractions(24),
+            "people x per_person_cfm is zero");
         return data;
     }
 
@@ -61,7 +77,8 @@ public sealed class StudyFileErrorTests : IDisposable
     {
         string path = Path.Combine(folder, "harbor-study.toml");
         File.WriteAllText(path, text);
-        var e = Assert.Throws<StudyFileException>(() => StudyFileReader.Read(path));
+        // Read, then resolved into the engines' settings, as `run` does before it reads any weather.
+        var e = Assert.Throws<StudyFileException>(() => StudyCaseBuilder.Build(StudyFileReader.Read(path)));
         Assert.IsAssignableFrom<InputDataException>(e);
         Assert.True(e.Message.StartsWith(path + ", " + line, StringComparison.Ordinal), $"{name}: '{e.Message}' should start with the file and {line}");
         Assert.True(e.Message.Contains(key, StringComparison.Ordinal), $"{name}: '{e.Message}' should name {key}");

@@ -306,6 +306,47 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void OccupancyProfile_AtFullOccupancyChangesNothing_AndAtHalfHalvesThePeoplePart()
+    {
+        // Invented zone: 40 people x 5 cfm = 200 cfm, 10,000 ft2 x 0.06 cfm/ft2 = 600 cfm; no fixed airflow.
+        string rates = ExampleStudy.Text
+            .Replace("\nairflow_cfm = 2000", "\npeople = 40\nper_person_cfm = 5\narea_ft2 = 10000\nper_area_cfm = 0.06", StringComparison.Ordinal)
+            .Replace("ventilation.airflow_cfm = 2600", "ventilation.people = 52", StringComparison.Ordinal);
+        string Profile(double f) => rates.Replace("\nper_area_cfm = 0.06", "\nper_area_cfm = 0.06\noccupancy_profile = ["
+            + string.Join(", ", Enumerable.Repeat(f.ToString(CultureInfo.InvariantCulture), 24)) + "]", StringComparison.Ordinal);
+        var annual = new Dictionary<string, List<Dictionary<string, string>>>();
+        foreach (var (name, text) in new[] { ("none", rates), ("full", Profile(1.0)), ("half", Profile(0.5)) })
+        {
+            string out1 = Path.Combine(folder, "out-dcv-" + name);
+            var (code, _, err) = Cli("run", StudyPath(text, "dcv-" + name + ".toml"), "--out", out1);
+            Assert.True(code == 0, err);
+            annual[name] = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        }
+
+        // Invariant: a profile of 1.0 in every hour is the design airflow, so every table value is the same as without one.
+        Assert.Equal(annual["none"], annual["full"]);
+
+        // Half occupancy halves the people part only (ASHRAE Standard 62.1 ventilation rate procedure, people
+        // component reset by occupancy, recalled from memory): minimum (200 x 0.5 + 600) / 800 = 0.875;
+        // the variant with 52 people: (260 x 0.5 + 600) / 860 = 0.8488. Loads are linear in the airflow.
+        foreach (var (variant, ratio) in new[] { ("minimum", 0.875), ("plus-30", 730.0 / 860.0), ("no-recovery", 0.875) })
+        {
+            foreach (string method in new[] { "bin", "hourly" })
+            {
+                var none = annual["none"].Single(r => r["variant"] == variant && r["method"] == method);
+                var half = annual["half"].Single(r => r["variant"] == variant && r["method"] == method);
+                foreach (string column in new[] { "heating_kbtu", "cooling_sensible_kbtu", "cooling_latent_kbtu", "recovered_heating_kbtu", "fan_kwh" })
+                {
+                    if (D(none[column]) > 0)
+                    {
+                        Assert.Equal(ratio, D(half[column]) / D(none[column]), 9);
+                    }
+                }
+            }
+        }
+    }
+
+    [Fact]
     public void SiStudy_UsesSiColumnNames()
     {
         string text = ExampleStudy.Text.Replace("units = \"ip\"", "units = \"si\"", StringComparison.Ordinal)
