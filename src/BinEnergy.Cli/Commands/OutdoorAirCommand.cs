@@ -91,8 +91,8 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
         public bool BypassWhenIdle { get; init; }
 
         [CommandOption("--bin-point <POINT>")]
-        [Description("Where the bin method evaluates each bin: mid (the bin midpoint, the classic method, default) or mean (the bin's mean dry-bulb).")]
-        public string BinPoint { get; init; } = "mid";
+        [Description("Where the bin method evaluates each bin: mean (the mean dry-bulb of the bin's ventilated hours, default) or mid (the bin midpoint, the classic method for bin tables that give hours only).")]
+        public string BinPoint { get; init; } = "mean";
 
         [CommandOption("--joint")]
         [Description("Also integrate over joint dry-bulb x humidity-ratio bins (10 gr/lb or 1 g/kg), which closes most of the latent error of dry-bulb bins.")]
@@ -174,7 +174,7 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
         {
             "mid" or "midpoint" => BinEvaluationPoint.Midpoint,
             "mean" => BinEvaluationPoint.MeanDryBulb,
-            _ => throw new UsageException($"--bin-point must be mid or mean, not '{s.BinPoint}'"),
+            _ => throw new UsageException($"--bin-point must be mean or mid, not '{s.BinPoint}'"),
         };
 
         var rate = Ventilation(s, units);

@@ -79,6 +79,7 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
                 ["bin_low"] = d.T(b.Bin.Low),
                 ["bin_high"] = d.T(b.Bin.High),
                 ["bin_mid"] = d.T(b.Bin.Mid),
+                ["evaluated_drybulb"] = d.T(b.EvaluatedAt),
                 ["hours_ventilated"] = b.HoursVentilated,
                 ["mean_humidity_ratio"] = d.W(b.MeanHumidityRatio),
             };
@@ -116,7 +117,7 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
         bins.AddColumn($"Bin, {t}");
         bool recovery = A.Recovery is not null;
         bool humidify = A.MinRelativeHumidity is not null;
-        var columns = new List<string> { "Hours", $"Mean W, {d.HumidityReadableUnit}", "Heating", "Cooling sens.", "Cooling lat." };
+        var columns = new List<string> { "Hours", $"At, {t}", $"Mean W, {d.HumidityReadableUnit}", "Heating", "Cooling sens.", "Cooling lat." };
         if (humidify)
         {
             columns.Add("Humidif.");
@@ -139,6 +140,7 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
             {
                 F($"{d.T(b.Bin.Low):0.##} to {d.T(b.Bin.High):0.##}"),
                 b.HoursVentilated.ToString(CultureInfo.InvariantCulture),
+                b.HoursVentilated == 0 ? "" : F($"{d.T(b.EvaluatedAt):0.0}"),
                 b.HoursVentilated == 0 ? "" : F(d.WReadable(b.MeanHumidityRatio), d.Ip ? "0.0" : "0.00"),
                 N(b.BinMethod.Heating), N(b.BinMethod.CoolingSensible), N(b.BinMethod.CoolingLatent),
             };
@@ -265,7 +267,7 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
         {
             FlowBasis.Standard => "standard air, 0.075 lb/ft3 (1.2014 kg/m3) of dry air",
             FlowBasis.Site => "site: dry air at 70 F (21.1 C) at the site pressure",
-            _ => "actual: each hour's outdoor air at that hour's pressure (bins: midpoint state at the site pressure); density shown is the mean",
+            _ => "actual: each hour's outdoor air at that hour's pressure (bins: the bin's evaluation state at the site pressure); density shown is the mean",
         };
         yield return ("Airflow", F($"{A.Airflow.In(units):N0} {d.FlowUnit}"));
         yield return ("Flow basis", F($"{basis}: {Density(A.DryAirDensity):0.0000} {UnitNames["dry_air_density"]}"));
@@ -280,7 +282,7 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
         yield return ("Ventilation", A.Operation == VentilationOperation.Always
             ? "every hour"
             : "occupied hours: " + A.Schedule + (noSchedule ? " (no --occupied given: every hour counts as occupied)" : ""));
-        yield return ("Bins", F($"{A.BinScale.Width:0.##} {(d.Ip ? "F" : "K")} wide, lower edge inclusive; evaluated at the {(A.BinPoint == BinEvaluationPoint.Midpoint ? "midpoint" : "mean dry-bulb")}"));
+        yield return ("Bins", F($"{A.BinScale.Width:0.##} {(d.Ip ? "F" : "K")} wide, lower edge inclusive; loads evaluated at {(A.BinPoint == BinEvaluationPoint.Midpoint ? "each bin's midpoint (--bin-point mid)" : "the mean dry-bulb of each bin's ventilated hours (column At; --bin-point mid for the midpoint)")}"));
         yield return ("Formulas", "heating m cp (T_h - T_o); sensible cooling m cp (T_o - T_c); latent m h_fg (W_o - W_max); cp = 1.006 + 1.86 W kJ/(kg K), h_fg = 2501 kJ/kg (ASHRAE Fundamentals ch. 1, eq. 32)");
         if (A.Recovery is EnergyRecoverySettings r)
         {

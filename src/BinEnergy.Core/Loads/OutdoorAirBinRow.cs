@@ -5,8 +5,8 @@ namespace BinEnergy.Core.Loads;
 
 /// <summary>
 /// One dry-bulb bin of an outdoor-air estimate: the bin, its ventilated hours and their mean
-/// coincident humidity ratio, the bin method's loads (evaluated at the bin midpoint and that
-/// humidity ratio, times the hours) and, beside them, the hourly loads of the same hours.
+/// coincident humidity ratio, the bin method's loads (evaluated at <see cref="EvaluatedAt"/> and
+/// that humidity ratio, times the hours) and, beside them, the hourly loads of the same hours.
 /// </summary>
 /// <param name="Bin">The bin and its weather statistics.</param>
 /// <param name="HoursVentilated">Hours of the bin in which outdoor air runs.</param>
@@ -18,4 +18,12 @@ public sealed record OutdoorAirBinRow(
     int HoursVentilated,
     HumidityRatio MeanHumidityRatio,
     OutdoorAirTotals BinMethod,
-    OutdoorAirTotals Hourly);
+    OutdoorAirTotals Hourly)
+{
+    /// <summary>
+    /// The dry-bulb at which the bin method evaluated the loads: the mean dry-bulb of the
+    /// ventilated hours, or the midpoint (<see cref="OutdoorAirSettings.BinPoint"/>; the midpoint
+    /// for a bin without ventilated hours).
+    /// </summary>
+    public Temperature EvaluatedAt { get; init; } = Bin.Mid;
+}

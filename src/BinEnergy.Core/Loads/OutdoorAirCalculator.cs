@@ -9,15 +9,17 @@ namespace BinEnergy.Core.Loads;
 
 /// <summary>
 /// Annual outdoor-air loads of a record by two integrations, always both (DESIGN 7): the bin
-/// method, which evaluates <see cref="OutdoorAirLoad"/> at each dry-bulb bin's midpoint and
-/// mean coincident humidity ratio and multiplies by the bin's ventilated hours, and the
-/// hourly sum over the same hours. Optionally a third: joint dry-bulb x humidity-ratio bins.
+/// method, which evaluates <see cref="OutdoorAirLoad"/> at each dry-bulb bin's evaluation point
+/// (<see cref="OutdoorAirSettings.BinPoint"/>: the mean dry-bulb of its ventilated hours by
+/// default, or its midpoint) and mean coincident humidity ratio and multiplies by the bin's
+/// ventilated hours, and the hourly sum over the same hours. Optionally a third: joint
+/// dry-bulb x humidity-ratio bins, evaluated the same way per cell.
 /// </summary>
 /// <remarks>
 /// Mass flow of dry air m = rho_da V, rho_da from the flow basis (<see cref="FlowBasisDensity"/>):
 /// constant for <c>standard</c> and <c>site</c>; for <c>actual</c>, the dry-air density of each
-/// hour's outdoor state at that hour's pressure (hourly) or of the bin's midpoint and mean
-/// humidity ratio at the site pressure (bins). The recovery device's fan penalty is
+/// hour's outdoor state at that hour's pressure (hourly) or of the bin's evaluation point and
+/// mean humidity ratio at the site pressure (bins). The recovery device's fan penalty is
 /// P = 2 V dp / eta (both air streams), charged in every ventilated hour unless the air
 /// bypasses an idle device. The per-hour loop reads the record's columns and allocates nothing.
 /// <para>With <see cref="OutdoorAirSettings.AirflowMultipliers"/> (e.g. demand-controlled
@@ -25,7 +27,7 @@ namespace BinEnergy.Core.Loads;
 /// the multiplier of the hour's clock hour. The loads are linear in the airflow, so the hourly
 /// method scales each hour's loads; the bin method uses, per bin (and per joint cell) and
 /// occupancy class, the mean multiplier over the bin's ventilated hours, which is exact for
-/// the flow-weighted hours and keeps the bin's state at its midpoint and mean humidity ratio.
+/// the flow-weighted hours and keeps the bin's state at its evaluation point and mean humidity ratio.
 /// The design-day peaks stay at the full airflow (what the equipment must handle).</para>
 /// </remarks>
 public static class OutdoorAirCalculator
@@ -116,14 +118,15 @@ public static class OutdoorAirCalculator
             var row = table.Rows[b];
             var stats = row.For(occupancy);
             var own = default(LoadSums);
+            var at = stats.IsEmpty ? row.Mid : Temperature.FromCelsius(BinTemperature(settings, row.Mid, stats));
             if (!stats.IsEmpty)
             {
                 double f = binSums[b].Hours > 0 ? binMultiplierSums[b] / binSums[b].Hours : 1.0;
-                AddBin(ref own, load, flow, BinTemperature(settings, row.Mid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
+                AddBin(ref own, load, flow, at.Celsius, stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
                 binMethod.Add(own);
             }
 
-            rows[b] = new OutdoorAirBinRow(row, stats.Hours, stats.MeanHumidityRatio, own.ToTotals(), binSums[b].ToTotals());
+            rows[b] = new OutdoorAirBinRow(row, stats.Hours, stats.MeanHumidityRatio, own.ToTotals(), binSums[b].ToTotals()) { EvaluatedAt = at };
         }
 
         OutdoorAirTotals? joint = null;

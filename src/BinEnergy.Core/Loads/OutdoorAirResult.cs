@@ -7,7 +7,7 @@ namespace BinEnergy.Core.Loads;
 /// </summary>
 public sealed record OutdoorAirResult
 {
-    /// <summary>Totals by the bin method (loads at bin midpoints and mean coincident W, times hours).</summary>
+    /// <summary>Totals by the bin method (loads at each bin's evaluation point and mean coincident W, times hours).</summary>
     public required OutdoorAirTotals Bin { get; init; }
 
     /// <summary>Totals summed hour by hour.</summary>

@@ -61,8 +61,12 @@ public sealed record OutdoorAirSettings
     /// <summary>The airflow multiplier of the hour beginning at <paramref name="hourOfDay"/> (1 without a profile).</summary>
     public double AirflowMultiplier(int hourOfDay) => AirflowMultipliers is { } profile ? profile[hourOfDay] : 1.0;
 
-    /// <summary>Where the bin method evaluates each bin (default the midpoint, the classic method).</summary>
-    public BinEvaluationPoint BinPoint { get; init; } = BinEvaluationPoint.Midpoint;
+    /// <summary>
+    /// Where the bin method evaluates each bin: by default at the mean dry-bulb of the bin's
+    /// ventilated hours, which reproduces the hourly sensible loads; <see cref="BinEvaluationPoint.Midpoint"/>
+    /// for the classic method that published bin tables (hours only) allow.
+    /// </summary>
+    public BinEvaluationPoint BinPoint { get; init; } = BinEvaluationPoint.MeanDryBulb;
 
     /// <summary>The airflow used: <see cref="Airflow"/>, else the ventilation rate procedure's V_oz.</summary>
     public VolumeFlow EffectiveAirflow => Airflow ?? Ventilation?.OutdoorAirflow

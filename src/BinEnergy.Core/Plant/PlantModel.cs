@@ -5,7 +5,7 @@ namespace BinEnergy.Core.Plant;
 /// COP at the outdoor temperature) of the heating fuel; cooling coil load / COP at the outdoor
 /// temperature as electricity; fan and humidifier energy as electricity. Loads are in joules,
 /// over an hour or a bin's hours; the outdoor temperature is the hour's dry-bulb or the bin's
-/// midpoint. Every evaluation of a COP curve outside its points is counted in
+/// evaluation point (mean dry-bulb or midpoint). Every evaluation of a COP curve outside its points is counted in
 /// <see cref="CurveClampCounter"/> (the curve holds its end value there).
 /// </summary>
 public sealed class PlantModel(PlantSettings settings)

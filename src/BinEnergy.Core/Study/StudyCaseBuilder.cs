@@ -25,7 +25,10 @@ public static class StudyCaseBuilder
         var s = variant.Sections;
         var assumptions = new List<string>();
         var schedule = Schedule(s["schedule"]);
-        var outdoorAir = OutdoorAir(s["ventilation"], s["recovery"], s["plant"], schedule, assumptions);
+        var outdoorAir = OutdoorAir(s["ventilation"], s["recovery"], s["plant"], schedule, assumptions) with
+        {
+            BinPoint = s["study"].Text("bin_point") == "midpoint" ? BinEvaluationPoint.Midpoint : BinEvaluationPoint.MeanDryBulb,
+        };
         double? widthK = s["study"].Number("bin_width");
         var scale = widthK is double k
             ? new DryBulbBinScale(TemperatureDifference.FromKelvin(k), study.Units)

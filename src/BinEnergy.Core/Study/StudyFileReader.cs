@@ -447,9 +447,9 @@ public static class StudyFileReader
                     {
                         string reason = table == "climate"
                             ? "climates are the other axis of the run: every variant runs on every climate, so a variant cannot change them"
-                            : table == "study" ? "a variant can override study.bin_width_f / _c only"
+                            : table == "study" ? "a variant can override study.bin_width_f / _c and study.bin_point only"
                             : $"unknown table '{table}'" + (KeySuggester.Nearest(table, StudySchema.Overridable.Select(s => s.Name)) is string n ? $"; did you mean {n}?" : string.Empty);
-                        if (!(table == "study" && key.StartsWith("bin_width", StringComparison.Ordinal)))
+                        if (!(table == "study" && (key.StartsWith("bin_width", StringComparison.Ordinal) || key == "bin_point")))
                         {
                             throw new StudyFileException(file, e.Line, "variant." + e.Key, $"this variant overrides an unknown key: {reason}");
                         }

@@ -19,8 +19,8 @@ namespace BinEnergy.Core.Study;
 /// </summary>
 /// <remarks>
 /// Plant energy depends on the outdoor temperature through the COP curves, so it is computed
-/// where the temperature is known: for the bin method at each bin's midpoint with the bin's
-/// loads; for the hourly method hour by hour, with the hour's load rates from the same
+/// where the temperature is known: for the bin method at each bin's evaluation point with the
+/// bin's loads; for the hourly method hour by hour, with the hour's load rates from the same
 /// <see cref="OutdoorAirLoad"/> the calculator uses (the runner checks that these hours add
 /// up to the calculator's hourly totals).
 /// </remarks>
@@ -78,16 +78,15 @@ public static class StudyRunner
         var plant = new PlantModel(c.Plant);
         var clamps = new CurveClampCounter();
 
-        // Bin method: each bin's loads at its midpoint.
+        // Bin method: each bin's loads, and the plant's COP, at the bin's evaluation point.
         var bins = new List<BinFigures>();
         var annualBin = Zero;
         foreach (var row in result.Bins)
         {
-            double mid = row.Bin.Mid.Celsius;
-            var figures = Figures(row.BinMethod, plant, mid, clamps);
+            var figures = Figures(row.BinMethod, plant, row.EvaluatedAt.Celsius, clamps);
             annualBin = Add(annualBin, figures);
             var all = row.Bin.All;
-            bins.Add(new BinFigures(row.Bin.Low.Celsius, row.Bin.High.Celsius, mid, all.Hours, row.Bin.Occupied.Hours,
+            bins.Add(new BinFigures(row.Bin.Low.Celsius, row.Bin.High.Celsius, row.Bin.Mid.Celsius, row.EvaluatedAt.Celsius, all.Hours, row.Bin.Occupied.Hours,
                 all.IsEmpty ? double.NaN : all.MeanHumidityRatio.KilogramsPerKilogram,
                 all.IsEmpty ? double.NaN : all.MeanWetBulb.Celsius, figures));
         }

@@ -27,8 +27,10 @@ internal static class StudySchema
             Choice("units", ["ip", "si"], "ip", "Units of the tables, charts and report."),
             new KeyDefinition("bin_width", ValueKind.Number, TemperatureDifference("bin_width"), "Width of the dry-bulb bins.")
             { Min = 0.1 / 1.8, Max = 20.0, DefaultText = "5 F (ip) or 2 C (si)", RangeHint = "bins between 0.1 F and 20 K wide" },
+            Choice("bin_point", ["mean", "midpoint"], "mean",
+                "Where the bin method evaluates each bin: the mean dry-bulb of its ventilated hours, or its midpoint (the classic method)."),
             Text("currency", "Currency code of the prices, used in the cost column names (cost_usd).", "usd"),
-        ], false, "The study's name, display units and bin width."),
+        ], false, "The study's name, display units, bin width and bin evaluation point."),
 
         new("climate", true,
         [

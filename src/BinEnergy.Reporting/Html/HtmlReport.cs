@@ -64,7 +64,7 @@ public static partial class HtmlReport
             new("Flow basis", a.FlowBasis),
             new("Air density", a.AirDensity),
             new("Sensible factor", $"{a.SiteSensibleFactor} at the site; {a.StandardSensibleFactor}"),
-            new("Bin width", a.BinWidth),
+            new("Bins", a.BinWidth),
             new("Calendar", a.Calendar),
             new("Schedule", a.Schedule),
             new("Data repairs", a.DataRepairs.Count == 0 ? "none" : string.Join("; ", a.DataRepairs)),

@@ -1,4 +1,5 @@
 using System.Globalization;
+using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Study;
 using BinEnergy.Core.Units;
@@ -185,7 +186,9 @@ public static class StudyReport
                 FlowBasis = a.FlowBasis.ToString().ToLowerInvariant(),
                 AirDensity = densityText + " (first climate)",
                 SiteSensibleFactor = F(a.Factors.SensibleIp, 3) + " Btu/(h cfm F) = " + F(a.Factors.SensibleSi, 3) + " W/(L/s K) at the first climate",
-                BinWidth = F(a.BinScale.Width, 1) + (ip ? " F" : " C") + ", aligned to multiples of the width, lower edge inclusive",
+                BinWidth = F(a.BinScale.Width, 1) + (ip ? " F" : " C") + ", aligned to multiples of the width, lower edge inclusive; loads evaluated at "
+                    + (a.BinPoint == BinEvaluationPoint.Midpoint ? "each bin's midpoint (the classic method)" : "the mean dry-bulb of each bin's ventilated hours")
+                    + " with its mean coincident humidity ratio",
                 Calendar = a.Calendar,
                 Schedule = a.Schedule,
                 DataRepairs = repairs,

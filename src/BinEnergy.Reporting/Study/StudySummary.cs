@@ -1,5 +1,6 @@
 using System.Text.Json;
 using System.Text.Json.Nodes;
+using BinEnergy.Core.Loads;
 using BinEnergy.Core.Study;
 
 namespace BinEnergy.Reporting.Study;
@@ -69,7 +70,7 @@ public static class StudySummary
                     (JsonNode)$"flow basis {c.OutdoorAir.Assumptions.FlowBasis.ToString().ToLowerInvariant()}, dry-air density {c.OutdoorAir.Assumptions.DryAirDensity:0.0000} kg/m3"!,
                     (JsonNode)$"schedule: {c.OutdoorAir.Assumptions.Schedule}"!,
                     (JsonNode)$"calendar: {c.OutdoorAir.Assumptions.Calendar}"!,
-                    (JsonNode)"hourly plant energy uses each hour's outdoor temperature for the COP; the bin method uses the bin midpoint"!,
+                    (JsonNode)$"bin method: loads and COP at each bin's {(c.OutdoorAir.Assumptions.BinPoint == BinEvaluationPoint.Midpoint ? "midpoint" : "mean dry-bulb of its ventilated hours")} and mean coincident humidity ratio; hourly plant energy uses each hour's outdoor temperature for the COP"!,
                     (JsonNode)"humidification is met by an electric humidifier"!]),
                 ["warnings"] = new JsonArray([.. c.Warnings.Select(w => (JsonNode)w!)]),
             });

@@ -74,14 +74,14 @@ public static class StudyTables
     {
         string tu = u.Temp;
         var t = LoadColumns(new ResultTable("bins").Text("climate").Text("variant").Text("method")
-            .Number($"bin_low_{tu}").Number($"bin_high_{tu}").Number($"bin_mid_{tu}")
+            .Number($"bin_low_{tu}").Number($"bin_high_{tu}").Number($"bin_mid_{tu}").Number($"evaluated_drybulb_{tu}")
             .Integer("hours").Integer("hours_occupied").Integer("hours_ventilated")
             .Number($"mean_humidity_ratio_{u.Ratio}").Number($"mean_coincident_wetbulb_{tu}"), u);
         foreach (var c in run.Cases)
         {
             foreach (var b in c.Bins)
             {
-                t.AddRow([c.Case.Climate.Name, c.Case.Variant.Name, "bin", u.T(b.LowC), u.T(b.HighC), u.T(b.MidC),
+                t.AddRow([c.Case.Climate.Name, c.Case.Variant.Name, "bin", u.T(b.LowC), u.T(b.HighC), u.T(b.MidC), u.T(b.EvaluatedAtC),
                     b.Hours, b.HoursOccupied, (int)Math.Round(b.Loads.HoursVentilated), b.MeanHumidityRatio, u.T(b.MeanCoincidentWetBulbC),
                     .. LoadValues(b.Loads, u)]);
             }

@@ -69,32 +69,44 @@ public class RealSiteLoadTests(ITestOutputHelper output)
             Assert.Equal(1.0, result.Hourly.CoolingLatent.Joules / (latent * j), 0.03);
         }
 
-        // The midpoint bin method, recomputed from the raw columns: 5 F bins of the raw dry-bulb in F
-        // (lower edge inclusive, rounded to 1e-6 F), each evaluated at its midpoint and its mean W.
-        var byBin = new SortedDictionary<int, (int N, double W)>();
+        // The bin method recomputed from the raw columns: 5 F bins of the raw dry-bulb in F (lower edge
+        // inclusive, rounded to 1e-6 F), each evaluated at its mean dry-bulb (the default) or at its
+        // midpoint (the classic method), with its mean W.
+        var byBin = new SortedDictionary<int, (int N, double T, double W)>();
         for (int i = 0; i < raw.DryBulbC.Length; i++)
         {
             int k = (int)Math.Floor(Math.Round(Math.Round(raw.DryBulbC[i] * 1.8 + 32, 6) / 5, 9));
-            var (n, sw) = byBin.GetValueOrDefault(k);
-            byBin[k] = (n + 1, sw + raw.HumidityRatio[i]);
+            var (n, st, sw) = byBin.GetValueOrDefault(k);
+            byBin[k] = (n + 1, st + raw.DryBulbC[i], sw + raw.HumidityRatio[i]);
         }
 
-        double midHeating = byBin.Sum(b => b.Value.N * (1006 + 1860 * b.Value.W / b.Value.N) * Math.Max(0, th - ((b.Key + 0.5) * 5 - 32) / 1.8));
-        Assert.Equal(1.0, result.Bin.Heating.Joules / (midHeating * j), 0.003);
+        double BinHeating(Func<int, (int N, double T, double W), double> at) =>
+            byBin.Sum(b => b.Value.N * (1006 + 1860 * b.Value.W / b.Value.N) * Math.Max(0, th - at(b.Key, b.Value)));
+        double meanHeating = BinHeating((k, b) => b.T / b.N);
+        double midHeating = BinHeating((k, b) => ((k + 0.5) * 5 - 32) / 1.8);
+        var classic = OutdoorAirCalculator.Compute(weather, settings with { BinPoint = BinEvaluationPoint.Midpoint }, DryBulbBinScale.Default(UnitSystem.IP));
+        Assert.Equal(1.0, result.Bin.Heating.Joules / (meanHeating * j), 0.003);
+        Assert.Equal(1.0, classic.Bin.Heating.Joules / (midHeating * j), 0.003);
 
-        // Evaluated at each bin's mean dry-bulb, the bin method reproduces the hourly sensible loads:
-        // heating within 1 % on every file (in fact within 0.1 %).
-        var atMean = OutdoorAirCalculator.Compute(weather, settings with { BinPoint = BinEvaluationPoint.MeanDryBulb }, DryBulbBinScale.Default(UnitSystem.IP));
-        output.WriteLine($"{place}: bin vs hourly heating {result.DifferencePercent(LoadFigure.Heating):+0.00;-0.00} % at midpoints, " +
-            $"{atMean.DifferencePercent(LoadFigure.Heating):+0.00;-0.00} % at bin means; latent {result.DifferencePercent(LoadFigure.CoolingLatent):+0.0;-0.0} %, " +
+        // The check: bin and hourly sensible heating agree within 1 % on every real file. At each bin's
+        // mean dry-bulb (the default) they do, in fact within 0.1 %; at the midpoints only where the heating
+        // season is long (see MidpointBins_... below and docs/loads.md).
+        output.WriteLine($"{place}: bin vs hourly heating {result.DifferencePercent(LoadFigure.Heating):+0.00;-0.00} % at bin means, " +
+            $"{classic.DifferencePercent(LoadFigure.Heating):+0.00;-0.00} % at midpoints; sensible cooling {result.DifferencePercent(LoadFigure.CoolingSensible):+0.00;-0.00} % " +
+            $"and {classic.DifferencePercent(LoadFigure.CoolingSensible):+0.00;-0.00} %; latent {result.DifferencePercent(LoadFigure.CoolingLatent):+0.0;-0.0} %, " +
             $"joint {result.JointDifferencePercent(LoadFigure.CoolingLatent):+0.0;-0.0} %");
-        Assert.InRange(atMean.DifferencePercent(LoadFigure.Heating)!.Value, -1.0, 1.0);
-        Assert.InRange(atMean.DifferencePercent(LoadFigure.Heating)!.Value, -0.1, 0.1);
+        Assert.InRange(result.DifferencePercent(LoadFigure.Heating)!.Value, -1.0, 1.0);
+        Assert.InRange(result.DifferencePercent(LoadFigure.Heating)!.Value, -0.1, 0.1);
+        if (cooling * j > 1e8)
+        {
+            Assert.InRange(result.DifferencePercent(LoadFigure.CoolingSensible)!.Value, -0.1, 0.1);
+        }
     }
 
-    // Not at Melbourne (+4.5 %) or Arcata (-1.1 %): there most heating hours sit in a few bins whose hours crowd one
-    // edge (a mild winter's tail, a marine climate's narrow band), so the bin midpoint is not the bin's mean
-    // dry-bulb. The test above checks those files against the same midpoint computation done from the raw columns.
+    // The classic midpoint method: not within 1 % at Melbourne (+4.5 %) or Arcata (-1.1 %), where most heating hours sit
+    // in a few bins whose hours crowd one edge (a mild winter's tail, a marine climate's narrow band), so the bin
+    // midpoint is not the bin's mean dry-bulb. That is why the mean dry-bulb is the default evaluation point; the test
+    // above checks those files against the same midpoint computation done from the raw columns.
     [Theory]
     [InlineData("725300TYA.CSV.gz", "tmy3")]
     [InlineData("723650TYA.CSV.gz", "tmy3")]
@@ -102,7 +114,8 @@ public class RealSiteLoadTests(ITestOutputHelper output)
     [InlineData("tmy_45.000_8.000_2005_2023.csv.gz", "pvgis")]
     public void MidpointBins_AgreeWithTheHourlyHeatingWithinOnePercent_WhereTheHeatingSeasonIsLong(string file, string map)
     {
-        var result = OutdoorAirCalculator.Compute(Read(file, map), OutdoorAirTestSettings.Typical(), DryBulbBinScale.Default(UnitSystem.IP));
+        var classic = OutdoorAirTestSettings.Typical() with { BinPoint = BinEvaluationPoint.Midpoint };
+        var result = OutdoorAirCalculator.Compute(Read(file, map), classic, DryBulbBinScale.Default(UnitSystem.IP));
         Assert.InRange(result.DifferencePercent(LoadFigure.Heating)!.Value, -1.0, 1.0);
     }
 

@@ -132,7 +132,7 @@ public class HtmlReportTests
 
         var assumptions = doc.GetElementById("assumptions")!;
         var terms = assumptions.QuerySelectorAll("dt").Select(d => d.TextContent).ToArray();
-        Assert.Equal(["Flow basis", "Air density", "Sensible factor", "Bin width", "Calendar", "Schedule", "Data repairs", "Indoor setpoints"], terms);
+        Assert.Equal(["Flow basis", "Air density", "Sensible factor", "Bins", "Calendar", "Schedule", "Data repairs", "Indoor setpoints"], terms);
         Assert.Contains("1.05 Btu/(h cfm F) at the site; 1.08 Btu/(h cfm F) (standard air, 0.075 lb/ft3)", assumptions.TextContent, StringComparison.Ordinal);
         Assert.Contains("3 missing dry-bulb hours", assumptions.TextContent, StringComparison.Ordinal);
 

@@ -347,6 +347,32 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void BinPoint_MeanByDefault_MidpointOnRequest()
+    {
+        string outMean = Path.Combine(folder, "out-mean");
+        string outMid = Path.Combine(folder, "out-mid");
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", outMean);
+        Assert.True(code == 0, err);
+        string midpoint = ExampleStudy.Text.Replace("bin_width_f = 5", "bin_width_f = 5\nbin_point = \"midpoint\"", StringComparison.Ordinal);
+        (code, _, err) = Cli("run", StudyPath(midpoint, "midpoint.toml"), "--out", outMid);
+        Assert.True(code == 0, err);
+
+        // Default: each bin's loads at the mean dry-bulb of its ventilated hours, inside the bin's edges.
+        var mean = ReadCsv(Path.Combine(outMean, "tables", "bins.csv")).Where(b => D(b["hours_ventilated"]) > 0).ToList();
+        Assert.NotEmpty(mean);
+        Assert.All(mean, b => Assert.InRange(D(b["evaluated_drybulb_f"]), D(b["bin_low_f"]), D(b["bin_high_f"])));
+        Assert.Contains(mean, b => Math.Abs(D(b["evaluated_drybulb_f"]) - D(b["bin_mid_f"])) > 0.1);
+        var mid = ReadCsv(Path.Combine(outMid, "tables", "bins.csv"));
+        Assert.All(mid, b => Assert.Equal(D(b["bin_mid_f"]), D(b["evaluated_drybulb_f"]), 9));
+
+        // The hourly rows do not depend on the evaluation point; the report states which one was used.
+        static IEnumerable<string> Hourly(string dir) => File.ReadLines(Path.Combine(dir, "tables", "annual.csv")).Where(l => l.Contains(",hourly,", StringComparison.Ordinal));
+        Assert.Equal(Hourly(outMean), Hourly(outMid));
+        Assert.Contains("the mean dry-bulb of each bin&#39;s ventilated hours", File.ReadAllText(Path.Combine(outMean, "report.html")), StringComparison.Ordinal);
+        Assert.Contains("each bin&#39;s midpoint (the classic method)", File.ReadAllText(Path.Combine(outMid, "report.html")), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void SiStudy_UsesSiColumnNames()
     {
         string text = ExampleStudy.Text.Replace("units = \"ip\"", "units = \"si\"", StringComparison.Ordinal)

@@ -4,6 +4,7 @@ namespace BinEnergy.Core.Study.Results;
 /// <param name="LowC">Lower edge (inclusive), C.</param>
 /// <param name="HighC">Upper edge (exclusive), C.</param>
 /// <param name="MidC">Midpoint, C.</param>
+/// <param name="EvaluatedAtC">Dry-bulb at which the bin method evaluated the loads (the mean of the ventilated hours, or the midpoint), C.</param>
 /// <param name="Hours">Hours in the bin.</param>
 /// <param name="HoursOccupied">Occupied hours in the bin.</param>
 /// <param name="MeanHumidityRatio">Mean coincident humidity ratio, kg/kg.</param>
@@ -13,6 +14,7 @@ public sealed record BinFigures(
     double LowC,
     double HighC,
     double MidC,
+    double EvaluatedAtC,
     int Hours,
     int HoursOccupied,
     double MeanHumidityRatio,
