@@ -1,6 +1,7 @@
 using System.ComponentModel;
 using System.Globalization;
 using BinEnergy.Core.Binning;
+using BinEnergy.Core.Loads;
 using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Units;
 using Spectre.Console.Cli;
@@ -21,6 +22,18 @@ public class BinOptions : WeatherFileSettings
     [CommandOption("--holidays <DATES>")]
     [Description("Holiday dates, unoccupied unless the schedule has a 'Hol' clause: comma-separated YYYY-MM-DD (the record's calendar year).")]
     public string? Holidays { get; init; }
+
+    /// <summary>The help text of <c>--bin-point</c>, for the commands that evaluate loads on bins.</summary>
+    internal const string BinPointHelp =
+        "Where the bin method evaluates each bin: mean (the mean dry-bulb of the bin's hours that count, default) or mid (the bin midpoint, the classic method for bin tables that give hours only).";
+
+    /// <summary>Reads <c>--bin-point</c>: <c>mean</c> or <c>mid</c> (<c>midpoint</c>).</summary>
+    internal static BinEvaluationPoint ParseBinPoint(string text) => text.ToLowerInvariant() switch
+    {
+        "mid" or "midpoint" => BinEvaluationPoint.Midpoint,
+        "mean" => BinEvaluationPoint.MeanDryBulb,
+        _ => throw new UsageException($"--bin-point must be mean or mid, not '{text}'"),
+    };
 
     /// <summary>The bin scale the options give.</summary>
     internal DryBulbBinScale Scale(UnitSystem units)

@@ -93,6 +93,10 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [Description("Dry-bulb bin width (F degrees or K). Default 5 F / 2 C.")]
         public double? Width { get; init; }
 
+        [CommandOption("--bin-point <POINT>")]
+        [Description(BinOptions.BinPointHelp)]
+        public string BinPoint { get; init; } = "mean";
+
         [CommandOption("--joint")]
         [Description("Also evaluate joint dry-bulb x humidity-ratio bins (10 gr/lb or 1 g/kg), which fix most of the bin error of enthalpy and dew-point controls.")]
         public bool Joint { get; init; }
@@ -207,6 +211,7 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
             LoadLine = new BuildingLoadLine(Power.From(load, units), Temperature.From(design, units), Temperature.From(balance, units)),
             Controls = ParseControls(s.Controls, !s.NonIntegrated),
             Limits = limits,
+            BinPoint = BinOptions.ParseBinPoint(s.BinPoint),
         };
         var problems = settings.Problems();
         if (problems.Count > 0)

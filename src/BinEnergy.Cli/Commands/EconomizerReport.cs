@@ -96,6 +96,7 @@ internal sealed class EconomizerReport(EconomizerEvaluation result, UnitSystem u
             ["bin_low"] = row.Low.In(units),
             ["bin_high"] = row.High.In(units),
             ["bin_mid"] = row.Mid.In(units),
+            ["evaluated_drybulb"] = row.EvaluatedAt.In(units),
             ["hours_occupied"] = row.OccupiedHours,
             ["mean_humidity_ratio"] = row.OccupiedHours > 0 ? row.MeanHumidityRatio.KilogramsPerKilogram : null,
             ["enthalpy"] = row.OccupiedHours > 0 ? row.Enthalpy.In(units) : null,

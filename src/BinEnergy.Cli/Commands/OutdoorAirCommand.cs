@@ -91,7 +91,7 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
         public bool BypassWhenIdle { get; init; }
 
         [CommandOption("--bin-point <POINT>")]
-        [Description("Where the bin method evaluates each bin: mean (the mean dry-bulb of the bin's ventilated hours, default) or mid (the bin midpoint, the classic method for bin tables that give hours only).")]
+        [Description(BinPointHelp)]
         public string BinPoint { get; init; } = "mean";
 
         [CommandOption("--joint")]
@@ -170,12 +170,7 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
             "always" => VentilationOperation.Always,
             _ => throw new UsageException($"--ventilate must be occupied or always, not '{s.Ventilate}'"),
         };
-        var point = s.BinPoint.ToLowerInvariant() switch
-        {
-            "mid" or "midpoint" => BinEvaluationPoint.Midpoint,
-            "mean" => BinEvaluationPoint.MeanDryBulb,
-            _ => throw new UsageException($"--bin-point must be mean or mid, not '{s.BinPoint}'"),
-        };
+        var point = BinOptions.ParseBinPoint(s.BinPoint);
 
         var rate = Ventilation(s, units);
         if (s.Airflow is null && rate is null)

@@ -6,10 +6,10 @@ namespace BinEnergy.Core.Economizer;
 /// <param name="Index">The bin index k (the bin covers [k w, (k+1) w) in the display unit).</param>
 /// <param name="Low">Lower edge (inclusive).</param>
 /// <param name="High">Upper edge (exclusive).</param>
-/// <param name="Mid">Midpoint: the dry-bulb of the bin method's state.</param>
+/// <param name="Mid">Midpoint.</param>
 /// <param name="OccupiedHours">Occupied hours in the bin.</param>
 /// <param name="MeanHumidityRatio">Mean coincident humidity ratio of the occupied hours (NaN when there are none).</param>
-/// <param name="Enthalpy">Enthalpy of the bin state (midpoint, mean humidity ratio), eq. 32.</param>
+/// <param name="Enthalpy">Enthalpy of the bin state (<see cref="EvaluatedAt"/>, mean humidity ratio), eq. 32.</param>
 /// <param name="DewPoint">Dew point of the bin state's humidity ratio at the site pressure.</param>
 public sealed record EconomizerBinRow(
     int Index,
@@ -19,4 +19,11 @@ public sealed record EconomizerBinRow(
     int OccupiedHours,
     HumidityRatio MeanHumidityRatio,
     SpecificEnthalpy Enthalpy,
-    Temperature DewPoint);
+    Temperature DewPoint)
+{
+    /// <summary>
+    /// The dry-bulb of the bin method's state: the mean of the occupied hours, or the midpoint
+    /// (<see cref="EconomizerSettings.BinPoint"/>; the midpoint for a bin without occupied hours).
+    /// </summary>
+    public Temperature EvaluatedAt { get; init; } = Mid;
+}

@@ -3,7 +3,7 @@ using BinEnergy.Core.Units;
 namespace BinEnergy.Core.Economizer;
 
 /// <summary>
-/// One control's year: the bin method (bin midpoint and mean coincident humidity ratio of the
+/// One control's year: the bin method (bin evaluation point and mean coincident humidity ratio of the
 /// occupied hours, times the bin's occupied hours), the hourly sum over the same occupied
 /// hours, optionally the joint-bin method, the savings of each against the baseline by the
 /// same method, and the breakdowns by bin and by month.

@@ -1,5 +1,6 @@
 using System.Globalization;
 using BinEnergy.Core.Binning;
+using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
@@ -8,7 +9,8 @@ namespace BinEnergy.Core.Economizer;
 
 /// <summary>
 /// Every chosen economizer control side by side with the baseline over one weather record
-/// (DESIGN 8): per control, the bin method (bin midpoint and mean coincident humidity ratio of
+/// (DESIGN 8): per control, the bin method (each bin at its evaluation point, see
+/// <see cref="EconomizerSettings.BinPoint"/>, with the mean coincident humidity ratio of
 /// the occupied hours) and the hourly sum, hours per mode, coil sensible, latent and total
 /// energy, savings against the baseline by the same method (negative savings are kept), per-bin
 /// and per-month breakdowns, and optionally joint dry-bulb x humidity-ratio bins.
@@ -114,11 +116,12 @@ public sealed class EconomizerEvaluation
             var row = bins.Rows[b];
             var occ = row.Occupied;
             double w = occ.MeanHumidityRatio.KilogramsPerKilogram;
-            double t = row.Mid.Celsius;
+            double t = BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, occ);
             double h = occ.Hours > 0 ? MoistAir.Enthalpy(t, w) : double.NaN;
             double dp = occ.Hours > 0 && w > 0 ? MoistAir.DewPoint(w, p) : double.NaN;
             rows[b] = new EconomizerBinRow(row.Index, row.Low, row.High, row.Mid, occ.Hours, occ.MeanHumidityRatio,
-                SpecificEnthalpy.FromJoulesPerKilogram(h), Temperature.FromCelsius(dp));
+                SpecificEnthalpy.FromJoulesPerKilogram(h), Temperature.FromCelsius(dp))
+            { EvaluatedAt = Temperature.FromCelsius(t) };
             if (occ.Hours > 0)
             {
                 AddState(model, controls, t, w, h, dp, occ.Hours, byBin, b * nc);
@@ -137,7 +140,7 @@ public sealed class EconomizerEvaluation
                     continue;
                 }
 
-                double t = cell.DryBulbMid.Celsius;
+                double t = BinEvaluation.DryBulbC(settings.BinPoint, cell.DryBulbMid, occ);
                 double w = occ.MeanHumidityRatio.KilogramsPerKilogram;
                 double dp = w > 0 ? MoistAir.DewPoint(w, p) : Saturation.MinTemperatureC;
                 AddState(model, controls, t, w, MoistAir.Enthalpy(t, w), dp, occ.Hours, jointSums, 0);
@@ -273,6 +276,7 @@ public sealed class EconomizerEvaluation
         string Flow(VolumeFlow v) => F(v.In(units), 0) + (ip ? " cfm" : " L/s");
         string W(double kgkg) => ip ? F(kgkg * Conversions.GrainsPerPound, 1) + " gr/lb" : F(kgkg * 1000, 2) + " g/kg";
         string H(double jkg) => F(SpecificEnthalpy.FromJoulesPerKilogram(jkg).In(units), 2) + (ip ? " Btu/lb" : " kJ/kg");
+        string Point(string whose) => s.BinPoint == BinEvaluationPoint.Midpoint ? $"{whose} dry-bulb midpoint" : $"the mean dry-bulb of {whose} occupied hours";
         double xMin = s.MinOutdoorAirflow.CubicMetresPerSecond / s.SupplyAirflow.CubicMetresPerSecond;
         var list = new List<string>
         {
@@ -288,8 +292,8 @@ public sealed class EconomizerEvaluation
             "mixing linear in dry-bulb and humidity ratio; the coil cools the mixed air to the supply temperature; coil energy is that of the coil only (no fan, no reheat, no plant efficiency)",
             "the economizer runs only when the outdoor air is cooler than the return air and the control's high limit allows it; integrated controls keep 100 % outdoor air while the coil trims, non-integrated ones lock out to minimum outdoor air whenever the coil must run",
             $"{OccupiedHours} occupied hours of {Weather.Count}; the system runs in occupied hours only",
-            "bin method: each dry-bulb bin at its midpoint and the mean coincident humidity ratio of its occupied hours, times those hours; hourly: the same model summed over every occupied hour" +
-                (HasJointBins ? "; joint bins: each dry-bulb x humidity-ratio cell at its dry-bulb midpoint and the cell's mean humidity ratio" : ""),
+            $"bin method: each dry-bulb bin at {Point("its")} and the mean coincident humidity ratio of its occupied hours, times those hours; hourly: the same model summed over every occupied hour" +
+                (HasJointBins ? $"; joint bins: each dry-bulb x humidity-ratio cell at {Point("the cell's")} and the cell's mean humidity ratio" : ""),
             s.LimitsAreSuggested
                 ? "high limits: " + HighLimits.SuggestedNote
                 : $"high limits set by the user: dry-bulb {T(s.Limits.DryBulb)}, enthalpy {F(s.Limits.Enthalpy.In(units), 1)} {(ip ? "Btu/lb" : "kJ/kg")}, dew point {T(s.Limits.DewPoint)}; the energy code adopted locally governs the choice of control and limit",

@@ -1,3 +1,4 @@
+using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Units;
 
@@ -50,6 +51,12 @@ public sealed record EconomizerSettings
 
     /// <summary>The fixed high limits (default <see cref="HighLimits.Suggested"/>).</summary>
     public HighLimits Limits { get; init; } = HighLimits.Suggested;
+
+    /// <summary>
+    /// Where the bin method evaluates each bin (and each joint cell): the mean dry-bulb of its
+    /// occupied hours (default, as for the outdoor-air loads) or its midpoint (the classic method).
+    /// </summary>
+    public BinEvaluationPoint BinPoint { get; init; } = BinEvaluationPoint.MeanDryBulb;
 
     /// <summary>True when the supply flow varies with the load.</summary>
     public bool IsVariableVolume => SupplyAirflowMin.HasValue;

@@ -118,7 +118,7 @@ public static class OutdoorAirCalculator
             var row = table.Rows[b];
             var stats = row.For(occupancy);
             var own = default(LoadSums);
-            var at = stats.IsEmpty ? row.Mid : Temperature.FromCelsius(BinTemperature(settings, row.Mid, stats));
+            var at = stats.IsEmpty ? row.Mid : Temperature.FromCelsius(BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, stats));
             if (!stats.IsEmpty)
             {
                 double f = binSums[b].Hours > 0 ? binMultiplierSums[b] / binSums[b].Hours : 1.0;
@@ -143,7 +143,7 @@ public static class OutdoorAirCalculator
                     double f = cellMultipliers is not null && cellMultipliers.TryGetValue((cell.DryBulbIndex, cell.HumidityIndex), out var c) && c.Hours > 0
                         ? c.Sum / c.Hours
                         : 1.0;
-                    AddBin(ref sums, load, flow, BinTemperature(settings, cell.DryBulbMid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
+                    AddBin(ref sums, load, flow, BinEvaluation.DryBulbC(settings.BinPoint, cell.DryBulbMid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
                 }
             }
 
@@ -194,9 +194,6 @@ public static class OutdoorAirCalculator
             Warnings = Warnings(weather, settings, hourly.Hours),
         };
     }
-
-    private static double BinTemperature(OutdoorAirSettings settings, Temperature mid, BinStatistics stats) =>
-        settings.BinPoint == BinEvaluationPoint.MeanDryBulb ? stats.MeanDryBulb.Celsius : mid.Celsius;
 
     private static void AddBin(ref LoadSums sums, OutdoorAirLoad load, FlowModel flow, double t, double w, int hours, double sitePressure, double multiplier)
     {

@@ -54,6 +54,7 @@ internal static class EconomizerSettingsBuilder
             CoilLeavingRelativeHumidity = (e.Number("coil_leaving_rh_pct") ?? 90.0) / 100.0,
             Controls = controls,
             Limits = limits,
+            BinPoint = outdoorAir.BinPoint,
         };
         var problem = settings.Problems().FirstOrDefault();
         if (problem is not null)

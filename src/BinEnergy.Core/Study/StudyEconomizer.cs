@@ -8,8 +8,8 @@ namespace BinEnergy.Core.Study;
 /// <summary>
 /// The economizer part of a study case: the economizer engine's evaluation (the same call the
 /// <c>economizer</c> command makes) and the compressor electricity of each control's coil
-/// energy through the cooling COP at each bin's midpoint, for both methods (the hourly method's
-/// coil energy is taken per bin, so its COP is also the bin midpoint's).
+/// energy through the cooling COP at each bin's evaluation point, for both methods (the hourly
+/// method's coil energy is taken per bin, so its COP is also the bin's evaluation point's).
 /// </summary>
 internal static class StudyEconomizer
 {
@@ -48,7 +48,7 @@ internal static class StudyEconomizer
         for (int b = 0; b < byBin.Count; b++)
         {
             var t = byBin[b];
-            total += plant.Cooling(t.CoilTotal.Joules, e.Bins[b].Mid.Celsius, t.HoursFree + t.HoursIntegrated + t.HoursMinimum, clamps);
+            total += plant.Cooling(t.CoilTotal.Joules, e.Bins[b].EvaluatedAt.Celsius, t.HoursFree + t.HoursIntegrated + t.HoursMinimum, clamps);
         }
 
         return total;
