@@ -131,7 +131,7 @@ public sealed class RunCommand : Command<RunCommand.Settings>
         console.MarkupLine(Markup.Escape(StudySummary.Caution));
     }
 
-    private static string N(double v) => v.ToString("#,0", CultureInfo.InvariantCulture);
+    private static string N(double v) => v.ToString("N0", CultureInfo.InvariantCulture);
 
     /// <summary>An <see cref="IProgress{T}"/> that reports on the calling thread (Spectre's display is refreshed by its own loop).</summary>
     private sealed class SyncProgress(Action<string> report) : IProgress<string>
