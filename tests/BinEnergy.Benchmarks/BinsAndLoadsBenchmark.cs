@@ -14,7 +14,8 @@ namespace BinEnergy.Benchmarks;
 /// same run. Target: bins plus loads add no more than 1 ms to the read. The loads use an
 /// office schedule, energy recovery with a frost limit and the site flow basis, so every
 /// branch of the hourly loop runs; <see cref="BinsAndLoadsWithPeaks"/> adds the design
-/// conditions (two sorts of the record) and the peak loads.
+/// conditions (two sorts of the record) and the peak loads; <see cref="BinsAndLoadsWithDemandControl"/>
+/// the same loads with demand-controlled ventilation (hourly airflow multipliers).
 /// </summary>
 [MemoryDiagnoser]
 public class BinsAndLoadsBenchmark
@@ -22,6 +23,7 @@ public class BinsAndLoadsBenchmark
     private byte[] openLayout = [];
     private HourlyWeather weather = null!;
     private OutdoorAirSettings settings = null!;
+    private OutdoorAirSettings demandControlled = null!;
     private readonly DryBulbBinScale scale = DryBulbBinScale.Default(UnitSystem.IP);
 
     [GlobalSetup]
@@ -47,6 +49,11 @@ public class BinsAndLoadsBenchmark
                 PressureDropPa = 200,
             },
         };
+
+        // Invented office zone, 40 people x 5 cfm + 10,000 ft2 x 0.06 cfm/ft2, on an invented occupancy profile.
+        var rate = VentilationRate.FromIp(40, 5, 10_000, 0.06);
+        double[] occupancy = [0, 0, 0, 0, 0, 0, 0.1, 0.5, 1, 1, 1, 1, 0.5, 0.8, 1, 1, 1, 0.6, 0.2, 0, 0, 0, 0, 0];
+        demandControlled = settings with { Airflow = null, Ventilation = rate, AirflowMultipliers = rate.DemandControlledMultipliers(occupancy) };
     }
 
     /// <summary>The full read into an hourly record (the baseline the target is stated against).</summary>
@@ -69,6 +76,15 @@ public class BinsAndLoadsBenchmark
         var flags = settings.Schedule.Flags(weather);
         var table = BinTable.Build(weather, scale, flags);
         return OutdoorAirCalculator.Compute(weather, settings, table, flags, null, DesignConditions.FromRecord(weather));
+    }
+
+    /// <summary>As <see cref="BinsAndLoads"/>, with demand-controlled ventilation (an airflow multiplier per hour of the day).</summary>
+    [Benchmark]
+    public OutdoorAirResult BinsAndLoadsWithDemandControl()
+    {
+        var flags = demandControlled.Schedule.Flags(weather);
+        var table = BinTable.Build(weather, scale, flags);
+        return OutdoorAirCalculator.Compute(weather, demandControlled, table, flags);
     }
 
     /// <summary>The read followed by bins and loads: what <c>binenergy outdoor-air</c> does before it prints.</summary>
