@@ -129,7 +129,7 @@ public static class StudyRunner
 
         if (weather.Quality.TotalRepairs > 0)
         {
-            warnings.Add($"The weather file of {c.Climate.Name} had {weather.Quality.TotalRepairs} repaired values ({string.Join(", ", weather.Quality.Counts.Select(kv => $"{kv.Key} {kv.Value}"))}).");
+            warnings.Add($"The weather file of {c.Climate.Name} had {weather.Quality.TotalRepairs} repaired values ({string.Join(", ", weather.Quality.Repairs.Select(kv => $"{kv.Key} {kv.Value}"))}); see binenergy inspect.");
         }
 
         return new StudyCaseResult

@@ -24,8 +24,17 @@ public sealed class QualityReport
     /// <summary>Notices that are not repairs (e.g. "no elevation: sea-level pressure assumed").</summary>
     public IReadOnlyList<string> Warnings => warnings;
 
-    /// <summary>Total number of repairs of every kind.</summary>
-    public int TotalRepairs => counts.Values.Sum();
+    /// <summary>Total number of repairs of every kind (not counting <see cref="Disagreements"/>, which change nothing).</summary>
+    public int TotalRepairs => Repairs.Sum(kv => kv.Value);
+
+    /// <summary>The counts of values changed or dropped (gaps filled, values clamped, hours dropped), by name.</summary>
+    public IEnumerable<KeyValuePair<string, int>> Repairs => counts.Where(kv => !kv.Key.StartsWith(QualityKeys.DisagreesPrefix, StringComparison.Ordinal));
+
+    /// <summary>
+    /// The counts of hours where a second humidity measure disagrees with the one used, by name
+    /// (<see cref="QualityKeys.DisagreesPrefix"/>): checks, not repairs.
+    /// </summary>
+    public IEnumerable<KeyValuePair<string, int>> Disagreements => counts.Where(kv => kv.Key.StartsWith(QualityKeys.DisagreesPrefix, StringComparison.Ordinal));
 
     /// <summary>Counts one repair of a kind, keeping its description while fewer than <see cref="MaxExamples"/> are kept.</summary>
     public void Count(string kind, string? example = null, int howMany = 1)

@@ -373,6 +373,26 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void WeatherRepairs_AreWarnedOncePerClimate_NotOncePerVariant()
+    {
+        // Two dry-bulb values blanked: two hours filled by interpolation (a repair, counted).
+        var lines = File.ReadAllLines(Path.Combine(folder, "harbor.csv"));
+        int first = Array.FindIndex(lines, l => l.StartsWith("2018-03-01T10", StringComparison.Ordinal));
+        foreach (int i in new[] { first, first + 1 })
+        {
+            var fields = lines[i].Split(',');
+            fields[1] = "";
+            lines[i] = string.Join(',', fields);
+        }
+
+        File.WriteAllLines(Path.Combine(folder, "harbor.csv"), lines);
+        var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", Path.Combine(folder, "out-repairs"));
+        Assert.True(code == 0, err);
+        var repairLines = err.Split('\n').Where(l => l.Contains("repaired values", StringComparison.Ordinal)).ToList();
+        Assert.Equal(["warning: harbor: The weather file of harbor had 2 repaired values (gap_filled_drybulb 2); see binenergy inspect."], repairLines);
+    }
+
+    [Fact]
     public void SiStudy_UsesSiColumnNames()
     {
         string text = ExampleStudy.Text.Replace("units = \"ip\"", "units = \"si\"", StringComparison.Ordinal)

@@ -150,6 +150,11 @@ public sealed class RealWeatherFileTests
         var w = Read(name);
         int disagreements = w.Quality.Counts[QualityKeys.DisagreesPrefix + "rh"];
         Assert.InRange(disagreements, 1, 60);
+
+        // A disagreement is a check, not a repair: the dew point is used and the RH column changes nothing.
+        Assert.Equal(disagreements, w.Quality.Disagreements.Single().Value);
+        Assert.DoesNotContain(w.Quality.Repairs, kv => kv.Key.StartsWith(QualityKeys.DisagreesPrefix, StringComparison.Ordinal));
+        Assert.Equal(w.Quality.Repairs.Sum(kv => kv.Value), w.Quality.TotalRepairs);
         int atJoins = 0, beyond = 0;
         for (int i = 0; i < raw.DryBulb.Length; i++)
         {
