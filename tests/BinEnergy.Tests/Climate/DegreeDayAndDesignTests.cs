@@ -38,6 +38,26 @@ public sealed class DegreeDayAndDesignTests
     }
 
     [Fact]
+    public void CurveSlope_IsTheShareOfHoursBelowTheBase_CheckedByMathNetQuadrature()
+    {
+        // d HDD / d base = (hours below the base) / 24, so HDD(b2) - HDD(b1) is the integral of that count over [b1, b2]
+        // (the variable-base method; a property of the definition). The curve itself is exact, from sorted
+        // running sums; here MathNet's double-exponential quadrature integrates the count independently.
+        var rng = new Random(11);
+        var hours = Enumerable.Range(0, 8760).Select(i => 10 - 12 * Math.Cos(2 * Math.PI * i / 8760) + 4 * (rng.NextDouble() - 0.5)).ToArray();
+        var sorted = hours.Order().ToArray();
+        double Below(double x) => Array.BinarySearch(sorted, x) is int k && k >= 0 ? k : ~k;
+        var curve = DegreeDayCurve.FromHours(hours);
+        var b = curve.BasesC; // 40 F to 80 F in 1 F steps, where the curve is exact
+        foreach (var (b1, b2) in new[] { (b[0], b[10]), (b[10], b[25]), (b[25], b[40]) })
+        {
+            double integral = MathNet.Numerics.Integrate.OnClosedInterval(x => Below(x) / 24.0, b1, b2, 1e-8);
+            double difference = curve.HeatingAt(b2) - curve.HeatingAt(b1);
+            Assert.Equal(1.0, integral / difference, 0.002);
+        }
+    }
+
+    [Fact]
     public void DesignConditions_OnEvenlySpreadHours_AreTheirPercentiles()
     {
         // 10,001 hours at 0.000, 0.005, ..., 50.000 C: the type-7 quantile at p is exactly 50 p.
