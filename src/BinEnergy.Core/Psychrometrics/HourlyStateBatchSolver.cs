@@ -70,6 +70,32 @@ internal static class HourlyStateBatchSolver
         }
     }
 
+    /// <summary>Records at least this long are solved in two halves on two threads (where the machine has two cores or more).</summary>
+    internal const int ParallelHours = 2048;
+
+    /// <summary>
+    /// <see cref="WetBulbs(ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, Span{double})"/>
+    /// for a whole record, in two halves on two threads when the record is long and the machine has a second core. Each
+    /// hour's result is the same either way: no hour depends on another.
+    /// </summary>
+    public static void WetBulbsOfRecord(double[] dryBulbC, double[] humidityRatio, double[] pressurePa, double[] dewPointC, double[] wetBulbC)
+    {
+        int n = dryBulbC.Length;
+        if (n < ParallelHours || Environment.ProcessorCount < 2)
+        {
+            WetBulbs(dryBulbC.AsSpan(), humidityRatio, pressurePa, dewPointC, wetBulbC);
+            return;
+        }
+
+        int half = n / 2 / Width * Width;
+        Parallel.For(0, 2, part =>
+        {
+            var (start, length) = part == 0 ? (0, half) : (half, n - half);
+            WetBulbs(dryBulbC.AsSpan(start, length), humidityRatio.AsSpan(start, length), pressurePa.AsSpan(start, length),
+                dewPointC.AsSpan(start, length), wetBulbC.AsSpan(start, length));
+        });
+    }
+
     /// <summary>
     /// Thermodynamic wet-bulb in C of each hour from dry-bulb, humidity ratio, pressure and dew point (the lower end
     /// of the bracket): eqs. 33 (t* at or above 0 C) and 35 (below) solved for t*, the same root as

@@ -83,7 +83,7 @@ public sealed class HourlyWeather
     /// <summary>Wet-bulb (eqs. 33 and 35 solved, from the dew point up, all hours at once) and enthalpy (eq. 32) of every hour.</summary>
     private void FillWetBulbAndEnthalpy()
     {
-        HourlyStateBatchSolver.WetBulbs(DryBulbC, HumidityRatio, PressurePa, DewPointC, WetBulbC);
+        HourlyStateBatchSolver.WetBulbsOfRecord(DryBulbC, HumidityRatio, PressurePa, DewPointC, WetBulbC);
         for (int i = 0; i < Count; i++)
         {
             EnthalpyJPerKg[i] = MoistAir.Enthalpy(DryBulbC[i], HumidityRatio[i]);

@@ -27,6 +27,19 @@ public sealed class HourlyStateBatchSolverTests
     }
 
     [Fact]
+    public void WetBulbsOfRecord_OnTwoThreads_EqualTheSingleThreadSolveExactly()
+    {
+        var w = RealWeatherFileTests.Read("725300TYA.CSV");
+        Assert.True(w.Count >= HourlyStateBatchSolver.ParallelHours);
+        var single = new double[w.Count];
+        HourlyStateBatchSolver.WetBulbs(w.DryBulbC.AsSpan(), w.HumidityRatio, w.PressurePa, w.DewPointC, single);
+        var split = new double[w.Count];
+        HourlyStateBatchSolver.WetBulbsOfRecord(w.DryBulbC, w.HumidityRatio, w.PressurePa, w.DewPointC, split);
+        Assert.Equal(single, split);
+        Assert.Equal(single, w.WetBulbC);
+    }
+
+    [Fact]
     public void WetBulbs_OfAWholeGrid_MatchTheBrentSolver_WhateverTheirNeighbours()
     {
         // Dry-bulb -40..50 C, RH 2..100 %, three pressures, in one batch of odd length (so the last block is padded):
