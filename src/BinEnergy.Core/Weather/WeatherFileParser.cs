@@ -165,14 +165,15 @@ internal static class WeatherFileParser
         // need not count lines; without a space or tab there is nothing to trim. Both only save time: the rows, their
         // lines and their values are the same either way.
         var body = data.AsSpan(pos);
-        bool quoted = body.Contains((byte)'"');
+        bool quoteOrSpace = body.IndexOfAny((byte)'"', (byte)' ', (byte)'\t') >= 0;
+        bool quoted = quoteOrSpace && body.Contains((byte)'"');
         var options = new CsvReaderOptions
         {
             Separator = sep,
             HasHeader = true,
             TrackLineNumbers = quoted,
             SkipEmptyLines = false,
-            TrimWhitespace = body.IndexOfAny((byte)' ', (byte)'\t') >= 0,
+            TrimWhitespace = quoteOrSpace && body.IndexOfAny((byte)' ', (byte)'\t') >= 0,
             FormatProvider = CultureInfo.InvariantCulture,
         };
         using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, pos, data.Length - pos), options);
@@ -202,8 +203,9 @@ internal static class WeatherFileParser
 
         int timeIndex = FindColumn(headers, map.Time.Column, WeatherErrorKind.MissingTimeColumn, file, headerLine, map, "time");
         int clockIndex = map.Time.TimeColumn is string tc ? FindColumn(headers, tc, WeatherErrorKind.MissingTimeColumn, file, headerLine, map, "time of day") : -1;
-        // Arrays sized from the line count (one row a line at most, unless the line breaks are lone carriage returns).
-        int capacity = body.Count((byte)'\n') + 1;
+        // Arrays sized from the line count: one row a line after the column names, so the arrays are exactly as long as
+        // the rows unless the file has blank lines (or lone carriage returns as line breaks: then they grow).
+        int capacity = Math.Max(16, body.Count((byte)'\n') - (body[^1] == '\n' ? 1 : 0));
         var times = new DateTime[capacity];
         var writtenYears = new int[capacity];
         var lines = new int[capacity];
@@ -363,7 +365,7 @@ internal static class WeatherFileParser
 
             if (row == times.Length)
             {
-                int grown = 2 * row;
+                int grown = Math.Max(16, 2 * row);
                 Array.Resize(ref times, grown);
                 Array.Resize(ref writtenYears, grown);
                 Array.Resize(ref lines, grown);

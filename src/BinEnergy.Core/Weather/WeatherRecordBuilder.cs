@@ -134,6 +134,7 @@ internal static class WeatherRecordBuilder
         var gridIndex = new int[n];
         int prev = order[0];
         gridIndex[prev] = 0;
+        bool inFileOrder = prev == 0; // rows in file order, one hour apart
         for (int k = 1; k < n; k++)
         {
             int i = order[k];
@@ -141,9 +142,12 @@ internal static class WeatherRecordBuilder
             if (step.Ticks == TimeSpan.TicksPerHour)
             {
                 gridIndex[i] = gridIndex[prev] + 1;
+                inFileOrder &= i == k;
                 prev = i;
                 continue;
             }
+
+            inFileOrder = false;
 
             if (step == TimeSpan.Zero)
             {
@@ -174,29 +178,44 @@ internal static class WeatherRecordBuilder
         }
 
         int hours = gridIndex[order[^1]] + 1;
-        var gridLine = new int[hours];
-        var times = new DateTime[hours];
-        for (int g = 0; g < hours; g++)
-        {
-            times[g] = new DateTime(first.Ticks + g * TimeSpan.TicksPerHour);
-        }
-
-        for (int i = 0; i < n; i++)
-        {
-            gridLine[gridIndex[i]] = raw.Lines[i];
-        }
-
+        DateTime[] times;
+        int[] gridLine;
         var columns = new Dictionary<WeatherQuantity, double[]>();
-        foreach (var (q, list) in raw.Values)
+        if (inFileOrder)
         {
-            var col = new double[hours];
-            Array.Fill(col, double.NaN);
-            for (int i = 0; i < n; i++)
+            // Row i is hour i: the keys are the hours (a fresh array either way), and the parsed columns serve as they are.
+            times = keys;
+            gridLine = Exactly(raw.Lines, n);
+            foreach (var (q, list) in raw.Values)
             {
-                col[gridIndex[i]] = list[i];
+                columns[q] = Exactly(list, n);
+            }
+        }
+        else
+        {
+            times = new DateTime[hours];
+            gridLine = new int[hours];
+            for (int g = 0; g < hours; g++)
+            {
+                times[g] = new DateTime(first.Ticks + g * TimeSpan.TicksPerHour);
             }
 
-            columns[q] = col;
+            for (int i = 0; i < n; i++)
+            {
+                gridLine[gridIndex[i]] = raw.Lines[i];
+            }
+
+            foreach (var (q, list) in raw.Values)
+            {
+                var col = new double[hours];
+                Array.Fill(col, double.NaN);
+                for (int i = 0; i < n; i++)
+                {
+                    col[gridIndex[i]] = list[i];
+                }
+
+                columns[q] = col;
+            }
         }
 
         var drop = new bool[hours];
@@ -536,6 +555,9 @@ internal static class WeatherRecordBuilder
 
         return v;
     }
+
+    /// <summary>The first <paramref name="n"/> values: the array itself when that is all of it, else a copy.</summary>
+    private static T[] Exactly<T>(T[] values, int n) => values.Length == n ? values : values[..n];
 
     private static T[] Keep<T>(T[] values, bool[] drop, int kept)
     {
