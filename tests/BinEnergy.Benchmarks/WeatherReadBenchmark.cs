@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.IO.Compression;
 using BenchmarkDotNet.Attributes;
+using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Weather;
 using CsvHelper;
 
@@ -16,12 +17,16 @@ namespace BinEnergy.Benchmarks;
 public class WeatherReadBenchmark
 {
     private byte[] openLayout = [];
+    private HourlyWeather record = null!;
+    private double[] wetBulbs = [];
 
     [GlobalSetup]
     public void Setup()
     {
         // The Chicago TMY3 check file, converted once to the open layout (time, drybulb_c, dewpoint_c, rh_pct, pressure_kpa).
         openLayout = StationYear.ChicagoOpenLayout();
+        record = WeatherReader.Read(openLayout, "chicago-open-layout.csv");
+        wetBulbs = new double[record.Count];
     }
 
     /// <summary>Parses every number of the file with CsvHelper and sums them (so nothing is optimised away).</summary>
@@ -48,6 +53,14 @@ public class WeatherReadBenchmark
     /// <summary>The reader's parse alone (fields, times, units, range checks), without calendar, gaps or psychrometrics.</summary>
     [Benchmark]
     public int ParseIntoTable() => WeatherFileParser.Parse(openLayout, "chicago-open-layout.csv", null).Count;
+
+    /// <summary>The wet-bulb of every hour of the record (the costliest part of the full read), as the full read solves them.</summary>
+    [Benchmark]
+    public double WetBulbsOfRecord()
+    {
+        HourlyStateBatchSolver.WetBulbsOfRecord(record.DryBulbC, record.HumidityRatio, record.PressurePa, record.DewPointC, wetBulbs);
+        return wetBulbs[^1];
+    }
 
     /// <summary>The full read into an hourly record.</summary>
     [Benchmark]

@@ -18,21 +18,21 @@ public static class Saturation
     public const double TriplePointC = 0.01;
 
     // Handbook ch. 1, eq. 5 coefficients (over ice).
-    private const double C1 = -5.6745359e3;
-    private const double C2 = 6.3925247;
-    private const double C3 = -9.6778430e-3;
-    private const double C4 = 6.2215701e-7;
-    private const double C5 = 2.0747825e-9;
-    private const double C6 = -9.4840240e-13;
-    private const double C7 = 4.1635019;
+    internal const double C1 = -5.6745359e3;
+    internal const double C2 = 6.3925247;
+    internal const double C3 = -9.6778430e-3;
+    internal const double C4 = 6.2215701e-7;
+    internal const double C5 = 2.0747825e-9;
+    internal const double C6 = -9.4840240e-13;
+    internal const double C7 = 4.1635019;
 
     // Handbook ch. 1, eq. 6 coefficients (over liquid water).
-    private const double C8 = -5.8002206e3;
-    private const double C9 = 1.3914993;
-    private const double C10 = -4.8640239e-2;
-    private const double C11 = 4.1764768e-5;
-    private const double C12 = -1.4452093e-8;
-    private const double C13 = 6.5459673;
+    internal const double C8 = -5.8002206e3;
+    internal const double C9 = 1.3914993;
+    internal const double C10 = -4.8640239e-2;
+    internal const double C11 = 4.1764768e-5;
+    internal const double C12 = -1.4452093e-8;
+    internal const double C13 = 6.5459673;
 
     /// <summary>
     /// Saturation vapour pressure p_ws in Pa at a temperature in C: Handbook ch. 1,

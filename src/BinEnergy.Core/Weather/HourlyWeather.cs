@@ -80,20 +80,13 @@ public sealed class HourlyWeather
         return dewPoint;
     }
 
-    /// <summary>Wet-bulb (eqs. 33 and 35 solved, from the dew point up) and enthalpy (eq. 32) of every hour.</summary>
+    /// <summary>Wet-bulb (eqs. 33 and 35 solved, from the dew point up, all hours at once) and enthalpy (eq. 32) of every hour.</summary>
     private void FillWetBulbAndEnthalpy()
     {
-        var problem = new HourlyStateSolver.WetBulbProblem();
-        double ratio = 1.0 / 3.0;
+        HourlyStateBatchSolver.WetBulbsOfRecord(DryBulbC, HumidityRatio, PressurePa, DewPointC, WetBulbC);
         for (int i = 0; i < Count; i++)
         {
-            double t = DryBulbC[i];
-            double w = HumidityRatio[i];
-            double wb = problem.Solve(t, w, PressurePa[i], DewPointC[i], ratio);
-            WetBulbC[i] = wb;
-            EnthalpyJPerKg[i] = MoistAir.Enthalpy(t, w);
-            double depression = t - DewPointC[i];
-            ratio = depression > 0.05 ? (t - wb) / depression : 1.0 / 3.0;
+            EnthalpyJPerKg[i] = MoistAir.Enthalpy(DryBulbC[i], HumidityRatio[i]);
         }
     }
 

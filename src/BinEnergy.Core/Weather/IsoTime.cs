@@ -7,10 +7,11 @@ namespace BinEnergy.Core.Weather;
 /// </summary>
 internal static class IsoTime
 {
-    public static bool TryParse(ReadOnlySpan<byte> s, out DateTime value, out bool was24)
+    /// <summary>Parses a time; <paramref name="writtenYear"/> is the year as written (for "24:00", that of the day it ends).</summary>
+    public static bool TryParse(ReadOnlySpan<byte> s, out DateTime value, out int writtenYear)
     {
         value = default;
-        was24 = false;
+        writtenYear = 0;
         if (s.Length is not (16 or 19) || s[4] != '-' || s[7] != '-' || (s[10] != 'T' && s[10] != ' ') || s[13] != ':' || (s.Length == 19 && s[16] != ':'))
         {
             return false;
@@ -33,10 +34,10 @@ internal static class IsoTime
             return false;
         }
 
+        writtenYear = year;
         if (hour == 24 && minute == 0 && second == 0)
         {
             value = new DateTime(year, month, day).AddDays(1);
-            was24 = true;
             return true;
         }
 
@@ -45,9 +46,20 @@ internal static class IsoTime
             return false;
         }
 
-        value = new DateTime(year, month, day, hour, minute, second);
+        value = new DateTime(DaysBefore(year, month) * TimeSpan.TicksPerDay + (day - 1) * TimeSpan.TicksPerDay
+            + hour * TimeSpan.TicksPerHour + minute * TimeSpan.TicksPerMinute + second * TimeSpan.TicksPerSecond);
         return true;
     }
+
+    /// <summary>Days from 0001-01-01 to the first of the month, in the proleptic Gregorian calendar (leap years: every fourth, except centuries not divisible by 400).</summary>
+    private static long DaysBefore(int year, int month)
+    {
+        int y = year - 1;
+        return (y * 365L) + (y / 4) - (y / 100) + (y / 400) + (DateTime.IsLeapYear(year) ? LeapMonthStarts : MonthStarts)[month - 1];
+    }
+
+    private static readonly int[] MonthStarts = [0, 31, 59, 90, 120, 151, 181, 212, 243, 273, 304, 334];
+    private static readonly int[] LeapMonthStarts = [0, 31, 60, 91, 121, 152, 182, 213, 244, 274, 305, 335];
 
     private static bool Digits(ReadOnlySpan<byte> s, int start, int count, out int value)
     {

@@ -23,17 +23,17 @@ internal sealed class RawWeatherTable
     /// <summary>True for the project's open layout.</summary>
     public bool IsOpenLayout { get; }
 
-    /// <summary>Time of each row as written ("24:00" resolved to midnight of the next day), before any shift.</summary>
-    public List<DateTime> Times { get; } = new(8784);
+    /// <summary>Time of each row as written ("24:00" resolved to midnight of the next day), before any shift; the first <see cref="Count"/> entries.</summary>
+    public DateTime[] Times { get; private set; } = [];
 
-    /// <summary>The year of each row's written date (for "24:00" the date before midnight).</summary>
-    public List<int> WrittenYears { get; } = new(8784);
+    /// <summary>The year of each row's written date (for "24:00" the date before midnight); the first <see cref="Count"/> entries.</summary>
+    public int[] WrittenYears { get; private set; } = [];
 
-    /// <summary>1-based file line of each row.</summary>
-    public List<int> Lines { get; } = new(8784);
+    /// <summary>1-based file line of each row; the first <see cref="Count"/> entries.</summary>
+    public int[] Lines { get; private set; } = [];
 
-    /// <summary>Values per quantity in internal units (C, %, kg/kg, Pa), NaN where missing.</summary>
-    public Dictionary<WeatherQuantity, List<double>> Values { get; } = [];
+    /// <summary>Values per quantity in internal units (C, %, kg/kg, Pa), NaN where missing; the first <see cref="Count"/> entries.</summary>
+    public Dictionary<WeatherQuantity, double[]> Values { get; } = [];
 
     /// <summary>The file's own name for each quantity's column.</summary>
     public Dictionary<WeatherQuantity, string> ColumnNames { get; } = [];
@@ -48,5 +48,11 @@ internal sealed class RawWeatherTable
     public QualityReport Quality { get; } = new();
 
     /// <summary>Number of rows.</summary>
-    public int Count => Times.Count;
+    public int Count { get; private set; }
+
+    /// <summary>The rows as parsed: arrays at least <paramref name="count"/> long (the parser sizes them from the line count).</summary>
+    public void SetRows(DateTime[] times, int[] writtenYears, int[] lines, int count)
+    {
+        (Times, WrittenYears, Lines, Count) = (times, writtenYears, lines, count);
+    }
 }

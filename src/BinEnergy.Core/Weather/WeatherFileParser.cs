@@ -161,13 +161,19 @@ internal static class WeatherFileParser
             }
         }
 
+        // Without a quote in the data every record is one line, so a row's line follows from its count and the reader
+        // need not count lines; without a space or tab there is nothing to trim. Both only save time: the rows, their
+        // lines and their values are the same either way.
+        var body = data.AsSpan(pos);
+        bool quoteOrSpace = body.IndexOfAny((byte)'"', (byte)' ', (byte)'\t') >= 0;
+        bool quoted = quoteOrSpace && body.Contains((byte)'"');
         var options = new CsvReaderOptions
         {
             Separator = sep,
             HasHeader = true,
-            TrackLineNumbers = true,
+            TrackLineNumbers = quoted,
             SkipEmptyLines = false,
-            TrimWhitespace = true,
+            TrimWhitespace = quoteOrSpace && body.IndexOfAny((byte)' ', (byte)'\t') >= 0,
             FormatProvider = CultureInfo.InvariantCulture,
         };
         using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, pos, data.Length - pos), options);
@@ -197,127 +203,37 @@ internal static class WeatherFileParser
 
         int timeIndex = FindColumn(headers, map.Time.Column, WeatherErrorKind.MissingTimeColumn, file, headerLine, map, "time");
         int clockIndex = map.Time.TimeColumn is string tc ? FindColumn(headers, tc, WeatherErrorKind.MissingTimeColumn, file, headerLine, map, "time of day") : -1;
-        var columns = new List<(WeatherQuantity Q, int Index, double Factor, double Offset, List<double> Values)>();
+        // Arrays sized from the line count: one row a line after the column names, so the arrays are exactly as long as
+        // the rows unless the file has blank lines (or lone carriage returns as line breaks: then they grow).
+        int capacity = Math.Max(16, body.Count((byte)'\n') - (body[^1] == '\n' ? 1 : 0));
+        var times = new DateTime[capacity];
+        var writtenYears = new int[capacity];
+        var lines = new int[capacity];
+        var columns = new NumberColumn[map.Columns.Count];
+        int c0 = 0;
         foreach (var (q, spec) in map.Columns)
         {
             var kind = q == WeatherQuantity.DryBulb ? WeatherErrorKind.MissingDryBulb : q == WeatherQuantity.Pressure ? WeatherErrorKind.MissingHeader : WeatherErrorKind.MissingHumidity;
             int idx = FindColumn(headers, spec.Name, kind, file, headerLine, map, Describe(q));
             var (f, o) = WeatherUnits.ToInternal(q, spec);
-            var list = new List<double>(8784);
-            table.Values[q] = list;
+            var (low, high) = Range(q);
             table.ColumnNames[q] = headers[idx];
-            columns.Add((q, idx, f, o, list));
+            columns[c0++] = new NumberColumn(q, idx, f, o, low, high, new double[capacity]);
         }
 
         var missing = map.MissingCodes.Where(c => c.Length > 0).Select(c => Encoding.UTF8.GetBytes(c.Trim())).Concat(DefaultMissing).ToArray();
         var missingStarts = System.Buffers.SearchValues.Create(missing.Select(c => c[0]).Distinct().ToArray());
-        bool iso = map.Time.Format == "iso";
-        int headerCount = headers.Length;
-        int trailing = 0;
-        while (reader.Read())
+
+        // A comma inside a field is possible only in a quoted field, or when the separator is another character; a
+        // missing-value code such as -9900 reads as a number. Where neither can happen, the rows skip the field text.
+        bool commaPossible = quoted || sep != ',';
+        bool numericCode = missing.Any(code => double.TryParse(code, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v));
+        var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, commaPossible, commaPossible || numericCode, missing, missingStarts);
+        int row = ReadRows(reader, layout, ref times, ref writtenYears, ref lines, columns, out int trailing);
+        table.SetRows(times, writtenYears, lines, row);
+        foreach (var column in columns)
         {
-            int line = headerLine + (int)reader.LineNumber - 1;
-            int fc = reader.FieldCount;
-            if (fc == 1 && reader.IsEmpty(0))
-            {
-                if (map.EndAtBlankLine)
-                {
-                    while (reader.Read())
-                    {
-                        trailing++;
-                    }
-
-                    break;
-                }
-
-                continue;
-            }
-
-            if (fc != headerCount)
-            {
-                string raw = Encoding.UTF8.GetString(reader.RawRecord);
-                bool decimalComma = fc > headerCount && Regex.IsMatch(raw, @"\d,\d");
-                throw new WeatherDataException(WeatherErrorKind.WrongFieldCount, file,
-                    $"the row has {fc} fields but the header has {headerCount}",
-                    fc < headerCount
-                        ? "The line looks cut short: complete it or delete it (a file cut off during download or copy ends like this)"
-                        : decimalComma
-                            ? "A comma may be used as the decimal separator: write decimals with a dot (12.5, not 12,5)"
-                            : "Remove the extra fields, or quote text that contains the separator",
-                    line: line, value: raw);
-            }
-
-            DateTime time;
-            int writtenYear;
-            if (iso)
-            {
-                if (!IsoTime.TryParse(reader.GetSpan(timeIndex).Trim(" \t"u8), out time, out bool was24))
-                {
-                    throw BadTime(file, line, headers[timeIndex], reader.GetString(timeIndex), "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
-                }
-
-                writtenYear = was24 ? time.AddDays(-1).Year : time.Year;
-            }
-            else
-            {
-                string text = reader.GetString(timeIndex);
-                if (!TryParseExact24(text, map.Time.Format, out var date, out bool was24))
-                {
-                    throw BadTime(file, line, headers[timeIndex], text, map.Time.Format);
-                }
-
-                writtenYear = was24 ? date.AddDays(-1).Year : date.Year;
-                time = date;
-                if (clockIndex >= 0)
-                {
-                    string clock = reader.GetString(clockIndex);
-                    if (!TryParseExact24("2001-01-01 " + clock, "yyyy-MM-dd " + map.Time.TimeFormat, out var tod, out _))
-                    {
-                        throw BadTime(file, line, headers[clockIndex], clock, map.Time.TimeFormat!);
-                    }
-
-                    time = date.Date + (tod - new DateTime(2001, 1, 1));
-                    writtenYear = date.Year;
-                }
-            }
-
-            table.Times.Add(time);
-            table.WrittenYears.Add(writtenYear);
-            table.Lines.Add(line);
-            foreach (var (q, idx, f, o, list) in columns)
-            {
-                var span = reader.GetSpan(idx).Trim(" \t"u8);
-                if (span.IsEmpty || (missingStarts.Contains(span[0]) && IsMissing(span, missing)))
-                {
-                    list.Add(double.NaN);
-                    continue;
-                }
-
-                // A comma inside a (quoted) number would be read as a thousands separator: refuse it first.
-                if (span.Contains((byte)',') || !reader.TryParse<double>(idx, out double raw) || !double.IsFinite(raw))
-                {
-                    string s = Encoding.UTF8.GetString(span);
-                    throw new WeatherDataException(WeatherErrorKind.NotANumber, file, $"the {Describe(q)} is not a number", s.Contains(',')
-                        ? "Write decimals with a dot (12.5, not 12,5)"
-                        : "Write a number, or leave the field empty (or use a missing-value code" + (table.IsOpenLayout ? " such as NA" : " the map lists") + ") where the value is missing",
-                        line: line, column: headers[idx], value: s);
-                }
-
-                double v = raw * f + o;
-                var (low, high) = Range(q);
-                if (!(v >= low && v <= high))
-                {
-                    throw OutOfRange(table, q, headers[idx], line, raw, v, span);
-                }
-
-                if (q == WeatherQuantity.RelativeHumidity && v > 100.0)
-                {
-                    table.Quality.Count(QualityKeys.RhClamped, Inv($"line {line}: RH {v:0.##} % set to 100 %"));
-                    v = 100.0;
-                }
-
-                list.Add(v);
-            }
+            table.Values[column.Quantity] = column.Values;
         }
 
         if (table.Count == 0)
@@ -399,6 +315,176 @@ internal static class WeatherFileParser
                 }
             }
         }
+    }
+
+    /// <summary>What the row loop needs to know about the file, fixed once the column names are read.</summary>
+    private sealed record RowLayout(RawWeatherTable Table, ColumnMap Map, string[] Headers, int HeaderLine, int TimeIndex, int ClockIndex,
+        bool Quoted, bool CommaPossible, bool NumbersNeedText, byte[][] Missing, System.Buffers.SearchValues<byte> MissingStarts)
+    {
+        public string File => Table.File;
+    }
+
+    /// <summary>
+    /// Reads the rows after the column names into the arrays (grown if the file has more rows than lines counted) and
+    /// returns their number; <paramref name="trailing"/> counts the lines ignored after a blank line where the map says so.
+    /// </summary>
+    private static int ReadRows(CsvReader reader, RowLayout layout, ref DateTime[] times, ref int[] writtenYears, ref int[] lines,
+        NumberColumn[] columns, out int trailing)
+    {
+        trailing = 0;
+        int headerCount = layout.Headers.Length;
+        bool iso = layout.Map.Time.Format == "iso";
+        bool quoted = layout.Quoted;
+        bool numbersNeedText = layout.NumbersNeedText;
+        int records = 0;
+        int row = 0;
+        while (reader.Read())
+        {
+            records++;
+            int line = quoted ? layout.HeaderLine + (int)reader.LineNumber - 1 : layout.HeaderLine + records;
+            int fc = reader.FieldCount;
+            if (fc == 1 && reader.IsEmpty(0))
+            {
+                if (layout.Map.EndAtBlankLine)
+                {
+                    while (reader.Read())
+                    {
+                        trailing++;
+                    }
+
+                    break;
+                }
+
+                continue;
+            }
+
+            if (fc != headerCount)
+            {
+                throw WrongFieldCount(reader, layout, fc, line);
+            }
+
+            if (row == times.Length)
+            {
+                int grown = Math.Max(16, 2 * row);
+                Array.Resize(ref times, grown);
+                Array.Resize(ref writtenYears, grown);
+                Array.Resize(ref lines, grown);
+                foreach (ref var column in columns.AsSpan())
+                {
+                    column = column with { Values = Grow(column.Values, grown) };
+                }
+            }
+
+            DateTime time;
+            int writtenYear;
+            if (!iso)
+            {
+                time = MappedTime(reader, layout, line, out writtenYear);
+            }
+            else if (!IsoTime.TryParse(reader.GetSpan(layout.TimeIndex).Trim(" \t"u8), out time, out writtenYear))
+            {
+                throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], reader.GetString(layout.TimeIndex), "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
+            }
+
+            times[row] = time;
+            writtenYears[row] = writtenYear;
+            lines[row] = line;
+            foreach (ref readonly var column in columns.AsSpan())
+            {
+                // Where no missing-value code reads as a number and no field can hold a comma, a field that parses to a
+                // finite number is one; only the others need their text looked at.
+                if (numbersNeedText || !reader.TryParse<double>(column.Index, out double raw) || !double.IsFinite(raw))
+                {
+                    raw = NumberFromText(reader, layout, column, line);
+                    if (double.IsNaN(raw))
+                    {
+                        column.Values[row] = double.NaN;
+                        continue;
+                    }
+                }
+
+                double v = raw * column.Factor + column.Offset;
+                if (!(v >= column.Low && v <= column.High))
+                {
+                    throw OutOfRange(layout.Table, column.Quantity, layout.Headers[column.Index], line, raw, v, reader.GetSpan(column.Index).Trim(" \t"u8));
+                }
+
+                if (v > 100.0 && column.Quantity == WeatherQuantity.RelativeHumidity)
+                {
+                    layout.Table.Quality.Count(QualityKeys.RhClamped, Inv($"line {line}: RH {v:0.##} % set to 100 %"));
+                    v = 100.0;
+                }
+
+                column.Values[row] = v;
+            }
+
+            row++;
+        }
+
+        return row;
+    }
+
+    /// <summary>A number field read from its text: NaN for a missing-value code or an empty field; an error for anything but a finite number.</summary>
+    private static double NumberFromText(CsvReader reader, RowLayout layout, in NumberColumn column, int line)
+    {
+        var span = reader.GetSpan(column.Index).Trim(" \t"u8);
+        if (span.IsEmpty || (layout.MissingStarts.Contains(span[0]) && IsMissing(span, layout.Missing)))
+        {
+            return double.NaN;
+        }
+
+        // A comma inside a (quoted) number would be read as a thousands separator: refuse it first.
+        if ((layout.CommaPossible && span.Contains((byte)',')) || !reader.TryParse<double>(column.Index, out double raw) || !double.IsFinite(raw))
+        {
+            string s = Encoding.UTF8.GetString(span);
+            throw new WeatherDataException(WeatherErrorKind.NotANumber, layout.File, $"the {Describe(column.Quantity)} is not a number", s.Contains(',')
+                ? "Write decimals with a dot (12.5, not 12,5)"
+                : "Write a number, or leave the field empty (or use a missing-value code" + (layout.Table.IsOpenLayout ? " such as NA" : " the map lists") + ") where the value is missing",
+                line: line, column: layout.Headers[column.Index], value: s);
+        }
+
+        return raw;
+    }
+
+    /// <summary>The time of a row in a map's format (one or two columns).</summary>
+    private static DateTime MappedTime(CsvReader reader, RowLayout layout, int line, out int writtenYear)
+    {
+        var timeLayout = layout.Map.Time;
+        string text = reader.GetString(layout.TimeIndex);
+        if (!TryParseExact24(text, timeLayout.Format, out var date, out bool was24))
+        {
+            throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], text, timeLayout.Format);
+        }
+
+        writtenYear = was24 ? date.AddDays(-1).Year : date.Year;
+        if (layout.ClockIndex < 0)
+        {
+            return date;
+        }
+
+        string clock = reader.GetString(layout.ClockIndex);
+        if (!TryParseExact24("2001-01-01 " + clock, "yyyy-MM-dd " + timeLayout.TimeFormat, out var tod, out _))
+        {
+            throw BadTime(layout.File, line, layout.Headers[layout.ClockIndex], clock, timeLayout.TimeFormat!);
+        }
+
+        writtenYear = date.Year;
+        return date.Date + (tod - new DateTime(2001, 1, 1));
+    }
+
+    private static WeatherDataException WrongFieldCount(CsvReader reader, RowLayout layout, int fc, int line)
+    {
+        int headerCount = layout.Headers.Length;
+        string raw = Encoding.UTF8.GetString(reader.RawRecord);
+        bool decimalComma = fc > headerCount && Regex.IsMatch(raw, @"\d,\d");
+        return new WeatherDataException(WeatherErrorKind.WrongFieldCount, layout.File,
+            $"the row has {fc} fields but the header has {headerCount}",
+            fc < headerCount
+                ? "The line looks cut short: complete it or delete it (a file cut off during download or copy ends like this)"
+                : decimalComma
+                    ? "A comma may be used as the decimal separator: write decimals with a dot (12.5, not 12,5)"
+                    : "Remove the extra fields, or quote text that contains the separator",
+            line: line, value: raw);
     }
 
     private static ColumnMap OpenLayoutMap(string[] headers, string file, int headerLine)
@@ -487,6 +573,15 @@ internal static class WeatherFileParser
         }
 
         return idx;
+    }
+
+    /// <summary>One number column being read: where it is, how its unit converts, its physical range and its values.</summary>
+    private readonly record struct NumberColumn(WeatherQuantity Quantity, int Index, double Factor, double Offset, double Low, double High, double[] Values);
+
+    private static double[] Grow(double[] values, int length)
+    {
+        Array.Resize(ref values, length);
+        return values;
     }
 
     private static bool IsMissing(ReadOnlySpan<byte> span, byte[][] codes)

@@ -15,6 +15,7 @@ internal static class WeatherRecordBuilder
     private const double RhDisagreementPoints = 5.0;
     private const double TemperatureDisagreementK = 1.0;
     private static readonly TimeSpan Hour = TimeSpan.FromHours(1);
+    private static readonly DateTime Noon = new(2000, 1, 1, 12, 0, 0);
 
     public static HourlyWeather Build(RawWeatherTable raw, WeatherReadOptions options)
     {
@@ -63,9 +64,10 @@ internal static class WeatherRecordBuilder
 
         int n = raw.Count;
         var shifted = new DateTime[n];
+        long shiftTicks = Noon.AddHours(shiftHours).Ticks - Noon.Ticks; // what AddHours adds, whatever the date
         for (int i = 0; i < n; i++)
         {
-            shifted[i] = raw.Times[i].AddHours(shiftHours);
+            shifted[i] = raw.Times[i].AddTicks(shiftTicks);
         }
 
         bool typical = raw.TypicalYear ?? DetectTypicalYear(shifted, raw.WrittenYears);
@@ -75,22 +77,31 @@ internal static class WeatherRecordBuilder
         DateTime[] keys;
         if (typical)
         {
-            bool hasLeapDay = shifted.Any(t => t.Month == 2 && t.Day == 29);
-            if (hasLeapDay && !DateTime.IsLeapYear(calendarYear))
+            if (HasLeapDay(shifted) && !DateTime.IsLeapYear(calendarYear))
             {
                 calendarYear = LeapYearStartingLike(calendarYear);
             }
 
+            // Each hour moves to the same month, day and time of day in the calendar year; the move is worked out once a day.
             keys = new DateTime[n];
             var front = new List<int>();
             var middle = new List<int>(n);
             var back = new List<int>();
+            long dayStart = 1, dayEnd = 0, move = 0;
+            int year = 0;
             for (int i = 0; i < n; i++)
             {
-                var s = shifted[i];
-                keys[i] = new DateTime(calendarYear, s.Month, s.Day).Add(s.TimeOfDay);
+                long ticks = shifted[i].Ticks;
+                if (ticks < dayStart || ticks >= dayEnd)
+                {
+                    var day = shifted[i].Date;
+                    (dayStart, dayEnd, year) = (day.Ticks, day.Ticks + TimeSpan.TicksPerDay, day.Year);
+                    move = new DateTime(calendarYear, day.Month, day.Day).Ticks - day.Ticks;
+                }
+
+                keys[i] = new DateTime(ticks + move);
                 int written = raw.WrittenYears[i];
-                (s.Year > written ? front : s.Year < written ? back : middle).Add(i);
+                (year > written ? front : year < written ? back : middle).Add(i);
             }
 
             if (front.Count + back.Count > 0)
@@ -123,10 +134,21 @@ internal static class WeatherRecordBuilder
         var gridIndex = new int[n];
         int prev = order[0];
         gridIndex[prev] = 0;
+        bool inFileOrder = prev == 0; // rows in file order, one hour apart
         for (int k = 1; k < n; k++)
         {
             int i = order[k];
             var step = keys[i] - keys[prev];
+            if (step.Ticks == TimeSpan.TicksPerHour)
+            {
+                gridIndex[i] = gridIndex[prev] + 1;
+                inFileOrder &= i == k;
+                prev = i;
+                continue;
+            }
+
+            inFileOrder = false;
+
             if (step == TimeSpan.Zero)
             {
                 throw new WeatherDataException(WeatherErrorKind.DuplicateTime, file, $"the hour {Show(keys[i], typical)} appears twice, on lines {raw.Lines[prev]} and {raw.Lines[i]}",
@@ -156,29 +178,44 @@ internal static class WeatherRecordBuilder
         }
 
         int hours = gridIndex[order[^1]] + 1;
-        var gridLine = new int[hours];
-        var times = new DateTime[hours];
-        for (int g = 0; g < hours; g++)
-        {
-            times[g] = first.AddHours(g);
-        }
-
-        for (int i = 0; i < n; i++)
-        {
-            gridLine[gridIndex[i]] = raw.Lines[i];
-        }
-
+        DateTime[] times;
+        int[] gridLine;
         var columns = new Dictionary<WeatherQuantity, double[]>();
-        foreach (var (q, list) in raw.Values)
+        if (inFileOrder)
         {
-            var col = new double[hours];
-            Array.Fill(col, double.NaN);
-            for (int i = 0; i < n; i++)
+            // Row i is hour i: the keys are the hours (a fresh array either way), and the parsed columns serve as they are.
+            times = keys;
+            gridLine = Exactly(raw.Lines, n);
+            foreach (var (q, list) in raw.Values)
             {
-                col[gridIndex[i]] = list[i];
+                columns[q] = Exactly(list, n);
+            }
+        }
+        else
+        {
+            times = new DateTime[hours];
+            gridLine = new int[hours];
+            for (int g = 0; g < hours; g++)
+            {
+                times[g] = new DateTime(first.Ticks + g * TimeSpan.TicksPerHour);
             }
 
-            columns[q] = col;
+            for (int i = 0; i < n; i++)
+            {
+                gridLine[gridIndex[i]] = raw.Lines[i];
+            }
+
+            foreach (var (q, list) in raw.Values)
+            {
+                var col = new double[hours];
+                Array.Fill(col, double.NaN);
+                for (int i = 0; i < n; i++)
+                {
+                    col[gridIndex[i]] = list[i];
+                }
+
+                columns[q] = col;
+            }
         }
 
         var drop = new bool[hours];
@@ -243,25 +280,18 @@ internal static class WeatherRecordBuilder
         var w = new double[kept];
         var dewPoint = new double[kept];
         var given = columns[primary];
-        for (int i = 0; i < kept; i++)
+        if (primary == WeatherQuantity.DewPoint)
+        {
+            HumidityFromDewPoint(given, dryBulb, pressure, w, dewPoint, gridLine, times, typical, quality);
+        }
+
+        for (int i = 0; i < kept && primary != WeatherQuantity.DewPoint; i++)
         {
             double t = dryBulb[i];
             double p = pressure[i];
             double v = given[i];
             switch (primary)
             {
-                case WeatherQuantity.DewPoint:
-                    if (v > t)
-                    {
-                        bool suspect = v - t > DewPointClampToleranceK;
-                        quality.Count(suspect ? QualityKeys.DewPointAboveDryBulbSuspect : QualityKeys.DewPointAboveDryBulbClamped,
-                            Inv($"{Where(gridLine[i], times[i], typical)}: dew point {v:0.0##} C above dry-bulb {t:0.0##} C, set to the dry-bulb"));
-                        v = t;
-                    }
-
-                    w[i] = MoistAir.HumidityRatioFromVapourPressure(Saturation.VapourPressurePa(v), p);
-                    dewPoint[i] = v;
-                    break;
                 case WeatherQuantity.HumidityRatio:
                     double ws = Saturation.HumidityRatio(t, p);
                     if (v > ws)
@@ -313,6 +343,35 @@ internal static class WeatherRecordBuilder
         return weather;
     }
 
+    /// <summary>
+    /// Dew point given (DESIGN 5.1): clamped to the dry-bulb and counted where above it (5.4), then the humidity ratio
+    /// from the saturation pressure at the dew point (Handbook ch. 1, eqs. 5, 6 and 20), all hours at once.
+    /// </summary>
+    private static void HumidityFromDewPoint(double[] given, double[] dryBulb, double[] pressure, double[] w, double[] dewPoint, int[] gridLine,
+        DateTime[] times, bool typical, QualityReport quality)
+    {
+        for (int i = 0; i < dewPoint.Length; i++)
+        {
+            double t = dryBulb[i];
+            double v = given[i];
+            if (v > t)
+            {
+                bool suspect = v - t > DewPointClampToleranceK;
+                quality.Count(suspect ? QualityKeys.DewPointAboveDryBulbSuspect : QualityKeys.DewPointAboveDryBulbClamped,
+                    Inv($"{Where(gridLine[i], times[i], typical)}: dew point {v:0.0##} C above dry-bulb {t:0.0##} C, set to the dry-bulb"));
+                v = t;
+            }
+
+            dewPoint[i] = v;
+        }
+
+        HourlyStateBatchSolver.VapourPressures(dewPoint, w);
+        for (int i = 0; i < w.Length; i++)
+        {
+            w[i] = MoistAir.HumidityRatioFromVapourPressure(w[i], pressure[i]);
+        }
+    }
+
     /// <summary>The other humidity measures, checked against the one used (DESIGN 5.1): disagreements are counted, not repaired.</summary>
     private static void CheckSecondaryMeasures(HourlyWeather weather, Dictionary<WeatherQuantity, double[]> columns, WeatherQuantity primary, int[] gridLine, bool typical, QualityReport quality)
     {
@@ -325,6 +384,13 @@ internal static class WeatherRecordBuilder
 
             string key = QualityKeys.DisagreesPrefix + QualityKeys.Role(q);
             string against = WeatherFileParser.Describe(primary);
+            double[]? saturation = null;
+            if (q == WeatherQuantity.RelativeHumidity)
+            {
+                saturation = new double[weather.Count];
+                HourlyStateBatchSolver.VapourPressures(weather.DryBulbC, saturation);
+            }
+
             for (int i = 0; i < weather.Count; i++)
             {
                 double t = weather.DryBulbC[i];
@@ -333,7 +399,7 @@ internal static class WeatherRecordBuilder
                 switch (q)
                 {
                     case WeatherQuantity.RelativeHumidity:
-                        expected = Math.Min(100.0, MoistAir.VapourPressureFromHumidityRatio(weather.HumidityRatio[i], weather.PressurePa[i]) / Saturation.VapourPressurePa(t) * 100.0);
+                        expected = Math.Min(100.0, MoistAir.VapourPressureFromHumidityRatio(weather.HumidityRatio[i], weather.PressurePa[i]) / saturation![i] * 100.0);
                         (tolerance, unit) = (RhDisagreementPoints, "%");
                         break;
                     case WeatherQuantity.WetBulb:
@@ -422,13 +488,33 @@ internal static class WeatherRecordBuilder
     /// at a 31 December to 1 January step. A one-year or multi-year calendar record changes
     /// year only there.
     /// </summary>
-    private static bool DetectTypicalYear(DateTime[] shifted, List<int> writtenYears)
+    private static bool DetectTypicalYear(DateTime[] shifted, int[] writtenYears)
     {
         for (int i = 1; i < shifted.Length; i++)
         {
             if (writtenYears[i] != writtenYears[i - 1] && !(shifted[i - 1].Month == 12 && shifted[i].Month == 1) && !(shifted[i].Month == 1 && shifted[i].Day == 1))
             {
                 return true;
+            }
+        }
+
+        return false;
+    }
+
+    /// <summary>Whether any hour falls on a 29 February (dates looked at once a day).</summary>
+    private static bool HasLeapDay(DateTime[] hours)
+    {
+        long dayStart = 1, dayEnd = 0;
+        foreach (var hour in hours)
+        {
+            if (hour.Ticks < dayStart || hour.Ticks >= dayEnd)
+            {
+                var day = hour.Date;
+                (dayStart, dayEnd) = (day.Ticks, day.Ticks + TimeSpan.TicksPerDay);
+                if (day.Month == 2 && day.Day == 29)
+                {
+                    return true;
+                }
             }
         }
 
@@ -469,6 +555,9 @@ internal static class WeatherRecordBuilder
 
         return v;
     }
+
+    /// <summary>The first <paramref name="n"/> values: the array itself when that is all of it, else a copy.</summary>
+    private static T[] Exactly<T>(T[] values, int n) => values.Length == n ? values : values[..n];
 
     private static T[] Keep<T>(T[] values, bool[] drop, int kept)
     {

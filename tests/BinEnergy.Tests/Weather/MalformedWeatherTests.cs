@@ -52,6 +52,9 @@ public sealed class MalformedWeatherTests
             { "impossible-date.csv", Text(F(48, (i, r) => i == 2 ? r.Replace("2026-01-01T02:00", "2026-02-30T02:00") : r)), WeatherErrorKind.BadTimestamp, 9 },
             { "bad-elevation.csv", Text(OpenLayoutText.File(metadata: "# name: Test Fen\n# elevation_m: high\n# latitude: 52.1\n# longitude: 0.3\n# utc_offset_h: 0\n")), WeatherErrorKind.BadMetadata, 2 },
             { "wetbulb-too-low.csv", Text(OpenLayoutText.File(48, (i, r) => r.Split(',')[0] + (i == 6 ? ",30,-20" : ",20,15"), header: "time,drybulb_c,wetbulb_c")), WeatherErrorKind.ValueOutOfRange, 13 },
+            // A blank line (CRLF ends) and a quoted note over two lines each push the later rows one line down.
+            { "blank-line-then-text.csv", Text(F(48, (i, r) => i == 3 ? "\n" + r : i == 5 ? r.Replace(",100.1", ",high") : r).Replace("\n", "\r\n")), WeatherErrorKind.NotANumber, 13 },
+            { "quoted-note-over-two-lines.csv", Text(OpenLayoutText.File(48, (i, r) => r + (i == 1 ? ",\"two\nlines\"" : ",ok") + (i == 5 ? ",x" : ""), header: OpenLayoutText.Header + ",note")), WeatherErrorKind.WrongFieldCount, 13 },
             { "infinity.csv", Text(F(48, (i, r) => i == 8 ? r.Replace(",100.1", ",Infinity") : r)), WeatherErrorKind.NotANumber, 15 },
             { "not-gzip.csv.gz", Text(OpenLayoutText.File()), WeatherErrorKind.BadCompression, null },
             { "damaged.csv.gz", gz[..(gz.Length / 2)], WeatherErrorKind.BadCompression, null },

@@ -1,0 +1,520 @@
+using System.Runtime.CompilerServices;
+using System.Runtime.InteropServices;
+using System.Runtime.Intrinsics;
+
+namespace BinEnergy.Core.Psychrometrics;
+
+/// <summary>
+/// The moist-air properties of a whole record at once, four hours to a SIMD vector
+/// (<see cref="Vector256{T}"/> with its <c>Exp</c> and <c>Log</c>): saturation pressure by
+/// Hyland and Wexler (ASHRAE Handbook—Fundamentals 2017, ch. 1, eqs. 5 and 6), dew point (eqs. 5
+/// and 6 inverted) and thermodynamic wet-bulb (eqs. 33 and 35 with W_s* from eq. 23, solved for t*).
+/// </summary>
+/// <remarks>
+/// The design asks for root finding by MathNet. Here the inverse functions are solved by a few
+/// Newton steps written out over vectors instead, for speed: reading a station-year solves 8,760
+/// wet-bulbs, and MathNet's solvers take one state at a time through delegates. MathNet stays the
+/// reference: each lane whose Newton steps have not converged after <see cref="MaxNewtonSteps"/>
+/// is solved again by the Brent-based <see cref="MoistAir"/> functions, and the tests hold the two
+/// to the same roots on every hour of the real weather files. Results of one hour do not depend on
+/// the hours beside it in its vector.
+/// </remarks>
+internal static class HourlyStateBatchSolver
+{
+    /// <summary>Hours per vector.</summary>
+    private const int Width = 4;
+
+    /// <summary>Newton steps before a lane is handed to the reference solver (two to four are needed from the first guesses used).</summary>
+    internal const int MaxNewtonSteps = 8;
+
+    /// <summary>
+    /// A lane has converged after a Newton step shorter than this, K. Newton converges quadratically, so the point after
+    /// that step is within about (f''/2f') x step^2 of the root, below 1e-9 K for these functions.
+    /// </summary>
+    private const double StepTolerance = 1e-4;
+
+    private const double Kelvin = 273.15;
+
+    private const uint AllLanes = (1u << Width) - 1;
+
+    /// <summary>Saturation pressure over ice at 0 C, Pa (eq. 5; where eqs. 33 and 35 meet).</summary>
+    private static readonly double IcePointPressure = Saturation.VapourPressurePa(0.0);
+
+    /// <summary>Saturation vapour pressure p_ws in Pa of each temperature in C (eqs. 5 and 6), as <see cref="Saturation.VapourPressurePa"/>.</summary>
+    /// <exception cref="PsychrometricException">A temperature is outside -100..200 C.</exception>
+    public static void VapourPressures(ReadOnlySpan<double> temperatureC, Span<double> result)
+    {
+        CheckLengths(temperatureC.Length, result.Length);
+        int n = temperatureC.Length;
+        var min = Vector256.Create(Saturation.MinTemperatureC);
+        var max = Vector256.Create(Saturation.MaxTemperatureC);
+        int i = 0;
+        for (; i + Width <= n; i += Width)
+        {
+            var t = Vector256.Create(temperatureC.Slice(i, Width));
+            VectorMath.Exp(LnVapourPressure(t)).CopyTo(result.Slice(i, Width));
+            var outside = ~(Vector256.GreaterThanOrEqual(t, min) & Vector256.LessThanOrEqual(t, max));
+            if (outside.ExtractMostSignificantBits() != 0)
+            {
+                // The scalar function raises the error the caller expects.
+                for (int k = 0; k < Width; k++)
+                {
+                    result[i + k] = Saturation.VapourPressurePa(temperatureC[i + k]);
+                }
+            }
+        }
+
+        for (; i < n; i++)
+        {
+            result[i] = Saturation.VapourPressurePa(temperatureC[i]);
+        }
+    }
+
+    /// <summary>Records at least this long are solved in two halves on two threads (where the machine has two cores or more).</summary>
+    internal const int ParallelHours = 2048;
+
+    /// <summary>
+    /// <see cref="WetBulbs(ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, Span{double})"/>
+    /// for a whole record, in two halves on two threads when the record is long and the machine has a second core. Each
+    /// hour's result is the same either way: no hour depends on another.
+    /// </summary>
+    public static void WetBulbsOfRecord(double[] dryBulbC, double[] humidityRatio, double[] pressurePa, double[] dewPointC, double[] wetBulbC)
+    {
+        int n = dryBulbC.Length;
+        if (n < ParallelHours || Environment.ProcessorCount < 2)
+        {
+            WetBulbs(dryBulbC.AsSpan(), humidityRatio, pressurePa, dewPointC, wetBulbC);
+            return;
+        }
+
+        int half = n / 2 / Width * Width;
+        Parallel.For(0, 2, part =>
+        {
+            var (start, length) = part == 0 ? (0, half) : (half, n - half);
+            WetBulbs(dryBulbC.AsSpan(start, length), humidityRatio.AsSpan(start, length), pressurePa.AsSpan(start, length),
+                dewPointC.AsSpan(start, length), wetBulbC.AsSpan(start, length));
+        });
+    }
+
+    /// <summary>
+    /// Thermodynamic wet-bulb in C of each hour from dry-bulb, humidity ratio, pressure and dew point (the lower end
+    /// of the bracket): eqs. 33 (t* at or above 0 C) and 35 (below) solved for t*, the same root as
+    /// <see cref="MoistAir.WetBulb"/> within its accuracy. A state at or above saturation gets its dry-bulb.
+    /// </summary>
+    /// <remarks>
+    /// Eqs. 33 and 35 do not meet exactly at 0 C, so a narrow band of states whose bracket [dew point, dry-bulb]
+    /// straddles 0 C has a root on each side. The reference takes the one its bisection over the bracket reaches;
+    /// here both roots are found and the same bisection is replayed on their signs alone (<see cref="BisectionPick"/>).
+    /// </remarks>
+    public static void WetBulbs(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> humidityRatio, ReadOnlySpan<double> pressurePa,
+        ReadOnlySpan<double> dewPointC, Span<double> wetBulbC)
+    {
+        int n = dryBulbC.Length;
+        CheckLengths(n, humidityRatio.Length, pressurePa.Length, dewPointC.Length, wetBulbC.Length);
+        byte[] outcome = System.Buffers.ArrayPool<byte>.Shared.Rent(n);
+        try
+        {
+            Solve(dryBulbC, humidityRatio, pressurePa, dewPointC, Side.Either, wetBulbC, outcome);
+            List<int>? twoRoots = null;
+            for (int i = 0; i < n; i++)
+            {
+                if (outcome[i] == Outcome.TwoRoots)
+                {
+                    (twoRoots ??= []).Add(i);
+                }
+                else if (outcome[i] != Outcome.Converged)
+                {
+                    wetBulbC[i] = MoistAir.WetBulb(dryBulbC[i], humidityRatio[i], pressurePa[i]);
+                }
+            }
+
+            if (twoRoots is not null)
+            {
+                PickBetweenRoots(dryBulbC, humidityRatio, pressurePa, dewPointC, wetBulbC, twoRoots);
+            }
+        }
+        finally
+        {
+            System.Buffers.ArrayPool<byte>.Shared.Return(outcome);
+        }
+    }
+
+    /// <summary>
+    /// The states with a root on each side of 0 C, whose root over ice the first pass found: finds the root over water
+    /// and keeps the one the reference's bisection reaches.
+    /// </summary>
+    private static void PickBetweenRoots(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> humidityRatio, ReadOnlySpan<double> pressurePa,
+        ReadOnlySpan<double> dewPointC, Span<double> wetBulbC, List<int> hours)
+    {
+        int m = hours.Count;
+        var t = new double[m];
+        var w = new double[m];
+        var p = new double[m];
+        var d = new double[m];
+        var overWater = new double[m];
+        var outcome = new byte[m];
+        for (int k = 0; k < m; k++)
+        {
+            int i = hours[k];
+            (t[k], w[k], p[k], d[k]) = (dryBulbC[i], humidityRatio[i], pressurePa[i], dewPointC[i]);
+        }
+
+        Solve(t, w, p, d, Side.Water, overWater, outcome);
+        for (int k = 0; k < m; k++)
+        {
+            int i = hours[k];
+            double? pick = outcome[k] == Outcome.Converged ? BisectionPick(Math.Min(d[k], t[k]), t[k], wetBulbC[i], overWater[k]) : null;
+            wetBulbC[i] = pick ?? MoistAir.WetBulb(t[k], w[k], p[k]);
+        }
+    }
+
+    /// <summary>
+    /// Which root bisection over [low, high] reaches when the residual is negative below <paramref name="iceRoot"/>,
+    /// positive from there to 0 C, negative again up to <paramref name="waterRoot"/> and positive above it: the
+    /// midpoints are compared with the roots instead of evaluating the residual. Null when a midpoint falls so near
+    /// a root that its sign is in doubt (the caller then asks the reference solver).
+    /// </summary>
+    internal static double? BisectionPick(double low, double high, double iceRoot, double waterRoot)
+    {
+        const double doubt = 1e-6;
+        for (int k = 0; k < 200; k++)
+        {
+            if (high <= 0.0)
+            {
+                return iceRoot;
+            }
+
+            if (low >= 0.0)
+            {
+                return waterRoot;
+            }
+
+            double mid = 0.5 * (low + high);
+            if (Math.Abs(mid - iceRoot) < doubt || Math.Abs(mid - waterRoot) < doubt || Math.Abs(mid) < doubt)
+            {
+                return null;
+            }
+
+            bool positive = mid < 0.0 ? mid > iceRoot : mid > waterRoot;
+            if (positive)
+            {
+                high = mid;
+            }
+            else
+            {
+                low = mid;
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>The side of 0 C a solve looks on: where the root is unique (either), or over water only.</summary>
+    private enum Side
+    {
+        Either,
+        Water,
+    }
+
+    /// <summary>How the solve of one hour ended.</summary>
+    private static class Outcome
+    {
+        public const byte Converged = 0, NotConverged = 1, TwoRoots = 2;
+    }
+
+    /// <summary>Where each quantity of a block's four lanes lies in the solver's state, in doubles from the block's start.</summary>
+    private static class Slot
+    {
+        public const int Low = 0, High = 4, Liquid = 8, Converged = 12, TwoRoots = 16, Size = 20;
+    }
+
+    /// <summary>
+    /// Newton steps over all blocks of four hours: each step is taken for every unfinished block before the next step,
+    /// so that the processor works on many independent blocks at once rather than waiting on one block's chain of exp,
+    /// log and divisions. The last few hours are padded with copies of the last one.
+    /// </summary>
+    private static void Solve(ReadOnlySpan<double> t, ReadOnlySpan<double> w, ReadOnlySpan<double> p, ReadOnlySpan<double> dew, Side side,
+        Span<double> x, Span<byte> outcome)
+    {
+        int n = t.Length;
+        int full = n / Width;
+        if (full > 0)
+        {
+            SolveBlocks(
+                new Inputs(ref MemoryMarshal.GetReference(t), ref MemoryMarshal.GetReference(w), ref MemoryMarshal.GetReference(p), ref MemoryMarshal.GetReference(dew)),
+                full, side, ref MemoryMarshal.GetReference(x), outcome);
+        }
+
+        int rest = n - full * Width;
+        if (rest > 0)
+        {
+            int at = full * Width;
+            Span<double> padded = stackalloc double[5 * Width];
+            Span<double> pt = padded[..4], pw = padded[4..8], pp = padded[8..12], pd = padded[12..16], px = padded[16..];
+            Pad(t[at..], pt);
+            Pad(w[at..], pw);
+            Pad(p[at..], pp);
+            Pad(dew[at..], pd);
+            Span<byte> last = stackalloc byte[Width];
+            SolveBlocks(
+                new Inputs(ref MemoryMarshal.GetReference(pt), ref MemoryMarshal.GetReference(pw), ref MemoryMarshal.GetReference(pp), ref MemoryMarshal.GetReference(pd)),
+                1, side, ref MemoryMarshal.GetReference(px), last);
+            px[..rest].CopyTo(x[at..]);
+            last[..rest].CopyTo(outcome[at..]);
+        }
+    }
+
+    /// <summary>The input columns of a solve, from their first hour.</summary>
+    private readonly ref struct Inputs(ref double t, ref double w, ref double p, ref double dew)
+    {
+        public readonly ref double T = ref t;
+        public readonly ref double W = ref w;
+        public readonly ref double P = ref p;
+        public readonly ref double Dew = ref dew;
+    }
+
+    private static void SolveBlocks(Inputs input, int blocks, Side side, ref double x, Span<byte> outcome)
+    {
+        double[] state = System.Buffers.ArrayPool<double>.Shared.Rent(blocks * Slot.Size);
+        int[] active = System.Buffers.ArrayPool<int>.Shared.Rent(blocks);
+        try
+        {
+            ref double first = ref MemoryMarshal.GetArrayDataReference(state);
+            int count = 0;
+            for (int b = 0; b < blocks; b++)
+            {
+                if (StartBlock(input, b * Width, side, ref x, ref Unsafe.Add(ref first, b * Slot.Size)))
+                {
+                    active[count++] = b;
+                }
+            }
+
+            for (int step = 0; step < MaxNewtonSteps && count > 0; step++)
+            {
+                int still = 0;
+                for (int k = 0; k < count; k++)
+                {
+                    int b = active[k];
+                    if (StepBlock(input, b * Width, ref x, ref Unsafe.Add(ref first, b * Slot.Size)))
+                    {
+                        active[still++] = b;
+                    }
+                }
+
+                count = still;
+            }
+
+            for (int b = 0; b < blocks; b++)
+            {
+                for (int k = 0; k < Width; k++)
+                {
+                    int i = b * Width + k;
+                    outcome[i] = state[b * Slot.Size + Slot.Converged + k] == 0.0 ? Outcome.NotConverged
+                        : state[b * Slot.Size + Slot.TwoRoots + k] != 0.0 ? Outcome.TwoRoots : Outcome.Converged;
+                }
+            }
+        }
+        finally
+        {
+            System.Buffers.ArrayPool<double>.Shared.Return(state);
+            System.Buffers.ArrayPool<int>.Shared.Return(active);
+        }
+    }
+
+    private static Vector256<double> Load(ref double column, int at) => Vector256.LoadUnsafe(ref column, (nuint)at);
+
+    /// <summary>
+    /// Sets up the block of hours from <paramref name="at"/>: the side of 0 C and bracket of each lane and the first
+    /// guess; saturated lanes are settled at their dry-bulb, and lanes with a root on each side of 0 C (when looking on
+    /// either side) are marked. Returns whether any lane needs Newton steps.
+    /// </summary>
+    private static bool StartBlock(Inputs input, int at, Side side, ref double xColumn, ref double block)
+    {
+        var t = Load(ref input.T, at);
+        var w = Load(ref input.W, at);
+        var p = Load(ref input.P, at);
+        var zero = Vector256<double>.Zero;
+        var low = Vector256.Min(Load(ref input.Dew, at), t);
+
+        // Saturated (to rounding): the wet-bulb is the dry-bulb.
+        var saturated = Vector256.LessThan(t - low, Vector256.Create(1e-9));
+
+        // Which equation each lane solves. Eqs. 33 and 35 do not meet exactly at 0 C, so where the bracket
+        // [dew point, dry-bulb] straddles 0 C the signs of both at 0 C say on which side the root lies; when they
+        // differ there is a root on each side (or none but the jump at 0 C).
+        var ws0 = Vector256.Create(MoistAir.MolecularMassRatio * IcePointPressure) / (p - Vector256.Create(IcePointPressure));
+        var gIce0 = (Vector256.Create(2830.0) * ws0 - Vector256.Create(1.006) * t) / (Vector256.Create(2830.0) + Vector256.Create(1.86) * t) - w;
+        var gLiquid0 = (Vector256.Create(2501.0) * ws0 - Vector256.Create(1.006) * t) / (Vector256.Create(2501.0) + Vector256.Create(1.86) * t) - w;
+        var straddles = Vector256.LessThan(low, zero) & Vector256.GreaterThan(t, zero);
+        var iceAbove = Vector256.GreaterThanOrEqual(gIce0, zero);
+        var liquidAbove = Vector256.GreaterThanOrEqual(gLiquid0, zero);
+        var twoRoots = straddles & (iceAbove ^ liquidAbove);
+        var liquid = side == Side.Water
+            ? Vector256<double>.AllBitsSet
+            : Vector256.GreaterThanOrEqual(low, zero) | (straddles & ~iceAbove & ~liquidAbove);
+        if (side == Side.Water)
+        {
+            twoRoots = zero;
+        }
+
+        // The bracket of the chosen side.
+        var lo = Vector256.ConditionalSelect(liquid, Vector256.Max(low, zero), low);
+        var hi = Vector256.ConditionalSelect(liquid, t, Vector256.Min(t, zero));
+
+        // First guess: F(t*) = (a - b t*) W_s(t*) - 1.006 (t - t*) - W (a + 1.86 t - c t*), eq. 33 or 35 times its
+        // denominator, expanded to second order about the dew point, where W_s = W and its derivatives need no exp
+        // (p_ws there is the vapour pressure, eq. 20 inverted); the root of that quadratic, within a few hundredths of
+        // a kelvin of the root of F, is x = t_dew + u with u = -2F / (F' + sqrt(F'^2 - 2 F F'')).
+        var (a, b, c) = Coefficients(liquid);
+        var m = Vector256.Create(MoistAir.MolecularMassRatio);
+        var cp = Vector256.Create(1.006);
+        var pw = p * w / (m + w);
+        var slope1 = LnVapourPressureDerivatives(low, out var slope2);
+        var invGap = Vector256<double>.One / (p - pw);
+        var dpws = pw * slope1;
+        var ws1 = m * p * dpws * invGap * invGap;
+        var ws2 = m * p * (pw * (slope1 * slope1 + slope2) + Vector256.Create(2.0) * dpws * dpws * invGap) * invGap * invGap;
+        var f = -(b * low * w) - cp * (t - low) - w * (Vector256.Create(1.86) * t - c * low);
+        var f1 = -(b * w) + (a - b * low) * ws1 + cp + c * w;
+        var f2 = Vector256.Create(-2.0) * b * ws1 + (a - b * low) * ws2;
+        var u = Vector256.Create(-2.0) * f / (f1 + Vector256.Sqrt(Vector256.Max(f1 * f1 - Vector256.Create(2.0) * f * f2, zero)));
+        var x = Vector256.Min(Vector256.Max(low + u, lo), hi);
+
+        // Saturated: the dry-bulb. Two roots: this pass finds the one over ice, and the lane is marked for the caller.
+        var settled = saturated;
+        Vector256.ConditionalSelect(saturated, t, x).StoreUnsafe(ref xColumn, (nuint)at);
+        (twoRoots & ~saturated).StoreUnsafe(ref block, Slot.TwoRoots);
+        lo.StoreUnsafe(ref block, Slot.Low);
+        hi.StoreUnsafe(ref block, Slot.High);
+        liquid.StoreUnsafe(ref block, Slot.Liquid);
+        settled.StoreUnsafe(ref block, Slot.Converged);
+        return settled.ExtractMostSignificantBits() != AllLanes;
+    }
+
+    /// <summary>One Newton step on the lanes of a block not yet converged; returns whether any lane is still unconverged.</summary>
+    private static bool StepBlock(Inputs input, int at, ref double xColumn, ref double block)
+    {
+        var x = Load(ref xColumn, at);
+        var converged = Vector256.LoadUnsafe(ref block, Slot.Converged);
+        var (a, b, c) = Coefficients(Vector256.LoadUnsafe(ref block, Slot.Liquid));
+        var next = x - WetBulbNewtonStep(x, Load(ref input.T, at), Load(ref input.P, at), Load(ref input.W, at), a, b, c);
+        next = Vector256.Min(Vector256.Max(next, Vector256.LoadUnsafe(ref block, Slot.Low)), Vector256.LoadUnsafe(ref block, Slot.High));
+        var shortStep = Vector256.LessThan(Vector256.Abs(next - x), Vector256.Create(StepTolerance));
+        Vector256.ConditionalSelect(converged, x, next).StoreUnsafe(ref xColumn, (nuint)at);
+        converged |= shortStep;
+        converged.StoreUnsafe(ref block, Slot.Converged);
+        return converged.ExtractMostSignificantBits() != AllLanes;
+    }
+
+    /// <summary>The coefficients a, b, c of eq. 33 (2501, 2.326, 4.186: over water) or eq. 35 (2830, 0.24, 2.1: over ice).</summary>
+    private static (Vector256<double> A, Vector256<double> B, Vector256<double> C) Coefficients(Vector256<double> liquid) =>
+        (Vector256.ConditionalSelect(liquid, Vector256.Create(2501.0), Vector256.Create(2830.0)),
+         Vector256.ConditionalSelect(liquid, Vector256.Create(2.326), Vector256.Create(0.24)),
+         Vector256.ConditionalSelect(liquid, Vector256.Create(4.186), Vector256.Create(2.1)));
+
+    /// <summary>
+    /// The Newton step (W(t*) - W) / W'(t*) for eq. 33 or 35 (coefficients a, b, c: 2501, 2.326, 4.186 over water; 2830, 0.24,
+    /// 2.1 over ice) with W_s* from eq. 23: with W = n / d, the step is (n - W d) d / (n' d + n c), one division.
+    /// </summary>
+    private static Vector256<double> WetBulbNewtonStep(Vector256<double> x, Vector256<double> t, Vector256<double> p, Vector256<double> w,
+        Vector256<double> a, Vector256<double> b, Vector256<double> c)
+    {
+        var pws = VectorMath.Exp(LnVapourPressure(x, out var dln));
+        var m = Vector256.Create(MoistAir.MolecularMassRatio);
+        var invGap = Vector256<double>.One / (p - pws);
+        var ws = m * pws * invGap;
+        var dws = ws * p * dln * invGap;
+        var cp = Vector256.Create(1.006);
+        var latent = a - b * x;
+        var numerator = latent * ws - cp * (t - x);
+        var denominator = a + Vector256.Create(1.86) * t - c * x;
+        var dNumerator = latent * dws - b * ws + cp;
+        return (numerator - w * denominator) * denominator / (dNumerator * denominator + numerator * c);
+    }
+
+    /// <summary>ln p_ws (Pa) at temperatures in C by eq. 5 at or below the triple point and eq. 6 above, as <see cref="Saturation.LnVapourPressure"/>.</summary>
+    private static Vector256<double> LnVapourPressure(Vector256<double> temperatureC)
+    {
+        var t = Absolute(temperatureC, out var inv, out var overIce);
+        return Ln(t, inv, overIce);
+    }
+
+    /// <summary>ln p_ws (Pa) and its derivative in temperature, 1/K (eqs. 5 and 6 differentiated term by term).</summary>
+    private static Vector256<double> LnVapourPressure(Vector256<double> temperatureC, out Vector256<double> derivative)
+    {
+        var t = Absolute(temperatureC, out var inv, out var overIce);
+        derivative = Slope(t, inv, overIce);
+        return Ln(t, inv, overIce);
+    }
+
+    /// <summary>First and second derivatives of ln p_ws in temperature, 1/K and 1/K^2, without ln p_ws itself.</summary>
+    private static Vector256<double> LnVapourPressureDerivatives(Vector256<double> temperatureC, out Vector256<double> second)
+    {
+        var t = Absolute(temperatureC, out var inv, out var overIce);
+        second = Curvature(t, inv, overIce);
+        return Slope(t, inv, overIce);
+    }
+
+    /// <summary>Absolute temperature, K, its inverse, and where eq. 5 applies (at or below the triple point; eq. 6 above).</summary>
+    private static Vector256<double> Absolute(Vector256<double> temperatureC, out Vector256<double> inverse, out Vector256<double> overIce)
+    {
+        var t = temperatureC + Vector256.Create(Kelvin);
+        inverse = Vector256<double>.One / t;
+        overIce = Vector256.LessThanOrEqual(temperatureC, Vector256.Create(Saturation.TriplePointC));
+        return t;
+    }
+
+    /// <summary>Eqs. 5 and 6 at absolute temperature t (K), with 1/t given.</summary>
+    private static Vector256<double> Ln(Vector256<double> t, Vector256<double> inv, Vector256<double> overIce)
+    {
+        var lnT = Vector256.Log(t);
+        var ice = Vector256.Create(Saturation.C1) * inv + Vector256.Create(Saturation.C2)
+            + t * (Vector256.Create(Saturation.C3) + t * (Vector256.Create(Saturation.C4) + t * (Vector256.Create(Saturation.C5) + t * Vector256.Create(Saturation.C6))))
+            + Vector256.Create(Saturation.C7) * lnT;
+        var water = Vector256.Create(Saturation.C8) * inv + Vector256.Create(Saturation.C9)
+            + t * (Vector256.Create(Saturation.C10) + t * (Vector256.Create(Saturation.C11) + t * Vector256.Create(Saturation.C12)))
+            + Vector256.Create(Saturation.C13) * lnT;
+        return Vector256.ConditionalSelect(overIce, ice, water);
+    }
+
+    /// <summary>Eqs. 5 and 6 differentiated once in t.</summary>
+    private static Vector256<double> Slope(Vector256<double> t, Vector256<double> inv, Vector256<double> overIce)
+    {
+        var ice = -Vector256.Create(Saturation.C1) * inv * inv + Vector256.Create(Saturation.C3)
+            + t * (Vector256.Create(2 * Saturation.C4) + t * (Vector256.Create(3 * Saturation.C5) + t * Vector256.Create(4 * Saturation.C6)))
+            + Vector256.Create(Saturation.C7) * inv;
+        var water = -Vector256.Create(Saturation.C8) * inv * inv + Vector256.Create(Saturation.C10)
+            + t * (Vector256.Create(2 * Saturation.C11) + t * Vector256.Create(3 * Saturation.C12))
+            + Vector256.Create(Saturation.C13) * inv;
+        return Vector256.ConditionalSelect(overIce, ice, water);
+    }
+
+    /// <summary>Eqs. 5 and 6 differentiated twice in t.</summary>
+    private static Vector256<double> Curvature(Vector256<double> t, Vector256<double> inv, Vector256<double> overIce)
+    {
+        var inv2 = inv * inv;
+        var ice = Vector256.Create(2 * Saturation.C1) * inv2 * inv + Vector256.Create(2 * Saturation.C4)
+            + t * (Vector256.Create(6 * Saturation.C5) + t * Vector256.Create(12 * Saturation.C6)) - Vector256.Create(Saturation.C7) * inv2;
+        var water = Vector256.Create(2 * Saturation.C8) * inv2 * inv + Vector256.Create(2 * Saturation.C11)
+            + t * Vector256.Create(6 * Saturation.C12) - Vector256.Create(Saturation.C13) * inv2;
+        return Vector256.ConditionalSelect(overIce, ice, water);
+    }
+
+    /// <summary>Copies the values and fills the rest of the block with the last of them.</summary>
+    private static void Pad(ReadOnlySpan<double> values, Span<double> block)
+    {
+        values.CopyTo(block);
+        block[values.Length..].Fill(values[^1]);
+    }
+
+    private static void CheckLengths(int n, params ReadOnlySpan<int> others)
+    {
+        foreach (int length in others)
+        {
+            if (length != n)
+            {
+                throw new ArgumentException("all hourly columns must have the same length");
+            }
+        }
+    }
+}

@@ -1,0 +1,140 @@
+using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Core.Weather;
+using BinEnergy.Tests.Weather;
+
+namespace BinEnergy.Tests.Psychrometrics;
+
+/// <summary>
+/// The vectorised batch solver must give the roots of the Brent-based <see cref="MoistAir"/> functions (the reference,
+/// solved by MathNet), on a grid over the weather range and on every hour of the six real weather files.
+/// </summary>
+public sealed class HourlyStateBatchSolverTests
+{
+    [Theory]
+    [MemberData(nameof(RealWeatherFileTests.All), MemberType = typeof(RealWeatherFileTests))]
+    public void WetBulbs_MatchTheBrentSolver_OnEveryHourOfTheRealFiles(string name)
+    {
+        var w = RealWeatherFileTests.Read(name);
+        double worst = 0;
+        for (int i = 0; i < w.Count; i++)
+        {
+            double brent = MoistAir.WetBulb(w.DryBulbC[i], w.HumidityRatio[i], w.PressurePa[i]);
+            worst = Math.Max(worst, Math.Abs(w.WetBulbC[i] - brent));
+        }
+
+        // Brent stops within 1e-7 K of the root (MoistAir.SolverAccuracyK); the batch solver's Newton steps end closer.
+        Assert.True(worst < 1e-6, $"{name}: largest difference {worst:E2} K");
+    }
+
+    [Fact]
+    public void WetBulbsOfRecord_OnTwoThreads_EqualTheSingleThreadSolveExactly()
+    {
+        var w = RealWeatherFileTests.Read("725300TYA.CSV");
+        Assert.True(w.Count >= HourlyStateBatchSolver.ParallelHours);
+        var single = new double[w.Count];
+        HourlyStateBatchSolver.WetBulbs(w.DryBulbC.AsSpan(), w.HumidityRatio, w.PressurePa, w.DewPointC, single);
+        var split = new double[w.Count];
+        HourlyStateBatchSolver.WetBulbsOfRecord(w.DryBulbC, w.HumidityRatio, w.PressurePa, w.DewPointC, split);
+        Assert.Equal(single, split);
+        Assert.Equal(single, w.WetBulbC);
+    }
+
+    [Fact]
+    public void WetBulbs_OfAWholeGrid_MatchTheBrentSolver_WhateverTheirNeighbours()
+    {
+        // Dry-bulb -40..50 C, RH 2..100 %, three pressures, in one batch of odd length (so the last block is padded):
+        // the states near 0 C with a root on each side of it are among them.
+        var states = new List<(double T, double W, double P)>();
+        foreach (double p in new[] { 101_325.0, 83_400.0, 70_000.0 })
+        {
+            for (double t = -40; t <= 50; t += 0.7)
+            {
+                foreach (double rh in new[] { 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.8, 0.97, 1.0 })
+                {
+                    states.Add((t, MoistAir.HumidityRatioFromRelativeHumidity(t, rh, p), p));
+                }
+            }
+        }
+
+        if (states.Count % 4 == 0)
+        {
+            states.RemoveAt(states.Count - 1);
+        }
+
+        var dry = states.Select(s => s.T).ToArray();
+        var w = states.Select(s => s.W).ToArray();
+        var pressure = states.Select(s => s.P).ToArray();
+        var dew = states.Select(s => HourlyStateSolver.DewPoint(s.W, s.P, s.T)).ToArray();
+        var batch = new double[states.Count];
+        HourlyStateBatchSolver.WetBulbs(dry, w, pressure, dew, batch);
+        for (int i = 0; i < states.Count; i++)
+        {
+            // Near -40 C the Brent solver stops on |f| < 1e-7 kg/kg, up to 2e-4 K from the root (see HourlyStateSolverTests).
+            Assert.True(Math.Abs(batch[i] - MoistAir.WetBulb(dry[i], w[i], pressure[i])) < 1e-3, $"state {i}: {states[i]}");
+
+            // The same hour alone gives the same answer: neighbours in a vector do not change a result.
+            Assert.Equal(batch[i], HourlyStateSolverTests.BatchWetBulb(dry[i], w[i], pressure[i], dew[i]));
+        }
+    }
+
+    [Fact]
+    public void WetBulbs_WithARootOnEachSideOfZero_TakeTheRootTheReferenceBisectionTakes()
+    {
+        // Chicago TMY3, 18 March 09:00 (line 1843 of the file): 4.4 C dry-bulb, -7.2 C dew point, 99.3 kPa (the file's
+        // own values). Eq. 35 has a root at -0.284 C and eq. 33 one at +0.022 C; bisection over [dew point, dry-bulb]
+        // reaches the one over ice, as psychrolib's does (see PsychrolibAgreementTests for the convention).
+        double t = 4.4, dewPoint = -7.2, p = 99_300;
+        double w = MoistAir.HumidityRatioFromDewPoint(dewPoint, p);
+        double reference = MoistAir.WetBulb(t, w, p);
+        Assert.True(reference < 0, $"reference {reference}");
+        Assert.Equal(reference, HourlyStateSolverTests.BatchWetBulb(t, w, p, dewPoint), 6);
+    }
+
+    [Fact]
+    public void BisectionPick_ReplaysTheSignsOfBisection()
+    {
+        // Residual negative below -0.3, positive to 0, negative to 0.02, positive above. Over [-7.2, 4.4] the
+        // midpoints are -1.4 (negative), 1.5 (positive), 0.05 (positive), -0.675 (negative), -0.3125 (negative),
+        // -0.131 (positive): from there on the interval lies below 0, around the root over ice.
+        Assert.Equal(-0.3, HourlyStateBatchSolver.BisectionPick(-7.2, 4.4, -0.3, 0.02));
+
+        // Over [-1, 3] the first midpoint 1 is positive, the second 0 is in doubt (it is where the equations switch).
+        Assert.Null(HourlyStateBatchSolver.BisectionPick(-1, 3, -0.3, 0.02));
+
+        // Over [-0.4, 0.1] the first midpoint -0.15 lies between the root over ice and 0 (positive): the root over ice.
+        Assert.Equal(-0.3, HourlyStateBatchSolver.BisectionPick(-0.4, 0.1, -0.3, 0.02));
+
+        // Over [-0.1, 0.12] the first midpoint 0.01 lies between 0 and the root over water (negative): the root over water.
+        Assert.Equal(0.02, HourlyStateBatchSolver.BisectionPick(-0.1, 0.12, -0.3, 0.02));
+    }
+
+    [Fact]
+    public void VapourPressures_MatchTheScalarEquations()
+    {
+        var temperatures = Enumerable.Range(0, 3001).Select(k => -100 + k * 0.1).ToArray();
+        var batch = new double[temperatures.Length];
+        HourlyStateBatchSolver.VapourPressures(temperatures, batch);
+        for (int i = 0; i < temperatures.Length; i++)
+        {
+            double scalar = Saturation.VapourPressurePa(temperatures[i]);
+            // ln p_ws sums terms up to about 60 in size (eq. 5 at -100 C), so rounding alone leaves about 60 x 2.2e-16.
+            Assert.True(Math.Abs(batch[i] / scalar - 1) < 1e-13, $"{temperatures[i]} C: {batch[i]} vs {scalar}");
+        }
+
+        Assert.Throws<PsychrometricException>(() => HourlyStateBatchSolver.VapourPressures([10, 20, 250, 30], new double[4]));
+    }
+
+    [Fact]
+    public void VectorExp_AgreesWithMathExp_ToAFewUnitsInTheLastPlace()
+    {
+        double worst = 0;
+        for (double x = -20; x <= 20; x += 0.00137)
+        {
+            double v = VectorMath.Exp(System.Runtime.Intrinsics.Vector256.Create(x, -x, x / 3, 0.5 * x))[1];
+            worst = Math.Max(worst, Math.Abs(v / Math.Exp(-x) - 1));
+        }
+
+        Assert.True(worst < 1e-15, $"worst relative difference {worst:E2}"); // double epsilon 2.2e-16 (IEEE 754)
+        Assert.Equal(1.0, VectorMath.Exp(System.Runtime.Intrinsics.Vector256<double>.Zero)[0]);
+    }
+}
