@@ -57,6 +57,28 @@ public sealed class QualityReport
         }
     }
 
+    /// <summary>Adds the counts, examples (while fewer than <see cref="MaxExamples"/> are kept) and notices of a report on later lines.</summary>
+    internal void Append(QualityReport later)
+    {
+        foreach (var (kind, count) in later.counts)
+        {
+            counts[kind] = counts.GetValueOrDefault(kind) + count;
+        }
+
+        foreach (var (kind, list) in later.examples)
+        {
+            if (!examples.TryGetValue(kind, out var mine))
+            {
+                mine = [];
+                examples[kind] = mine;
+            }
+
+            mine.AddRange(list.Take(MaxExamples - mine.Count));
+        }
+
+        warnings.AddRange(later.warnings);
+    }
+
     /// <summary>Adds a notice.</summary>
     public void Warn(string warning) => warnings.Add(warning);
 }

@@ -229,7 +229,16 @@ internal static class WeatherFileParser
         bool commaPossible = quoted || sep != ',';
         bool numericCode = missing.Any(code => double.TryParse(code, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v));
         var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, commaPossible, commaPossible || numericCode, missing, missingStarts);
-        int row = ReadRows(reader, layout, ref times, ref writtenYears, ref lines, columns, out int trailing);
+        int row, trailing = 0;
+        if (SplitPoint(data, pos, layout, options) is int split)
+        {
+            row = ReadRowsInTwoHalves(data, pos, split, options, layout, ref times, ref writtenYears, ref lines, columns);
+        }
+        else
+        {
+            row = ReadRows(reader, layout, ref times, ref writtenYears, ref lines, columns, out trailing);
+        }
+
         table.SetRows(times, writtenYears, lines, row);
         foreach (var column in columns)
         {
@@ -315,6 +324,107 @@ internal static class WeatherFileParser
                 }
             }
         }
+    }
+
+    /// <summary>Files with at least this many data lines are parsed in two halves on two threads (where the machine has a second core).</summary>
+    internal const int ParallelLines = 2048;
+
+    /// <summary>
+    /// Where the data lines can be cut in two for <see cref="ReadRowsInTwoHalves"/>: the start of the line after the
+    /// middle of the data, or null when the file must be read in one pass. It must be one pass when a record can span
+    /// lines (a quote in the data), when lines end in lone carriage returns (the line count would be wrong), when a map
+    /// stops at a blank line (the second half would not know), when the file is short, or on a single core.
+    /// </summary>
+    private static int? SplitPoint(byte[] data, int pos, RowLayout layout, CsvReaderOptions options)
+    {
+        if (layout.Quoted || layout.Map.EndAtBlankLine || Environment.ProcessorCount < 2)
+        {
+            return null;
+        }
+
+        var body = data.AsSpan(pos);
+        int headerEnd = body.IndexOf((byte)'\n');
+        if (headerEnd < 0 || body.Count((byte)'\n') < ParallelLines || body.Count((byte)'\r') != body.Count("\r\n"u8))
+        {
+            return null;
+        }
+
+        int start = pos + headerEnd + 1;
+        int middle = start + (data.Length - start) / 2;
+        int cut = data.AsSpan(middle).IndexOf((byte)'\n');
+        return cut < 0 || middle + cut + 1 >= data.Length || options.Separator == '\n' ? null : middle + cut + 1;
+    }
+
+    /// <summary>
+    /// <see cref="ReadRows"/> over the data in two halves at once, the first from the column names to
+    /// <paramref name="split"/>, the second from there to the end, each with its own arrays and repair counts, then
+    /// joined in file order. Every record is one line, so the second half's lines follow from the first's line count.
+    /// A mistake in the first half is reported before one in the second, as a single pass would.
+    /// </summary>
+    private static int ReadRowsInTwoHalves(byte[] data, int pos, int split, CsvReaderOptions options, RowLayout layout,
+        ref DateTime[] times, ref int[] writtenYears, ref int[] lines, NumberColumn[] columns)
+    {
+        int firstLines = data.AsSpan(pos, split - pos).Count((byte)'\n') - 1;
+        int secondCapacity = Math.Max(16, data.AsSpan(split).Count((byte)'\n') + (data[^1] == '\n' ? 0 : 1));
+        var second = new RawWeatherTable(layout.File, layout.Map, layout.Table.IsOpenLayout);
+        var secondLayout = layout with { Table = second, HeaderLine = layout.HeaderLine + firstLines };
+        var secondTimes = new DateTime[secondCapacity];
+        var secondYears = new int[secondCapacity];
+        var secondLines = new int[secondCapacity];
+        var secondColumns = columns.Select(c => c with { Values = new double[secondCapacity] }).ToArray();
+        var secondOptions = new CsvReaderOptions
+        {
+            Separator = options.Separator,
+            HasHeader = false,
+            TrackLineNumbers = false,
+            SkipEmptyLines = false,
+            TrimWhitespace = options.TrimWhitespace,
+            FormatProvider = CultureInfo.InvariantCulture,
+        };
+        var secondHalf = Task.Run(() =>
+        {
+            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, split, data.Length - split), secondOptions);
+            return ReadRows(reader, secondLayout, ref secondTimes, ref secondYears, ref secondLines, secondColumns, out _);
+        });
+
+        int firstRows;
+        try
+        {
+            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, pos, split - pos), options);
+            firstRows = ReadRows(reader, layout, ref times, ref writtenYears, ref lines, columns, out _);
+        }
+        catch (WeatherDataException)
+        {
+            // The first mistake in file order wins; the second half is left to finish first.
+            ((IAsyncResult)secondHalf).AsyncWaitHandle.WaitOne();
+            throw;
+        }
+
+        int secondRows = secondHalf.GetAwaiter().GetResult();
+        int rows = firstRows + secondRows;
+        Join(ref times, firstRows, secondTimes, secondRows);
+        Join(ref writtenYears, firstRows, secondYears, secondRows);
+        Join(ref lines, firstRows, secondLines, secondRows);
+        for (int c = 0; c < columns.Length; c++)
+        {
+            var values = columns[c].Values;
+            Join(ref values, firstRows, secondColumns[c].Values, secondRows);
+            columns[c] = columns[c] with { Values = values };
+        }
+
+        layout.Table.Quality.Append(second.Quality);
+        return rows;
+    }
+
+    /// <summary>Puts the first <paramref name="count"/> entries of <paramref name="tail"/> after the first <paramref name="head"/> entries of <paramref name="values"/>.</summary>
+    private static void Join<T>(ref T[] values, int head, T[] tail, int count)
+    {
+        if (values.Length < head + count)
+        {
+            Array.Resize(ref values, head + count);
+        }
+
+        Array.Copy(tail, 0, values, head, count);
     }
 
     /// <summary>What the row loop needs to know about the file, fixed once the column names are read.</summary>
