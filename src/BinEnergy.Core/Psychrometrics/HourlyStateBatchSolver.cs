@@ -70,6 +70,60 @@ internal static class HourlyStateBatchSolver
         }
     }
 
+    /// <summary>
+    /// Humidity ratio of each hour from its dew point (C) and pressure (Pa): p_w = p_ws(t_d) (eqs. 5 and 6, the definition
+    /// of dew point), then W = 0.621945 p_w / (p - p_w) (eq. 20), as <see cref="MoistAir.HumidityRatioFromDewPoint"/>.
+    /// </summary>
+    /// <exception cref="PsychrometricException">A dew point is outside -100..200 C, or its vapour pressure is not below the pressure.</exception>
+    public static void HumidityRatiosFromDewPoints(ReadOnlySpan<double> dewPointC, ReadOnlySpan<double> pressurePa, Span<double> humidityRatio)
+    {
+        CheckLengths(dewPointC.Length, pressurePa.Length, humidityRatio.Length);
+        VapourPressures(dewPointC, humidityRatio);
+        var ratio = Vector256.Create(MoistAir.MolecularMassRatio);
+        int n = dewPointC.Length, i = 0;
+        for (; i + Width <= n; i += Width)
+        {
+            var pw = Vector256.Create(humidityRatio.Slice(i, Width));
+            var p = Vector256.Create(pressurePa.Slice(i, Width));
+            if (Vector256.LessThan(pw, p).ExtractMostSignificantBits() != AllLanes)
+            {
+                break; // the scalar function below raises the error the caller expects
+            }
+
+            (ratio * pw / (p - pw)).CopyTo(humidityRatio.Slice(i, Width));
+        }
+
+        for (; i < n; i++)
+        {
+            humidityRatio[i] = MoistAir.HumidityRatioFromVapourPressure(humidityRatio[i], pressurePa[i]);
+        }
+    }
+
+    /// <summary>
+    /// Relative humidity, %, of each hour from dry-bulb (C), humidity ratio and pressure (Pa): p_w from eq. 20 solved for
+    /// p_w, over p_ws(t) (eqs. 5, 6 and 12), at most 100, as <see cref="MoistAir.RelativeHumidity"/> times 100.
+    /// </summary>
+    /// <exception cref="PsychrometricException">A dry-bulb is outside -100..200 C.</exception>
+    public static void RelativeHumidities(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> humidityRatio, ReadOnlySpan<double> pressurePa, Span<double> percent)
+    {
+        CheckLengths(dryBulbC.Length, humidityRatio.Length, pressurePa.Length, percent.Length);
+        VapourPressures(dryBulbC, percent);
+        var ratio = Vector256.Create(MoistAir.MolecularMassRatio);
+        var hundred = Vector256.Create(100.0);
+        int n = dryBulbC.Length, i = 0;
+        for (; i + Width <= n; i += Width)
+        {
+            var w = Vector256.Create(humidityRatio.Slice(i, Width));
+            var pw = Vector256.Create(pressurePa.Slice(i, Width)) * w / (ratio + w);
+            Vector256.Min(hundred, pw / Vector256.Create(percent.Slice(i, Width)) * hundred).CopyTo(percent.Slice(i, Width));
+        }
+
+        for (; i < n; i++)
+        {
+            percent[i] = Math.Min(100.0, MoistAir.VapourPressureFromHumidityRatio(humidityRatio[i], pressurePa[i]) / percent[i] * 100.0);
+        }
+    }
+
     /// <summary>Records at least this long are solved in two halves on two threads (where the machine has two cores or more).</summary>
     internal const int ParallelHours = 2048;
 

@@ -365,11 +365,7 @@ internal static class WeatherRecordBuilder
             dewPoint[i] = v;
         }
 
-        HourlyStateBatchSolver.VapourPressures(dewPoint, w);
-        for (int i = 0; i < w.Length; i++)
-        {
-            w[i] = MoistAir.HumidityRatioFromVapourPressure(w[i], pressure[i]);
-        }
+        HourlyStateBatchSolver.HumidityRatiosFromDewPoints(dewPoint, pressure, w);
     }
 
     /// <summary>The other humidity measures, checked against the one used (DESIGN 5.1): disagreements are counted, not repaired.</summary>
@@ -384,11 +380,11 @@ internal static class WeatherRecordBuilder
 
             string key = QualityKeys.DisagreesPrefix + QualityKeys.Role(q);
             string against = WeatherFileParser.Describe(primary);
-            double[]? saturation = null;
+            double[]? relativeHumidity = null;
             if (q == WeatherQuantity.RelativeHumidity)
             {
-                saturation = new double[weather.Count];
-                HourlyStateBatchSolver.VapourPressures(weather.DryBulbC, saturation);
+                relativeHumidity = new double[weather.Count];
+                HourlyStateBatchSolver.RelativeHumidities(weather.DryBulbC, weather.HumidityRatio, weather.PressurePa, relativeHumidity);
             }
 
             for (int i = 0; i < weather.Count; i++)
@@ -399,7 +395,7 @@ internal static class WeatherRecordBuilder
                 switch (q)
                 {
                     case WeatherQuantity.RelativeHumidity:
-                        expected = Math.Min(100.0, MoistAir.VapourPressureFromHumidityRatio(weather.HumidityRatio[i], weather.PressurePa[i]) / saturation![i] * 100.0);
+                        expected = relativeHumidity![i];
                         (tolerance, unit) = (RhDisagreementPoints, "%");
                         break;
                     case WeatherQuantity.WetBulb:
