@@ -52,7 +52,7 @@ internal static class HourlyStateBatchSolver
         for (; i + Width <= n; i += Width)
         {
             var t = Vector256.Create(temperatureC.Slice(i, Width));
-            VectorMath.Exp(LnVapourPressure(t)).CopyTo(result.Slice(i, Width));
+            Vector256.Exp(LnVapourPressure(t)).CopyTo(result.Slice(i, Width));
             var outside = ~(Vector256.GreaterThanOrEqual(t, min) & Vector256.LessThanOrEqual(t, max));
             if (outside.ExtractMostSignificantBits() != 0)
             {
@@ -473,7 +473,7 @@ internal static class HourlyStateBatchSolver
     private static Vector256<double> WetBulbNewtonStep(Vector256<double> x, Vector256<double> t, Vector256<double> p, Vector256<double> w,
         Vector256<double> a, Vector256<double> b, Vector256<double> c)
     {
-        var pws = VectorMath.Exp(LnVapourPressure(x, out var dln));
+        var pws = Vector256.Exp(LnVapourPressure(x, out var dln));
         var m = Vector256.Create(MoistAir.MolecularMassRatio);
         var invGap = Vector256<double>.One / (p - pws);
         var ws = m * pws * invGap;
