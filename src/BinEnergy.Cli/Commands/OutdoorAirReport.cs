@@ -192,7 +192,7 @@ internal sealed class OutdoorAirReport(HourlyWeather weather, OutdoorAirResult r
             totals.AddRow(cells.Select(Markup.Escape).ToArray());
         }
 
-        totals.AddRow("Hours ventilated", result.Bin.HoursVentilated.ToString(CultureInfo.InvariantCulture), result.Hourly.HoursVentilated.ToString(CultureInfo.InvariantCulture), "");
+        totals.AddRow("Hours ventilated", result.Bin.HoursVentilated.ToString("N0", CultureInfo.InvariantCulture), result.Hourly.HoursVentilated.ToString("N0", CultureInfo.InvariantCulture), "");
         console.Write(totals);
         console.WriteLine(A.BinPoint == BinEvaluationPoint.Midpoint
             ? "Bin method: loads at each bin's midpoint and mean coincident humidity ratio, times the bin's ventilated hours. Hourly sum: the same formulas hour by hour."
