@@ -51,11 +51,13 @@ public static class OutdoorAirCalculator
 
     /// <summary>
     /// Computes the loads on an existing bin table built with the same occupancy flags
-    /// (<paramref name="occupied"/>, one per hour); peaks only when <paramref name="design"/> is given.
+    /// (<paramref name="occupied"/>, one per hour); peaks only when <paramref name="design"/> is given; each hour's
+    /// loads in <see cref="OutdoorAirResult.Hours"/> when <paramref name="keepHours"/> is set (for energy bought at
+    /// each hour's outdoor temperature).
     /// </summary>
     /// <exception cref="ArgumentException">The settings have problems, or the flags do not match the record.</exception>
     public static OutdoorAirResult Compute(HourlyWeather weather, OutdoorAirSettings settings, BinTable table, bool[] occupied,
-        HumidityBinScale? jointScale = null, DesignConditions? design = null)
+        HumidityBinScale? jointScale = null, DesignConditions? design = null, bool keepHours = false)
     {
         ArgumentNullException.ThrowIfNull(weather);
         ArgumentNullException.ThrowIfNull(settings);
@@ -79,6 +81,7 @@ public static class OutdoorAirCalculator
             byHour[h] = settings.AirflowMultiplier(h);
         }
 
+        var hours = keepHours ? new OutdoorAirTotals?[weather.Count] : null;
         var binSums = new LoadSums[table.Rows.Count];
         var binMultiplierSums = new double[table.Rows.Count];
         var monthSums = new LoadSums[12];
@@ -104,6 +107,13 @@ public static class OutdoorAirCalculator
             double m = rho * flow.VolumeM3PerS * f;
             double fan = flow.FanPower(s.Recovering) * f;
             hourly.Add(s, m, fan, 1);
+            if (hours is not null)
+            {
+                var one = default(LoadSums);
+                one.Add(s, m, fan, 1);
+                hours[i] = one.ToTotals();
+            }
+
             int bin = scale.IndexOf(t[i]) - first;
             binSums[bin].Add(s, m, fan, 1);
             binMultiplierSums[bin] += f;
@@ -186,6 +196,7 @@ public static class OutdoorAirCalculator
         {
             Bin = binMethod.ToTotals(),
             Hourly = hourly.ToTotals(),
+            Hours = hours,
             JointBin = joint,
             Bins = rows,
             Months = months,

@@ -13,6 +13,12 @@ public sealed record OutdoorAirResult
     /// <summary>Totals summed hour by hour.</summary>
     public required OutdoorAirTotals Hourly { get; init; }
 
+    /// <summary>
+    /// Each hour's loads by the hourly method (null for an hour without ventilation), one per hour of the record, when
+    /// asked for (<c>keepHours</c>); null otherwise. They add up to <see cref="Hourly"/>.
+    /// </summary>
+    public IReadOnlyList<OutdoorAirTotals?>? Hours { get; init; }
+
     /// <summary>Totals by joint dry-bulb x humidity-ratio bins, when asked for.</summary>
     public OutdoorAirTotals? JointBin { get; init; }
 

@@ -20,9 +20,8 @@ namespace BinEnergy.Core.Study;
 /// <remarks>
 /// Plant energy depends on the outdoor temperature through the COP curves, so it is computed
 /// where the temperature is known: for the bin method at each bin's evaluation point with the
-/// bin's loads; for the hourly method hour by hour, with the hour's load rates from the same
-/// <see cref="OutdoorAirLoad"/> the calculator uses (the runner checks that these hours add
-/// up to the calculator's hourly totals).
+/// bin's loads; for the hourly method hour by hour, with each hour's loads as the calculator
+/// computed them (<see cref="OutdoorAirResult.Hours"/>): one engine for both.
 /// </remarks>
 public static class StudyRunner
 {
@@ -74,7 +73,7 @@ public static class StudyRunner
         var settings = c.OutdoorAir;
         var flags = settings.Schedule.Flags(weather);
         var table = BinTable.Build(weather, c.BinScale, flags);
-        var result = OutdoorAirCalculator.Compute(weather, settings, table, flags, design: DesignConditions.FromRecord(weather));
+        var result = OutdoorAirCalculator.Compute(weather, settings, table, flags, design: DesignConditions.FromRecord(weather), keepHours: true);
         var plant = new PlantModel(c.Plant);
         var clamps = new CurveClampCounter();
 
@@ -91,10 +90,9 @@ public static class StudyRunner
                 all.IsEmpty ? double.NaN : all.MeanWetBulb.Celsius, figures));
         }
 
-        // Hourly method: hour by hour, through the same load model.
+        // Hourly method: each hour's loads from the outdoor-air engine, bought at that hour's outdoor temperature.
         var hourlyClamps = new CurveClampCounter();
-        var (hourlySums, monthSums, hours) = HourByHour(c, weather, flags, plant, hourlyClamps, keepHours);
-        CheckAgainstCalculator(hourlySums, result.Hourly);
+        var (hourlySums, monthSums, hours) = HourByHour(result.Hours!, weather, plant, hourlyClamps, keepHours);
 
         // The load columns are the engine's own totals (bit for bit what the outdoor-air command
         // reports); the energy bought is summed where the temperature was known.
@@ -203,43 +201,21 @@ public static class StudyRunner
         a.HeatingSite + b.HeatingSite, a.CoolingSite + b.CoolingSite, a.OtherSite + b.OtherSite);
 
     private static (LoadFigures Annual, List<(int Month, LoadFigures Figures)> Months, List<LoadFigures>? Hours) HourByHour(
-        StudyCase c, HourlyWeather weather, bool[] flags, PlantModel plant, CurveClampCounter clamps, bool keepHours)
+        IReadOnlyList<OutdoorAirTotals?> loads, HourlyWeather weather, PlantModel plant, CurveClampCounter clamps, bool keepHours)
     {
-        var s = c.OutdoorAir;
-        double sitePressure = weather.Site.SitePressurePa;
-        var load = new OutdoorAirLoad(s, sitePressure);
-        double volume = s.EffectiveAirflow.CubicMetresPerSecond;
-        var r = s.Recovery;
-
-        // The recovery fan penalty P = 2 V dp / eta on both air streams (as the calculator charges it).
-        double fanW = r is null ? 0.0 : 2.0 * volume * r.PressureDropPa / r.FanEfficiency;
-        bool always = s.Operation == VentilationOperation.Always;
         var monthSums = new LoadFigures[12];
         Array.Fill(monthSums, Zero);
         var hours = keepHours ? new List<LoadFigures>(weather.Count) : null;
         var annual = Zero;
         for (int i = 0; i < weather.Count; i++)
         {
-            double t = weather.DryBulbC[i];
-            if (!always && !flags[i])
+            if (loads[i] is not OutdoorAirTotals hour)
             {
                 hours?.Add(Zero);
                 continue;
             }
 
-            double w = weather.HumidityRatio[i];
-            double rho = FlowBasisDensity.For(s.FlowBasis, sitePressure, t, w, weather.PressurePa[i]);
-
-            // Demand-controlled ventilation scales the hour's airflow, and with it the loads and the fan penalty.
-            double multiplier = s.AirflowMultiplier(weather.Times[i].Hour);
-            var rates = load.At(Temperature.FromCelsius(t), HumidityRatio.FromKilogramsPerKilogram(w), rho * volume * multiplier);
-            bool recovering = rates.RecoveredHeating.Watts > 0 || rates.RecoveredCooling.Watts > 0;
-            double fan = (r is not null && r.BypassWhenIdle && !recovering ? 0.0 : fanW) * multiplier;
-            var totals = new OutdoorAirTotals(
-                Energy.FromPower(rates.Heating, 1), Energy.FromPower(rates.CoolingSensible, 1), Energy.FromPower(rates.CoolingLatent, 1),
-                Energy.FromPower(rates.Humidification, 1), Energy.FromPower(rates.RecoveredHeating, 1), Energy.FromPower(rates.RecoveredCooling, 1),
-                Energy.FromJoules(fan * 3600.0), 1);
-            var figures = Figures(totals, plant, t, clamps);
+            var figures = Figures(hour, plant, weather.DryBulbC[i], clamps);
             annual = Add(annual, figures);
             int m = weather.Times[i].Month - 1;
             monthSums[m] = Add(monthSums[m], figures);
@@ -256,17 +232,5 @@ public static class StudyRunner
         }
 
         return (annual, months, hours);
-    }
-
-    /// <summary>The hour-by-hour sums must be the calculator's hourly totals (one engine): a mismatch is a bug, not a user error.</summary>
-    private static void CheckAgainstCalculator(LoadFigures mine, OutdoorAirTotals engine)
-    {
-        static bool Same(double a, double b) => Math.Abs(a - b) <= 1e-9 * Math.Max(1.0, Math.Max(Math.Abs(a), Math.Abs(b)));
-        if (!Same(mine.HeatingJ, engine.Heating.Joules) || !Same(mine.CoolingSensibleJ, engine.CoolingSensible.Joules)
-            || !Same(mine.CoolingLatentJ, engine.CoolingLatent.Joules) || !Same(mine.FanJ, engine.FanEnergy.Joules)
-            || (int)mine.HoursVentilated != engine.HoursVentilated)
-        {
-            throw new InvalidOperationException("the hour-by-hour plant loop does not reproduce the outdoor-air calculator's hourly totals");
-        }
     }
 }

@@ -26,4 +26,27 @@ public class AirflowMultiplierTests
         Assert.Equal(full.Bin.Heating.Joules * 0.5, half.Bin.Heating.Joules, 6);
         Assert.True(half.Hourly.CoolingSensible.Joules <= full.Hourly.CoolingSensible.Joules); // invariant: never above the no-DCV case
     }
+
+    [Fact]
+    public void KeptHours_AddUpToTheHourlyTotals_AndFollowTheProfile()
+    {
+        // Invariant: the per-hour loads the study runner buys energy for are the engine's own hourly sum, hour by hour.
+        var weather = SyntheticWeather.Year(meanC: 11, annualSwingK: 13, dailySwingK: 5, spreadK: 3);
+        var profile = Enumerable.Range(0, 24).Select(h => h is >= 8 and < 18 ? 1.0 : 0.25).ToArray();
+        var settings = OutdoorAirTestSettings.Typical() with { AirflowMultipliers = profile };
+        var flags = settings.Schedule.Flags(weather);
+        var scale = DryBulbBinScale.Default(UnitSystem.SI);
+        var result = OutdoorAirCalculator.Compute(weather, settings, BinTable.Build(weather, scale, flags), flags, keepHours: true);
+        var hours = result.Hours!;
+        Assert.Equal(weather.Count, hours.Count);
+        Assert.Equal(result.Hourly.Heating.Joules, hours.Sum(h => h?.Heating.Joules ?? 0), 1e-6 * result.Hourly.Heating.Joules);
+        Assert.Equal(result.Hourly.CoolingLatent.Joules, hours.Sum(h => h?.CoolingLatent.Joules ?? 0), 1e-6 * result.Hourly.CoolingLatent.Joules + 1);
+        Assert.Equal(result.Hourly.HoursVentilated, hours.Count(h => h is not null));
+
+        // A night hour carries a quarter of the airflow: at the same state it would carry a quarter of the day's load.
+        var full = OutdoorAirCalculator.Compute(weather, settings with { AirflowMultipliers = null }, BinTable.Build(weather, scale, flags), flags, keepHours: true);
+        int night = Enumerable.Range(0, weather.Count).First(i => weather.Times[i].Hour == 3 && full.Hours![i]!.Heating.Joules > 0);
+        Assert.Equal(0.25 * full.Hours![night]!.Heating.Joules, hours[night]!.Heating.Joules, 1e-9 * full.Hours[night]!.Heating.Joules);
+        Assert.Null(OutdoorAirCalculator.Compute(weather, settings, scale).Hours); // only when asked for
+    }
 }
