@@ -84,9 +84,8 @@ internal static class WeatherRecordBuilder
 
             // Each hour moves to the same month, day and time of day in the calendar year; the move is worked out once a day.
             keys = new DateTime[n];
-            var front = new List<int>();
-            var middle = new List<int>(n);
-            var back = new List<int>();
+            var place = new sbyte[n]; // -1: moved to the front of the year, 1: to the back, 0: stays
+            int front = 0, back = 0;
             long dayStart = 1, dayEnd = 0, move = 0;
             int year = 0;
             for (int i = 0; i < n; i++)
@@ -101,15 +100,19 @@ internal static class WeatherRecordBuilder
 
                 keys[i] = new DateTime(ticks + move);
                 int written = raw.WrittenYears[i];
-                (year > written ? front : year < written ? back : middle).Add(i);
+                if (year != written)
+                {
+                    place[i] = year > written ? (sbyte)-1 : (sbyte)1;
+                    (year > written ? ref front : ref back)++;
+                }
             }
 
-            if (front.Count + back.Count > 0)
+            if (front + back > 0)
             {
-                quality.Warn($"{front.Count + back.Count} hour(s) crossed the year boundary when shifted to hour-beginning local standard time and were moved to the other end of the typical year");
+                quality.Warn($"{front + back} hour(s) crossed the year boundary when shifted to hour-beginning local standard time and were moved to the other end of the typical year");
             }
 
-            order = [.. front, .. middle, .. back];
+            order = OrderByPlace(place, front + back);
             string start = new DateTime(calendarYear, 1, 1).DayOfWeek.ToString();
             calendarNote = Inv($"typical year (months from different years), keyed on month, day and hour; weekdays from {calendarYear}, a {(DateTime.IsLeapYear(calendarYear) ? "leap" : "non-leap")} year starting on a {start}")
                 + (calendarYear != options.CalendarYear ? Inv($" (the record has a 29 February, so {calendarYear} is used instead of {options.CalendarYear})") : "");
@@ -225,7 +228,7 @@ internal static class WeatherRecordBuilder
         }
 
         // Keep the hours not dropped.
-        int kept = drop.Count(d => !d);
+        int kept = hours - drop.AsSpan().Count(true);
         if (kept < hours)
         {
             quality.Count(QualityKeys.LongGapHoursDropped, null, hours - kept);
@@ -424,14 +427,8 @@ internal static class WeatherRecordBuilder
         int g = 0;
         string key = QualityKeys.GapFilledPrefix + QualityKeys.Role(q);
         string column = raw.ColumnNames[q];
-        while (g < hours)
+        while ((g = NextMissing(col, g)) < hours)
         {
-            if (!double.IsNaN(col[g]))
-            {
-                g++;
-                continue;
-            }
-
             int start = g;
             while (g < hours && double.IsNaN(col[g]))
             {
@@ -550,6 +547,60 @@ internal static class WeatherRecordBuilder
         }
 
         return v;
+    }
+
+    /// <summary>The index of the first missing value (NaN) at or after <paramref name="from"/>, or the length when there is none; four values at a time.</summary>
+    private static int NextMissing(double[] values, int from)
+    {
+        int i = from;
+        ref double first = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(values);
+        for (; i + 4 <= values.Length; i += 4)
+        {
+            var v = System.Runtime.Intrinsics.Vector256.LoadUnsafe(ref first, (nuint)i);
+            if (!System.Runtime.Intrinsics.Vector256.EqualsAll(v, v))
+            {
+                break; // a NaN is the only value not equal to itself
+            }
+        }
+
+        for (; i < values.Length; i++)
+        {
+            if (double.IsNaN(values[i]))
+            {
+                return i;
+            }
+        }
+
+        return values.Length;
+    }
+
+    /// <summary>Row indices in file order, those placed at -1 first and those at 1 last (the identity when <paramref name="moved"/> is 0).</summary>
+    private static int[] OrderByPlace(sbyte[] place, int moved)
+    {
+        var order = new int[place.Length];
+        if (moved == 0)
+        {
+            for (int i = 0; i < order.Length; i++)
+            {
+                order[i] = i;
+            }
+
+            return order;
+        }
+
+        int k = 0;
+        foreach (sbyte wanted in new sbyte[] { -1, 0, 1 })
+        {
+            for (int i = 0; i < place.Length; i++)
+            {
+                if (place[i] == wanted)
+                {
+                    order[k++] = i;
+                }
+            }
+        }
+
+        return order;
     }
 
     /// <summary>The first <paramref name="n"/> values: the array itself when that is all of it, else a copy.</summary>

@@ -98,6 +98,10 @@ public sealed class RealWeatherFileTests
         Assert.Equal(250.0, w.Site.ElevationM); // the file's header: Elevation (m): 250.0
         Assert.Equal(firstT2m, w.DryBulbC[1], 9);
         Assert.Equal(lastT2m, w.DryBulbC[0], 9);
+        Assert.Equal(lastT2m - firstT2m, w.DryBulbC[0] - w.DryBulbC[1], 9);
+        Assert.Contains("1 hour(s) crossed the year boundary", string.Join('\n', w.Quality.Warnings), StringComparison.Ordinal);
+        Assert.Equal(firstT2m, w.DryBulbC[1], 9); // the rows in between keep their order
+        Assert.Equal(double.Parse(lines[header + 8759].Split(',')[1], CultureInfo.InvariantCulture), w.DryBulbC[^1], 9);
     }
 
     [Fact]
