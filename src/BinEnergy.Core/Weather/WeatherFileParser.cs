@@ -205,7 +205,8 @@ internal static class WeatherFileParser
         int clockIndex = map.Time.TimeColumn is string tc ? FindColumn(headers, tc, WeatherErrorKind.MissingTimeColumn, file, headerLine, map, "time of day") : -1;
         // Arrays sized from the line count: one row a line after the column names, so the arrays are exactly as long as
         // the rows unless the file has blank lines (or lone carriage returns as line breaks: then they grow).
-        int capacity = Math.Max(16, body.Count((byte)'\n') - (body[^1] == '\n' ? 1 : 0));
+        int newlines = body.Count((byte)'\n');
+        int capacity = Math.Max(16, newlines - (body[^1] == '\n' ? 1 : 0));
         var times = new DateTime[capacity];
         var writtenYears = new int[capacity];
         var lines = new int[capacity];
@@ -230,9 +231,9 @@ internal static class WeatherFileParser
         bool numericCode = missing.Any(code => double.TryParse(code, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v));
         var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, commaPossible, commaPossible || numericCode, missing, missingStarts);
         int row, trailing = 0;
-        if (SplitPoint(data, pos, layout, options) is int split)
+        if (SplitPoint(data, pos, newlines, layout) is int split)
         {
-            row = ReadRowsInTwoHalves(data, pos, split, options, layout, ref times, ref writtenYears, ref lines, columns);
+            row = ReadRowsInTwoHalves(data, pos, split, newlines, options, layout, ref times, ref writtenYears, ref lines, columns);
         }
         else
         {
@@ -335,24 +336,19 @@ internal static class WeatherFileParser
     /// lines (a quote in the data), when lines end in lone carriage returns (the line count would be wrong), when a map
     /// stops at a blank line (the second half would not know), when the file is short, or on a single core.
     /// </summary>
-    private static int? SplitPoint(byte[] data, int pos, RowLayout layout, CsvReaderOptions options)
+    private static int? SplitPoint(byte[] data, int pos, int newlines, RowLayout layout)
     {
-        if (layout.Quoted || layout.Map.EndAtBlankLine || Environment.ProcessorCount < 2)
-        {
-            return null;
-        }
-
         var body = data.AsSpan(pos);
-        int headerEnd = body.IndexOf((byte)'\n');
-        if (headerEnd < 0 || body.Count((byte)'\n') < ParallelLines || body.Count((byte)'\r') != body.Count("\r\n"u8))
+        if (layout.Quoted || layout.Map.EndAtBlankLine || Environment.ProcessorCount < 2 || newlines < ParallelLines
+            || (body.Contains((byte)'\r') && body.Count((byte)'\r') != body.Count("\r\n"u8)))
         {
             return null;
         }
 
-        int start = pos + headerEnd + 1;
+        int start = pos + body.IndexOf((byte)'\n') + 1;
         int middle = start + (data.Length - start) / 2;
         int cut = data.AsSpan(middle).IndexOf((byte)'\n');
-        return cut < 0 || middle + cut + 1 >= data.Length || options.Separator == '\n' ? null : middle + cut + 1;
+        return cut < 0 || middle + cut + 1 >= data.Length ? null : middle + cut + 1;
     }
 
     /// <summary>
@@ -361,11 +357,12 @@ internal static class WeatherFileParser
     /// joined in file order. Every record is one line, so the second half's lines follow from the first's line count.
     /// A mistake in the first half is reported before one in the second, as a single pass would.
     /// </summary>
-    private static int ReadRowsInTwoHalves(byte[] data, int pos, int split, CsvReaderOptions options, RowLayout layout,
+    private static int ReadRowsInTwoHalves(byte[] data, int pos, int split, int newlines, CsvReaderOptions options, RowLayout layout,
         ref DateTime[] times, ref int[] writtenYears, ref int[] lines, NumberColumn[] columns)
     {
-        int firstLines = data.AsSpan(pos, split - pos).Count((byte)'\n') - 1;
-        int secondCapacity = Math.Max(16, data.AsSpan(split).Count((byte)'\n') + (data[^1] == '\n' ? 0 : 1));
+        int firstNewlines = data.AsSpan(pos, split - pos).Count((byte)'\n'); // the column names' line and the first half's lines
+        int firstLines = firstNewlines - 1;
+        int secondCapacity = Math.Max(16, newlines - firstNewlines + (data[^1] == '\n' ? 0 : 1));
         var second = new RawWeatherTable(layout.File, layout.Map, layout.Table.IsOpenLayout);
         var secondLayout = layout with { Table = second, HeaderLine = layout.HeaderLine + firstLines };
         var secondTimes = new DateTime[secondCapacity];
