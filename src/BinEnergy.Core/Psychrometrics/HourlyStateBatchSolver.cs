@@ -124,30 +124,62 @@ internal static class HourlyStateBatchSolver
         }
     }
 
+    /// <summary>
+    /// Moist-air enthalpy in J/kg dry air (0 C datum) of each hour from dry-bulb (C) and humidity ratio: eq. 32, as
+    /// <see cref="MoistAir.Enthalpy"/>.
+    /// </summary>
+    public static void Enthalpies(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> humidityRatio, Span<double> enthalpyJPerKg)
+    {
+        CheckLengths(dryBulbC.Length, humidityRatio.Length, enthalpyJPerKg.Length);
+        for (int i = 0; i < dryBulbC.Length; i++)
+        {
+            enthalpyJPerKg[i] = MoistAir.Enthalpy(dryBulbC[i], humidityRatio[i]);
+        }
+    }
+
     /// <summary>Records at least this long are solved in two halves on two threads (where the machine has two cores or more).</summary>
     internal const int ParallelHours = 2048;
 
     /// <summary>
+    /// Runs <paramref name="work"/> over the hours [start, start + length) of a record of <paramref name="hours"/> hours:
+    /// in two halves on two threads when the record is long and the machine has a second core, else all at once. The
+    /// work must treat each hour on its own, so that the results are the same either way. An error in the first half
+    /// is raised before one in the second, once both halves have stopped.
+    /// </summary>
+    public static void InTwoHalves(int hours, Action<int, int> work)
+    {
+        if (hours < ParallelHours || Environment.ProcessorCount < 2)
+        {
+            work(0, hours);
+            return;
+        }
+
+        int half = hours / 2 / Width * Width;
+        var second = Task.Run(() => work(half, hours - half));
+        try
+        {
+            work(0, half);
+        }
+        catch
+        {
+            ((IAsyncResult)second).AsyncWaitHandle.WaitOne();
+            throw;
+        }
+
+        second.GetAwaiter().GetResult();
+    }
+
+    /// <summary>
     /// <see cref="WetBulbs(ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, Span{double})"/>
-    /// for a whole record, in two halves on two threads when the record is long and the machine has a second core. Each
+    /// for a whole record, in two halves on two threads when the record is long (<see cref="InTwoHalves"/>). Each
     /// hour's result is the same either way: no hour depends on another.
     /// </summary>
     public static void WetBulbsOfRecord(double[] dryBulbC, double[] humidityRatio, double[] pressurePa, double[] dewPointC, double[] wetBulbC)
     {
-        int n = dryBulbC.Length;
-        if (n < ParallelHours || Environment.ProcessorCount < 2)
-        {
-            WetBulbs(dryBulbC.AsSpan(), humidityRatio, pressurePa, dewPointC, wetBulbC);
-            return;
-        }
-
-        int half = n / 2 / Width * Width;
-        Parallel.For(0, 2, part =>
-        {
-            var (start, length) = part == 0 ? (0, half) : (half, n - half);
+        CheckLengths(dryBulbC.Length, humidityRatio.Length, pressurePa.Length, dewPointC.Length, wetBulbC.Length);
+        InTwoHalves(dryBulbC.Length, (start, length) =>
             WetBulbs(dryBulbC.AsSpan(start, length), humidityRatio.AsSpan(start, length), pressurePa.AsSpan(start, length),
-                dewPointC.AsSpan(start, length), wetBulbC.AsSpan(start, length));
-        });
+                dewPointC.AsSpan(start, length), wetBulbC.AsSpan(start, length)));
     }
 
     /// <summary>

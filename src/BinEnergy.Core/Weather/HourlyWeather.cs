@@ -29,11 +29,15 @@ public sealed class HourlyWeather
         double[] pressurePa,
         QualityReport quality,
         CalendarInfo calendarYear)
-        : this(site, times, dryBulbC, humidityRatio, pressurePa, DewPoints(times.Length, dryBulbC, humidityRatio, pressurePa), quality, calendarYear)
+        : this(site, times, dryBulbC, humidityRatio, pressurePa, DewPoints(times.Length, dryBulbC, humidityRatio, pressurePa), null, null, quality, calendarYear)
     {
     }
 
-    /// <summary>Builds a record whose dew points are already known (the reader's path: no dew-point solve).</summary>
+    /// <summary>
+    /// Builds a record whose dew points are already known, and perhaps its wet-bulbs and enthalpies (the reader solves
+    /// them with its other per-hour work): where null, the wet-bulb is solved from eqs. 33 and 35 and the enthalpy
+    /// computed from eq. 32.
+    /// </summary>
     internal HourlyWeather(
         SiteInfo site,
         DateTime[] times,
@@ -41,11 +45,14 @@ public sealed class HourlyWeather
         double[] humidityRatio,
         double[] pressurePa,
         double[] dewPointC,
+        double[]? wetBulbC,
+        double[]? enthalpyJPerKg,
         QualityReport quality,
         CalendarInfo calendarYear)
     {
         int n = times.Length;
-        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n || dewPointC.Length != n)
+        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n || dewPointC.Length != n
+            || (wetBulbC is not null && wetBulbC.Length != n) || (enthalpyJPerKg is not null && enthalpyJPerKg.Length != n))
         {
             throw new ArgumentException("all hourly columns must have the same length");
         }
@@ -58,9 +65,20 @@ public sealed class HourlyWeather
         DewPointC = dewPointC;
         Quality = quality;
         Calendar = calendarYear;
-        WetBulbC = new double[n];
-        EnthalpyJPerKg = new double[n];
-        FillWetBulbAndEnthalpy();
+        if (wetBulbC is null)
+        {
+            wetBulbC = new double[n];
+            HourlyStateBatchSolver.WetBulbsOfRecord(dryBulbC, humidityRatio, pressurePa, dewPointC, wetBulbC);
+        }
+
+        WetBulbC = wetBulbC;
+        if (enthalpyJPerKg is null)
+        {
+            enthalpyJPerKg = new double[n];
+            HourlyStateBatchSolver.Enthalpies(dryBulbC, humidityRatio, enthalpyJPerKg);
+        }
+
+        EnthalpyJPerKg = enthalpyJPerKg;
     }
 
     /// <summary>Dew point of every hour from its humidity ratio (eq. 20 inverted, then eqs. 5 and 6), never above the dry-bulb.</summary>
@@ -78,16 +96,6 @@ public sealed class HourlyWeather
         }
 
         return dewPoint;
-    }
-
-    /// <summary>Wet-bulb (eqs. 33 and 35 solved, from the dew point up, all hours at once) and enthalpy (eq. 32) of every hour.</summary>
-    private void FillWetBulbAndEnthalpy()
-    {
-        HourlyStateBatchSolver.WetBulbsOfRecord(DryBulbC, HumidityRatio, PressurePa, DewPointC, WetBulbC);
-        for (int i = 0; i < Count; i++)
-        {
-            EnthalpyJPerKg[i] = MoistAir.Enthalpy(DryBulbC[i], HumidityRatio[i]);
-        }
     }
 
     public SiteInfo Site { get; }

@@ -1,3 +1,5 @@
+using System.Runtime.InteropServices;
+
 namespace BinEnergy.Core.Weather;
 
 /// <summary>
@@ -12,42 +14,59 @@ internal static class IsoTime
     {
         value = default;
         writtenYear = 0;
-        if (s.Length is not (16 or 19) || s[4] != '-' || s[7] != '-' || (s[10] != 'T' && s[10] != ' ') || s[13] != ':' || (s.Length == 19 && s[16] != ':'))
+        if (s.Length is not (16 or 19) || s[4] != '-' || s[7] != '-')
         {
             return false;
         }
 
-        if (!Digits(s, 0, 4, out int year) || !Digits(s, 5, 2, out int month) || !Digits(s, 8, 2, out int day) ||
-            !Digits(s, 11, 2, out int hour) || !Digits(s, 14, 2, out int minute))
+        if (!Digits(s, 0, 4, out int year) || !Digits(s, 5, 2, out int month) || !Digits(s, 8, 2, out int day) || !TimeOfDay(s, out int hour, out long clock))
         {
             return false;
         }
 
-        int second = 0;
-        if (s.Length == 19 && !Digits(s, 17, 2, out second))
-        {
-            return false;
-        }
-
-        if (year < 1 || month is < 1 or > 12 || day < 1 || day > DateTime.DaysInMonth(year, month) || minute > 59 || second > 59)
+        if (year < 1 || month is < 1 or > 12 || day < 1 || day > DateTime.DaysInMonth(year, month))
         {
             return false;
         }
 
         writtenYear = year;
-        if (hour == 24 && minute == 0 && second == 0)
+        if (hour == 24)
         {
             value = new DateTime(year, month, day).AddDays(1);
             return true;
         }
 
-        if (hour > 23)
+        value = new DateTime(DaysBefore(year, month) * TimeSpan.TicksPerDay + (day - 1) * TimeSpan.TicksPerDay + clock);
+        return true;
+    }
+
+    /// <summary>
+    /// The time of day of a time of the right length (<c>THH:mm</c> or <c>THH:mm:ss</c> from position 10): the hour,
+    /// and the ticks since midnight; false when it is malformed or out of range. Hour 24 is accepted only as 24:00(:00),
+    /// with ticks of zero (the caller moves it to the next day).
+    /// </summary>
+    private static bool TimeOfDay(ReadOnlySpan<byte> s, out int hour, out long ticks)
+    {
+        ticks = 0;
+        int minute = 0, second = 0;
+        hour = 0;
+        if ((s[10] != 'T' && s[10] != ' ') || s[13] != ':' || !Digits(s, 11, 2, out hour) || !Digits(s, 14, 2, out minute)
+            || (s.Length == 19 && (s[16] != ':' || !Digits(s, 17, 2, out second))))
         {
             return false;
         }
 
-        value = new DateTime(DaysBefore(year, month) * TimeSpan.TicksPerDay + (day - 1) * TimeSpan.TicksPerDay
-            + hour * TimeSpan.TicksPerHour + minute * TimeSpan.TicksPerMinute + second * TimeSpan.TicksPerSecond);
+        if (hour == 24)
+        {
+            return minute == 0 && second == 0;
+        }
+
+        if (hour > 23 || minute > 59 || second > 59)
+        {
+            return false;
+        }
+
+        ticks = hour * TimeSpan.TicksPerHour + minute * TimeSpan.TicksPerMinute + second * TimeSpan.TicksPerSecond;
         return true;
     }
 
@@ -76,5 +95,46 @@ internal static class IsoTime
         }
 
         return true;
+    }
+
+    /// <summary>
+    /// Reads the times of a file in turn, remembering the last day read: an hour's file has 24 rows a day, and a time
+    /// whose date bytes are those of the day before needs only its time of day read. The results are those of
+    /// <see cref="IsoTime.TryParse"/> for every text, in any order.
+    /// </summary>
+    internal struct Reader
+    {
+        private ulong dayHead; // the date's first eight bytes, "yyyy-MM-"
+        private ushort dayTail; // its last two, "dd"
+        private long dayTicks; // midnight starting that day; 0 (0001-01-01) before a day is remembered
+        private int dayYear;
+
+        /// <summary>As <see cref="IsoTime.TryParse"/>.</summary>
+        public bool TryParse(ReadOnlySpan<byte> s, out DateTime value, out int writtenYear)
+        {
+            if (dayYear > 0 && s.Length is 16 or 19 && MemoryMarshal.Read<ulong>(s) == dayHead && MemoryMarshal.Read<ushort>(s[8..]) == dayTail
+                && TimeOfDay(s, out int hour, out long clock) && hour < 24)
+            {
+                value = new DateTime(dayTicks + clock);
+                writtenYear = dayYear;
+                return true;
+            }
+
+            if (!IsoTime.TryParse(s, out value, out writtenYear))
+            {
+                return false;
+            }
+
+            if (!s.Slice(11, 2).SequenceEqual("24"u8))
+            {
+                // Not the "24:00" that ends a day (that midnight is on the next day): remember this day.
+                dayHead = MemoryMarshal.Read<ulong>(s);
+                dayTail = MemoryMarshal.Read<ushort>(s[8..]);
+                dayTicks = value.Date.Ticks;
+                dayYear = writtenYear;
+            }
+
+            return true;
+        }
     }
 }

@@ -441,6 +441,7 @@ internal static class WeatherFileParser
         trailing = 0;
         int headerCount = layout.Headers.Length;
         bool iso = layout.Map.Time.Format == "iso";
+        var isoTimes = default(IsoTime.Reader);
         bool quoted = layout.Quoted;
         bool numbersNeedText = layout.NumbersNeedText;
         int records = 0;
@@ -488,7 +489,7 @@ internal static class WeatherFileParser
             {
                 time = MappedTime(reader, layout, line, out writtenYear);
             }
-            else if (!IsoTime.TryParse(reader.GetSpan(layout.TimeIndex).Trim(" \t"u8), out time, out writtenYear))
+            else if (!isoTimes.TryParse(reader.GetSpan(layout.TimeIndex).Trim(" \t"u8), out time, out writtenYear))
             {
                 throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], reader.GetString(layout.TimeIndex), "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
             }

@@ -285,7 +285,7 @@ internal static class WeatherRecordBuilder
         var given = columns[primary];
         if (primary == WeatherQuantity.DewPoint)
         {
-            HumidityFromDewPoint(given, dryBulb, pressure, w, dewPoint, gridLine, times, typical, quality);
+            ClampDewPoints(given, dryBulb, dewPoint, gridLine, times, typical, quality);
         }
 
         for (int i = 0; i < kept && primary != WeatherQuantity.DewPoint; i++)
@@ -338,20 +338,41 @@ internal static class WeatherRecordBuilder
             }
         }
 
-        var weather = new HourlyWeather(site, times, dryBulb, w, pressure, dewPoint, quality, new CalendarInfo(calendarYear, typical, calendarNote))
+        // The moist-air state of every hour (Handbook ch. 1): the humidity ratio from the dew point (eqs. 5, 6 and 20) where
+        // the dew point is the measure used, the wet-bulb (eqs. 33 and 35), the enthalpy (eq. 32) and, to check the file's
+        // RH column, the RH (eq. 12); all per hour, so a long record is done in two halves at once.
+        bool fromDewPoint = primary == WeatherQuantity.DewPoint;
+        var wetBulb = new double[kept];
+        var enthalpy = new double[kept];
+        double[]? relativeHumidity = primary != WeatherQuantity.RelativeHumidity && columns.ContainsKey(WeatherQuantity.RelativeHumidity) ? new double[kept] : null;
+        HourlyStateBatchSolver.InTwoHalves(kept, (start, length) =>
+        {
+            var t = dryBulb.AsSpan(start, length);
+            var p = pressure.AsSpan(start, length);
+            var h = w.AsSpan(start, length);
+            if (fromDewPoint)
+            {
+                HourlyStateBatchSolver.HumidityRatiosFromDewPoints(dewPoint.AsSpan(start, length), p, h);
+            }
+
+            HourlyStateBatchSolver.WetBulbs(t, h, p, dewPoint.AsSpan(start, length), wetBulb.AsSpan(start, length));
+            HourlyStateBatchSolver.Enthalpies(t, h, enthalpy.AsSpan(start, length));
+            if (relativeHumidity is not null)
+            {
+                HourlyStateBatchSolver.RelativeHumidities(t, h, p, relativeHumidity.AsSpan(start, length));
+            }
+        });
+
+        var weather = new HourlyWeather(site, times, dryBulb, w, pressure, dewPoint, wetBulb, enthalpy, quality, new CalendarInfo(calendarYear, typical, calendarNote))
         {
             HourlyPressureFromRecord = pressureColumn is not null,
         };
-        CheckSecondaryMeasures(weather, columns, primary, gridLine, typical, quality);
+        CheckSecondaryMeasures(weather, columns, primary, relativeHumidity, gridLine, typical, quality);
         return weather;
     }
 
-    /// <summary>
-    /// Dew point given (DESIGN 5.1): clamped to the dry-bulb and counted where above it (5.4), then the humidity ratio
-    /// from the saturation pressure at the dew point (Handbook ch. 1, eqs. 5, 6 and 20), all hours at once.
-    /// </summary>
-    private static void HumidityFromDewPoint(double[] given, double[] dryBulb, double[] pressure, double[] w, double[] dewPoint, int[] gridLine,
-        DateTime[] times, bool typical, QualityReport quality)
+    /// <summary>Dew point given (DESIGN 5.1): clamped to the dry-bulb and counted where above it (5.4).</summary>
+    private static void ClampDewPoints(double[] given, double[] dryBulb, double[] dewPoint, int[] gridLine, DateTime[] times, bool typical, QualityReport quality)
     {
         for (int i = 0; i < dewPoint.Length; i++)
         {
@@ -367,12 +388,11 @@ internal static class WeatherRecordBuilder
 
             dewPoint[i] = v;
         }
-
-        HourlyStateBatchSolver.HumidityRatiosFromDewPoints(dewPoint, pressure, w);
     }
 
     /// <summary>The other humidity measures, checked against the one used (DESIGN 5.1): disagreements are counted, not repaired.</summary>
-    private static void CheckSecondaryMeasures(HourlyWeather weather, Dictionary<WeatherQuantity, double[]> columns, WeatherQuantity primary, int[] gridLine, bool typical, QualityReport quality)
+    private static void CheckSecondaryMeasures(HourlyWeather weather, Dictionary<WeatherQuantity, double[]> columns, WeatherQuantity primary, double[]? relativeHumidity,
+        int[] gridLine, bool typical, QualityReport quality)
     {
         foreach (var (q, col) in columns)
         {
@@ -383,13 +403,6 @@ internal static class WeatherRecordBuilder
 
             string key = QualityKeys.DisagreesPrefix + QualityKeys.Role(q);
             string against = WeatherFileParser.Describe(primary);
-            double[]? relativeHumidity = null;
-            if (q == WeatherQuantity.RelativeHumidity)
-            {
-                relativeHumidity = new double[weather.Count];
-                HourlyStateBatchSolver.RelativeHumidities(weather.DryBulbC, weather.HumidityRatio, weather.PressurePa, relativeHumidity);
-            }
-
             for (int i = 0; i < weather.Count; i++)
             {
                 double t = weather.DryBulbC[i];

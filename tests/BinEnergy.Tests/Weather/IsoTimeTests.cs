@@ -48,4 +48,33 @@ public sealed class IsoTimeTests
     [InlineData("2023-01-01")]
     public void ImpossibleOrMalformedTimes_AreRefused(string text) =>
         Assert.False(IsoTime.TryParse(Encoding.ASCII.GetBytes(text), out _, out _));
+
+    [Fact]
+    public void TheReaderOfConsecutiveTimes_ReadsEveryTextAsTheParserDoes()
+    {
+        // Every hour of a leap year in file order, then texts that share a remembered day but differ after it: each
+        // must read exactly as the stand-alone parser reads it (the day cache may never change a result).
+        var texts = new List<string>();
+        for (var t = new DateTime(2024, 1, 1); t < new DateTime(2025, 1, 1); t = t.AddHours(1))
+        {
+            texts.Add(t.ToString(t.Hour % 5 == 0 ? "yyyy-MM-dd HH:mm:ss" : "yyyy-MM-ddTHH:mm", CultureInfo.InvariantCulture));
+        }
+
+        texts.AddRange(["2024-03-05T10:00", "2024-03-05T24:00", "2024-03-05T10:00", "2024-03-05T25:00", "2024-03-05T10:60", "2024-03-05x10:00",
+            "2024-03-05T10-00", "2024-03-05T24:30", "2024-03-05T1a:00", "2024-03-05T10:00:6", "2024-03-05T10:00:60", "2024-03-06T00:00",
+            "2023-02-28T23:00", "2023-02-29T00:00", "2023-02-28T24:00", "2023-02-28T22:00"]);
+        var reader = default(IsoTime.Reader);
+        foreach (string text in texts)
+        {
+            bool expectedOk = IsoTime.TryParse(Encoding.ASCII.GetBytes(text), out var expected, out int expectedYear);
+            bool ok = reader.TryParse(Encoding.ASCII.GetBytes(text), out var parsed, out int year);
+            Assert.True(expectedOk == ok, text);
+            Assert.Equal(expected, parsed);
+            Assert.Equal(expectedYear, year);
+        }
+
+        // And against the runtime's parse (ISO 8601 as .NET reads it), for the well-formed ones.
+        Assert.True(reader.TryParse("2024-12-31T23:00"u8, out var last, out _));
+        Assert.Equal(DateTime.ParseExact("2024-12-31T23:00", "yyyy-MM-ddTHH:mm", CultureInfo.InvariantCulture), last);
+    }
 }

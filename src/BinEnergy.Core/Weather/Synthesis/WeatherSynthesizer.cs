@@ -319,7 +319,7 @@ public static class WeatherSynthesizer
             $"synthesized year; dates and weekdays of {year}, a non-leap year");
         // The dew points are known exactly here, so they are passed in rather than solved back
         // from the humidity ratios: the written file then depends on no iterative solver.
-        return new HourlyWeather(site, times, dryBulb, w, p, dewPoint, quality, calendar);
+        return new HourlyWeather(site, times, dryBulb, w, p, dewPoint, null, null, quality, calendar);
     }
 
     private static MonthCheck[] Measure(HourlyWeather weather, IReadOnlyList<MonthStatistics> months, double[] midCourse)
