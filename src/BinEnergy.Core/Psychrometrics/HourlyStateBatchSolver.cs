@@ -40,33 +40,43 @@ internal static class HourlyStateBatchSolver
     /// <summary>Saturation pressure over ice at 0 C, Pa (eq. 5; where eqs. 33 and 35 meet).</summary>
     private static readonly double IcePointPressure = Saturation.VapourPressurePa(0.0);
 
-    /// <summary>Saturation vapour pressure p_ws in Pa of each temperature in C (eqs. 5 and 6), as <see cref="Saturation.VapourPressurePa"/>.</summary>
+    /// <summary>
+    /// Saturation vapour pressure p_ws in Pa of each temperature in C (eqs. 5 and 6), as <see cref="Saturation.VapourPressurePa"/>
+    /// to its last bit or two. The last few are padded to a full vector, so each result is the same wherever the
+    /// temperature stands in the span.
+    /// </summary>
     /// <exception cref="PsychrometricException">A temperature is outside -100..200 C.</exception>
     public static void VapourPressures(ReadOnlySpan<double> temperatureC, Span<double> result)
     {
         CheckLengths(temperatureC.Length, result.Length);
         int n = temperatureC.Length;
-        var min = Vector256.Create(Saturation.MinTemperatureC);
-        var max = Vector256.Create(Saturation.MaxTemperatureC);
         int i = 0;
         for (; i + Width <= n; i += Width)
         {
-            var t = Vector256.Create(temperatureC.Slice(i, Width));
-            Vector256.Exp(LnVapourPressure(t)).CopyTo(result.Slice(i, Width));
-            var outside = ~(Vector256.GreaterThanOrEqual(t, min) & Vector256.LessThanOrEqual(t, max));
-            if (outside.ExtractMostSignificantBits() != 0)
-            {
-                // The scalar function raises the error the caller expects.
-                for (int k = 0; k < Width; k++)
-                {
-                    result[i + k] = Saturation.VapourPressurePa(temperatureC[i + k]);
-                }
-            }
+            VapourPressureBlock(temperatureC.Slice(i, Width), result.Slice(i, Width));
         }
 
-        for (; i < n; i++)
+        if (i < n)
         {
-            result[i] = Saturation.VapourPressurePa(temperatureC[i]);
+            Span<double> padded = stackalloc double[2 * Width];
+            Pad(temperatureC[i..], padded[..Width]);
+            VapourPressureBlock(padded[..Width], padded[Width..]);
+            padded.Slice(Width, n - i).CopyTo(result[i..]);
+        }
+    }
+
+    private static void VapourPressureBlock(ReadOnlySpan<double> temperatureC, Span<double> result)
+    {
+        var t = Vector256.Create(temperatureC);
+        Vector256.Exp(LnVapourPressure(t)).CopyTo(result);
+        var outside = ~(Vector256.GreaterThanOrEqual(t, Vector256.Create(Saturation.MinTemperatureC)) & Vector256.LessThanOrEqual(t, Vector256.Create(Saturation.MaxTemperatureC)));
+        if (outside.ExtractMostSignificantBits() != 0)
+        {
+            // The scalar function raises the error the caller expects.
+            for (int k = 0; k < Width; k++)
+            {
+                result[k] = Saturation.VapourPressurePa(temperatureC[k]);
+            }
         }
     }
 

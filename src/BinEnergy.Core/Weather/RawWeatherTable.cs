@@ -47,6 +47,9 @@ internal sealed class RawWeatherTable
     /// <summary>Repairs and notices collected while parsing.</summary>
     public QualityReport Quality { get; } = new();
 
+    /// <summary>The rows' moist-air states as the parser solved them, for the builder to use where they hold; null when not solved.</summary>
+    public RowStates? States { get; set; }
+
     /// <summary>Number of rows.</summary>
     public int Count { get; private set; }
 

@@ -96,8 +96,11 @@ internal static class WeatherFileParser
         }
     }
 
-    /// <summary>Parses a file's bytes with a map (null: the open layout).</summary>
-    public static RawWeatherTable Parse(byte[] data, string file, ColumnMap? map)
+    /// <summary>
+    /// Parses a file's bytes with a map (null: the open layout). With <paramref name="statesFor"/>, the rows' moist-air
+    /// states are solved on the way (<see cref="RowStates"/>), for the builder reading with those options.
+    /// </summary>
+    public static RawWeatherTable Parse(byte[] data, string file, ColumnMap? map, WeatherReadOptions? statesFor = null)
     {
         int pos = data.Length >= 3 && data[0] == 0xEF && data[1] == 0xBB && data[2] == 0xBF ? 3 : 0;
         if (data.AsSpan(pos).IndexOfAnyExcept(" \t\r\n"u8) < 0)
@@ -222,6 +225,7 @@ internal static class WeatherFileParser
             columns[c0++] = new NumberColumn(q, idx, f, o, low, high, new double[capacity]);
         }
 
+        var states = statesFor is null ? null : PlanStates(table, columns, capacity, statesFor);
         var missing = map.MissingCodes.Where(c => c.Length > 0).Select(c => Encoding.UTF8.GetBytes(c.Trim())).Concat(DefaultMissing).ToArray();
         var missingStarts = System.Buffers.SearchValues.Create(missing.Select(c => c[0]).Distinct().ToArray());
 
@@ -229,18 +233,21 @@ internal static class WeatherFileParser
         // missing-value code such as -9900 reads as a number. Where neither can happen, the rows skip the field text.
         bool commaPossible = quoted || sep != ',';
         bool numericCode = missing.Any(code => double.TryParse(code, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v));
-        var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, commaPossible, commaPossible || numericCode, missing, missingStarts);
+        var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, commaPossible, commaPossible || numericCode, missing, missingStarts, states);
         int row, trailing = 0;
+        bool solved;
         if (SplitPoint(data, pos, newlines, layout) is int split)
         {
-            row = ReadRowsInTwoHalves(data, pos, split, newlines, options, layout, ref times, ref writtenYears, ref lines, columns);
+            (row, solved) = ReadRowsInTwoHalves(data, pos, split, options, layout, times, writtenYears, lines, columns);
         }
         else
         {
-            row = ReadRows(reader, layout, ref times, ref writtenYears, ref lines, columns, out trailing);
+            row = ReadRows(reader, layout, ref times, ref writtenYears, ref lines, columns, 0, canGrow: true, out trailing);
+            solved = times.Length == capacity && SolveStates(layout, columns, 0, row);
         }
 
         table.SetRows(times, writtenYears, lines, row);
+        table.States = solved ? states : null;
         foreach (var column in columns)
         {
             table.Values[column.Quantity] = column.Values;
@@ -353,22 +360,17 @@ internal static class WeatherFileParser
 
     /// <summary>
     /// <see cref="ReadRows"/> over the data in two halves at once, the first from the column names to
-    /// <paramref name="split"/>, the second from there to the end, each with its own arrays and repair counts, then
-    /// joined in file order. Every record is one line, so the second half's lines follow from the first's line count.
-    /// A mistake in the first half is reported before one in the second, as a single pass would.
+    /// <paramref name="split"/>, the second from there to the end, each on its own thread with its own repair counts,
+    /// each solving its rows' states after its rows. Every record is one line, so the second half's first line and row
+    /// follow from the first half's line count; its rows are moved up behind the first half's where that half had
+    /// blank lines. A mistake in the first half is reported before one in the second, as a single pass would.
     /// </summary>
-    private static int ReadRowsInTwoHalves(byte[] data, int pos, int split, int newlines, CsvReaderOptions options, RowLayout layout,
-        ref DateTime[] times, ref int[] writtenYears, ref int[] lines, NumberColumn[] columns)
+    private static (int Rows, bool Solved) ReadRowsInTwoHalves(byte[] data, int pos, int split, CsvReaderOptions options, RowLayout layout,
+        DateTime[] times, int[] writtenYears, int[] lines, NumberColumn[] columns)
     {
-        int firstNewlines = data.AsSpan(pos, split - pos).Count((byte)'\n'); // the column names' line and the first half's lines
-        int firstLines = firstNewlines - 1;
-        int secondCapacity = Math.Max(16, newlines - firstNewlines + (data[^1] == '\n' ? 0 : 1));
+        int firstLines = data.AsSpan(pos, split - pos).Count((byte)'\n') - 1; // the first half's lines after the column names
         var second = new RawWeatherTable(layout.File, layout.Map, layout.Table.IsOpenLayout);
         var secondLayout = layout with { Table = second, HeaderLine = layout.HeaderLine + firstLines };
-        var secondTimes = new DateTime[secondCapacity];
-        var secondYears = new int[secondCapacity];
-        var secondLines = new int[secondCapacity];
-        var secondColumns = columns.Select(c => c with { Values = new double[secondCapacity] }).ToArray();
         var secondOptions = new CsvReaderOptions
         {
             Separator = options.Separator,
@@ -381,14 +383,19 @@ internal static class WeatherFileParser
         var secondHalf = Task.Run(() =>
         {
             using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, split, data.Length - split), secondOptions);
-            return ReadRows(reader, secondLayout, ref secondTimes, ref secondYears, ref secondLines, secondColumns, out _);
+            var (t, y, l) = (times, writtenYears, lines);
+            int end = ReadRows(reader, secondLayout, ref t, ref y, ref l, columns, firstLines, canGrow: false, out _);
+            return (End: end, Solved: SolveStates(secondLayout, columns, firstLines, end));
         });
 
         int firstRows;
+        bool firstSolved;
         try
         {
             using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, pos, split - pos), options);
-            firstRows = ReadRows(reader, layout, ref times, ref writtenYears, ref lines, columns, out _);
+            var (t, y, l) = (times, writtenYears, lines);
+            firstRows = ReadRows(reader, layout, ref t, ref y, ref l, columns, 0, canGrow: false, out _);
+            firstSolved = SolveStates(layout, columns, 0, firstRows);
         }
         catch (WeatherDataException)
         {
@@ -397,46 +404,72 @@ internal static class WeatherFileParser
             throw;
         }
 
-        int secondRows = secondHalf.GetAwaiter().GetResult();
-        int rows = firstRows + secondRows;
-        Join(ref times, firstRows, secondTimes, secondRows);
-        Join(ref writtenYears, firstRows, secondYears, secondRows);
-        Join(ref lines, firstRows, secondLines, secondRows);
-        for (int c = 0; c < columns.Length; c++)
+        var (secondEnd, secondSolved) = secondHalf.GetAwaiter().GetResult();
+        int secondRows = secondEnd - firstLines;
+        if (firstRows < firstLines)
         {
-            var values = columns[c].Values;
-            Join(ref values, firstRows, secondColumns[c].Values, secondRows);
-            columns[c] = columns[c] with { Values = values };
+            // Blank lines in the first half: its rows end before the second half's begin.
+            Array.Copy(times, firstLines, times, firstRows, secondRows);
+            Array.Copy(writtenYears, firstLines, writtenYears, firstRows, secondRows);
+            Array.Copy(lines, firstLines, lines, firstRows, secondRows);
+            foreach (var column in columns)
+            {
+                Array.Copy(column.Values, firstLines, column.Values, firstRows, secondRows);
+            }
+
+            layout.States?.Move(firstLines, firstRows, secondRows);
         }
 
         layout.Table.Quality.Append(second.Quality);
-        return rows;
+        return (firstRows + secondRows, firstSolved && secondSolved);
     }
 
-    /// <summary>Puts the first <paramref name="count"/> entries of <paramref name="tail"/> after the first <paramref name="head"/> entries of <paramref name="values"/>.</summary>
-    private static void Join<T>(ref T[] values, int head, T[] tail, int count)
+    /// <summary>
+    /// The states the rows' moist-air state will be solved into (<see cref="RowStates"/>), or null where the parser
+    /// cannot solve them: no dew point column, or no pressure for the rows yet.
+    /// </summary>
+    private static RowStates? PlanStates(RawWeatherTable table, NumberColumn[] columns, int capacity, WeatherReadOptions options)
     {
-        if (values.Length < head + count)
+        if (!columns.Any(c => c.Quantity == WeatherQuantity.DewPoint))
         {
-            Array.Resize(ref values, head + count);
+            return null;
         }
 
-        Array.Copy(tail, 0, values, head, count);
+        bool rh = columns.Any(c => c.Quantity == WeatherQuantity.RelativeHumidity);
+        if (columns.Any(c => c.Quantity == WeatherQuantity.Pressure))
+        {
+            return new RowStates(capacity, null, rh);
+        }
+
+        return WeatherRecordBuilder.PressureWithoutColumn(table, options) is double constant ? new RowStates(capacity, constant, rh) : null;
+    }
+
+    /// <summary>Solves the states of rows [<paramref name="start"/>, <paramref name="end"/>) where the layout plans them; false where it does not or cannot.</summary>
+    private static bool SolveStates(RowLayout layout, NumberColumn[] columns, int start, int end)
+    {
+        if (layout.States is not { } states)
+        {
+            return false;
+        }
+
+        double[]? Of(WeatherQuantity q) => Array.Find(columns, c => c.Quantity == q).Values;
+        return states.Solve(Of(WeatherQuantity.DryBulb)!, Of(WeatherQuantity.DewPoint)!, states.ConstantPressurePa is null ? Of(WeatherQuantity.Pressure) : null, start, end);
     }
 
     /// <summary>What the row loop needs to know about the file, fixed once the column names are read.</summary>
     private sealed record RowLayout(RawWeatherTable Table, ColumnMap Map, string[] Headers, int HeaderLine, int TimeIndex, int ClockIndex,
-        bool Quoted, bool CommaPossible, bool NumbersNeedText, byte[][] Missing, System.Buffers.SearchValues<byte> MissingStarts)
+        bool Quoted, bool CommaPossible, bool NumbersNeedText, byte[][] Missing, System.Buffers.SearchValues<byte> MissingStarts, RowStates? States)
     {
         public string File => Table.File;
     }
 
     /// <summary>
-    /// Reads the rows after the column names into the arrays (grown if the file has more rows than lines counted) and
-    /// returns their number; <paramref name="trailing"/> counts the lines ignored after a blank line where the map says so.
+    /// Reads the rows after the column names into the arrays from row <paramref name="start"/> on (growing them, where
+    /// <paramref name="canGrow"/>, if the file has more rows than lines counted) and returns the row after the last;
+    /// <paramref name="trailing"/> counts the lines ignored after a blank line where the map says so.
     /// </summary>
     private static int ReadRows(CsvReader reader, RowLayout layout, ref DateTime[] times, ref int[] writtenYears, ref int[] lines,
-        NumberColumn[] columns, out int trailing)
+        NumberColumn[] columns, int start, bool canGrow, out int trailing)
     {
         trailing = 0;
         int headerCount = layout.Headers.Length;
@@ -445,7 +478,7 @@ internal static class WeatherFileParser
         bool quoted = layout.Quoted;
         bool numbersNeedText = layout.NumbersNeedText;
         int records = 0;
-        int row = 0;
+        int row = start;
         while (reader.Read())
         {
             records++;
@@ -473,6 +506,11 @@ internal static class WeatherFileParser
 
             if (row == times.Length)
             {
+                if (!canGrow)
+                {
+                    throw new InvalidOperationException("more rows than lines in a half of the file");
+                }
+
                 int grown = Math.Max(16, 2 * row);
                 Array.Resize(ref times, grown);
                 Array.Resize(ref writtenYears, grown);

@@ -25,8 +25,7 @@ internal static class WeatherRecordBuilder
 
         double? lat = MetaNumber(raw, "latitude", -90, 90);
         double? lon = MetaNumber(raw, "longitude", -180, 180);
-        double? elevation = options.ElevationM ?? MetaNumber(raw, "elevation_m", -500, 9000)
-            ?? (MetaNumber(raw, "elevation_ft", -1600, 29500) is double ft ? ft * Units.Conversions.MetresPerFoot : null);
+        double? elevation = Elevation(raw, options);
         double? offset;
         if (raw.Metadata.TryGetValue("utc_offset_h", out var off) && off.Value == "from_longitude")
         {
@@ -280,8 +279,13 @@ internal static class WeatherRecordBuilder
         var dryBulb = columns[WeatherQuantity.DryBulb];
         var primary = new[] { WeatherQuantity.DewPoint, WeatherQuantity.HumidityRatio, WeatherQuantity.WetBulb, WeatherQuantity.RelativeHumidity }
             .First(columns.ContainsKey);
-        var w = new double[kept];
-        var dewPoint = new double[kept];
+
+        // The states the parser solved for the rows are the hours' own when the hours are the rows in file order with none
+        // dropped, the dew point is the measure used and the rows' pressure is the one settled here.
+        var early = raw.States is { } solved && inFileOrder && kept == n && primary == WeatherQuantity.DewPoint
+            && (pressureColumn is not null ? solved.ConstantPressurePa is null : solved.ConstantPressurePa == sitePressure) ? solved : null;
+        var w = early is not null ? Exactly(early.HumidityRatio, kept) : new double[kept];
+        var dewPoint = early is not null ? Exactly(early.DewPointC, kept) : new double[kept];
         var given = columns[primary];
         if (primary == WeatherQuantity.DewPoint)
         {
@@ -341,11 +345,13 @@ internal static class WeatherRecordBuilder
         // The moist-air state of every hour (Handbook ch. 1): the humidity ratio from the dew point (eqs. 5, 6 and 20) where
         // the dew point is the measure used, the wet-bulb (eqs. 33 and 35), the enthalpy (eq. 32) and, to check the file's
         // RH column, the RH (eq. 12); all per hour, so a long record is done in two halves at once.
+        // Already done where the parser's states hold.
         bool fromDewPoint = primary == WeatherQuantity.DewPoint;
-        var wetBulb = new double[kept];
-        var enthalpy = new double[kept];
-        double[]? relativeHumidity = primary != WeatherQuantity.RelativeHumidity && columns.ContainsKey(WeatherQuantity.RelativeHumidity) ? new double[kept] : null;
-        HourlyStateBatchSolver.InTwoHalves(kept, (start, length) =>
+        var wetBulb = early is not null ? Exactly(early.WetBulbC, kept) : new double[kept];
+        var enthalpy = early is not null ? Exactly(early.EnthalpyJPerKg, kept) : new double[kept];
+        double[]? relativeHumidity = primary == WeatherQuantity.RelativeHumidity || !columns.ContainsKey(WeatherQuantity.RelativeHumidity) ? null
+            : early?.RelativeHumidity is { } solvedRh ? Exactly(solvedRh, kept) : new double[kept];
+        HourlyStateBatchSolver.InTwoHalves(early is not null ? 0 : kept, (start, length) =>
         {
             var t = dryBulb.AsSpan(start, length);
             var p = pressure.AsSpan(start, length);
@@ -486,6 +492,28 @@ internal static class WeatherRecordBuilder
             }
 
             quality.Count(key, $"{column}: {length} hour(s) {span} filled by linear interpolation", length);
+        }
+    }
+
+    /// <summary>The site elevation, m: the one the options give, else the file's metadata, else null.</summary>
+    private static double? Elevation(RawWeatherTable raw, WeatherReadOptions options) =>
+        options.ElevationM ?? MetaNumber(raw, "elevation_m", -500, 9000)
+            ?? (MetaNumber(raw, "elevation_ft", -1600, 29500) is double ft ? ft * Units.Conversions.MetresPerFoot : null);
+
+    /// <summary>
+    /// The pressure every hour carries, Pa, when the file has no pressure column, as <see cref="Build"/> settles it (DESIGN
+    /// 5.1): the standard atmosphere at the site elevation, else sea level. Null when the metadata's elevation is not a
+    /// number in range (<see cref="Build"/> reports that).
+    /// </summary>
+    internal static double? PressureWithoutColumn(RawWeatherTable raw, WeatherReadOptions options)
+    {
+        try
+        {
+            return Elevation(raw, options) is double z ? Atmosphere.PressureAtElevationPa(z) : Atmosphere.SeaLevelPressurePa;
+        }
+        catch (WeatherDataException)
+        {
+            return null;
         }
     }
 

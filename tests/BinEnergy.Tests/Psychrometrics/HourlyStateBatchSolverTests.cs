@@ -27,6 +27,27 @@ public sealed class HourlyStateBatchSolverTests
     }
 
     [Fact]
+    public void HumidityRatiosAndRelativeHumidities_AreTheSameWhereverAnHourStands()
+    {
+        // The parser solves each half of a file at its own offset, the builder at another: every hour must come out to
+        // the same bit whether it falls in a full vector or in the padded last few.
+        var w = RealWeatherFileTests.Read("725300TYA.CSV");
+        const int n = 11;
+        var whole = new double[n];
+        var rh = new double[n];
+        HourlyStateBatchSolver.HumidityRatiosFromDewPoints(w.DewPointC.AsSpan(100, n), w.PressurePa.AsSpan(100, n), whole);
+        HourlyStateBatchSolver.RelativeHumidities(w.DryBulbC.AsSpan(100, n), w.HumidityRatio.AsSpan(100, n), w.PressurePa.AsSpan(100, n), rh);
+        for (int start = 1; start < 4; start++)
+        {
+            var part = new double[n - start];
+            HourlyStateBatchSolver.HumidityRatiosFromDewPoints(w.DewPointC.AsSpan(100 + start, n - start), w.PressurePa.AsSpan(100 + start, n - start), part);
+            Assert.Equal(whole[start..], part);
+            HourlyStateBatchSolver.RelativeHumidities(w.DryBulbC.AsSpan(100 + start, n - start), w.HumidityRatio.AsSpan(100 + start, n - start), w.PressurePa.AsSpan(100 + start, n - start), part);
+            Assert.Equal(rh[start..], part);
+        }
+    }
+
+    [Fact]
     public void WetBulbsOfRecord_OnTwoThreads_EqualTheSingleThreadSolveExactly()
     {
         var w = RealWeatherFileTests.Read("725300TYA.CSV");
