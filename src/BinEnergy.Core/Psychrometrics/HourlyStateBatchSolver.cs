@@ -147,16 +147,19 @@ internal static class HourlyStateBatchSolver
         }
     }
 
-    /// <summary>Records at least this long are solved in two halves on two threads (where the machine has two cores or more).</summary>
+    /// <summary>Records at least this long are solved in pieces on all cores (where the machine has two cores or more).</summary>
     internal const int ParallelHours = 2048;
+
+    /// <summary>About how many hours make a piece: small enough that a core that starts late still finds pieces left.</summary>
+    private const int HoursPerPiece = 1024;
 
     /// <summary>
     /// Runs <paramref name="work"/> over the hours [start, start + length) of a record of <paramref name="hours"/> hours:
-    /// in two halves on two threads when the record is long and the machine has a second core, else all at once. The
-    /// work must treat each hour on its own, so that the results are the same either way. An error in the first half
-    /// is raised before one in the second, once both halves have stopped.
+    /// in pieces on all cores when the record is long and the machine has a second core, else all at once. The work
+    /// must treat each hour on its own, so that the results are the same either way. The error raised is that of the
+    /// first piece in the record's order that failed, once all pieces have stopped.
     /// </summary>
-    public static void InTwoHalves(int hours, Action<int, int> work)
+    public static void InPieces(int hours, Action<int, int> work)
     {
         if (hours < ParallelHours || Environment.ProcessorCount < 2)
         {
@@ -164,30 +167,37 @@ internal static class HourlyStateBatchSolver
             return;
         }
 
-        int half = hours / 2 / Width * Width;
-        var second = Task.Run(() => work(half, hours - half));
-        try
+        int pieces = Math.Min(16, hours / HoursPerPiece);
+        int size = (hours + pieces - 1) / pieces / Width * Width + Width;
+        var errors = new Exception?[pieces];
+        Parallel.For(0, pieces, k =>
         {
-            work(0, half);
-        }
-        catch
-        {
-            ((IAsyncResult)second).AsyncWaitHandle.WaitOne();
-            throw;
-        }
+            int start = Math.Min(hours, k * size);
+            try
+            {
+                work(start, Math.Min(hours, start + size) - start);
+            }
+            catch (Exception e)
+            {
+                errors[k] = e;
+            }
+        });
 
-        second.GetAwaiter().GetResult();
+        if (Array.Find(errors, e => e is not null) is { } first)
+        {
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(first);
+        }
     }
 
     /// <summary>
     /// <see cref="WetBulbs(ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, ReadOnlySpan{double}, Span{double})"/>
-    /// for a whole record, in two halves on two threads when the record is long (<see cref="InTwoHalves"/>). Each
+    /// for a whole record, in pieces on all cores when the record is long (<see cref="InPieces"/>). Each
     /// hour's result is the same either way: no hour depends on another.
     /// </summary>
     public static void WetBulbsOfRecord(double[] dryBulbC, double[] humidityRatio, double[] pressurePa, double[] dewPointC, double[] wetBulbC)
     {
         CheckLengths(dryBulbC.Length, humidityRatio.Length, pressurePa.Length, dewPointC.Length, wetBulbC.Length);
-        InTwoHalves(dryBulbC.Length, (start, length) =>
+        InPieces(dryBulbC.Length, (start, length) =>
             WetBulbs(dryBulbC.AsSpan(start, length), humidityRatio.AsSpan(start, length), pressurePa.AsSpan(start, length),
                 dewPointC.AsSpan(start, length), wetBulbC.AsSpan(start, length)));
     }

@@ -236,9 +236,9 @@ internal static class WeatherFileParser
         var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, commaPossible, commaPossible || numericCode, missing, missingStarts, states);
         int row, trailing = 0;
         bool solved;
-        if (SplitPoint(data, pos, newlines, layout) is int split)
+        if (Pieces(data, pos, newlines, layout) is int[] cuts)
         {
-            (row, solved) = ReadRowsInTwoHalves(data, pos, split, options, layout, times, writtenYears, lines, columns);
+            (row, solved) = ReadRowsInPieces(data, cuts, options, layout, times, writtenYears, lines, columns);
         }
         else
         {
@@ -334,16 +334,20 @@ internal static class WeatherFileParser
         }
     }
 
-    /// <summary>Files with at least this many data lines are parsed in two halves on two threads (where the machine has a second core).</summary>
+    /// <summary>Files with at least this many data lines are parsed in pieces on all cores (where the machine has a second core).</summary>
     internal const int ParallelLines = 2048;
 
+    /// <summary>About how many lines make a piece: small enough that a core that starts late still finds pieces left.</summary>
+    private const int LinesPerPiece = 1024;
+
     /// <summary>
-    /// Where the data lines can be cut in two for <see cref="ReadRowsInTwoHalves"/>: the start of the line after the
-    /// middle of the data, or null when the file must be read in one pass. It must be one pass when a record can span
-    /// lines (a quote in the data), when lines end in lone carriage returns (the line count would be wrong), when a map
-    /// stops at a blank line (the second half would not know), when the file is short, or on a single core.
+    /// Where the data lines can be cut into pieces for <see cref="ReadRowsInPieces"/>: the offsets of each piece's first
+    /// line, then the end of the data; or null when the file must be read in one pass. It must be one pass when a
+    /// record can span lines (a quote in the data), when lines end in lone carriage returns (the line count would be
+    /// wrong), when a map stops at a blank line (a later piece would not know), when the file is short, or on a
+    /// single core.
     /// </summary>
-    private static int? SplitPoint(byte[] data, int pos, int newlines, RowLayout layout)
+    private static int[]? Pieces(byte[] data, int pos, int newlines, RowLayout layout)
     {
         var body = data.AsSpan(pos);
         if (layout.Quoted || layout.Map.EndAtBlankLine || Environment.ProcessorCount < 2 || newlines < ParallelLines
@@ -353,25 +357,40 @@ internal static class WeatherFileParser
         }
 
         int start = pos + body.IndexOf((byte)'\n') + 1;
-        int middle = start + (data.Length - start) / 2;
-        int cut = data.AsSpan(middle).IndexOf((byte)'\n');
-        return cut < 0 || middle + cut + 1 >= data.Length ? null : middle + cut + 1;
+        int count = Math.Min(16, newlines / LinesPerPiece);
+        var cuts = new List<int>(count + 1) { start };
+        for (int k = 1; k < count; k++)
+        {
+            int target = start + (int)((long)(data.Length - start) * k / count);
+            int next = data.AsSpan(target).IndexOf((byte)'\n');
+            if (next >= 0 && target + next + 1 < data.Length && target + next + 1 > cuts[^1])
+            {
+                cuts.Add(target + next + 1);
+            }
+        }
+
+        cuts.Add(data.Length);
+        return cuts.Count >= 3 ? cuts.ToArray() : null;
     }
 
     /// <summary>
-    /// <see cref="ReadRows"/> over the data in two halves at once, the first from the column names to
-    /// <paramref name="split"/>, the second from there to the end, each on its own thread with its own repair counts,
-    /// each solving its rows' states after its rows. Every record is one line, so the second half's first line and row
-    /// follow from the first half's line count; its rows are moved up behind the first half's where that half had
-    /// blank lines. A mistake in the first half is reported before one in the second, as a single pass would.
+    /// <see cref="ReadRows"/> over the pieces of the data between <paramref name="cuts"/>, on all cores, each piece
+    /// solving its rows' states after its rows and counting its repairs on its own. Every record is one line, so a
+    /// piece's first line and row follow from the lines before it; the rows are then moved up where earlier pieces had
+    /// blank lines, and the repairs joined in file order. The mistake reported is the first in file order, as a single
+    /// pass would report it.
     /// </summary>
-    private static (int Rows, bool Solved) ReadRowsInTwoHalves(byte[] data, int pos, int split, CsvReaderOptions options, RowLayout layout,
+    private static (int Rows, bool Solved) ReadRowsInPieces(byte[] data, int[] cuts, CsvReaderOptions options, RowLayout layout,
         DateTime[] times, int[] writtenYears, int[] lines, NumberColumn[] columns)
     {
-        int firstLines = data.AsSpan(pos, split - pos).Count((byte)'\n') - 1; // the first half's lines after the column names
-        var second = new RawWeatherTable(layout.File, layout.Map, layout.Table.IsOpenLayout);
-        var secondLayout = layout with { Table = second, HeaderLine = layout.HeaderLine + firstLines };
-        var secondOptions = new CsvReaderOptions
+        int pieces = cuts.Length - 1;
+        var firstRow = new int[pieces]; // the data lines before each piece
+        for (int k = 1; k < pieces; k++)
+        {
+            firstRow[k] = firstRow[k - 1] + data.AsSpan(cuts[k - 1], cuts[k] - cuts[k - 1]).Count((byte)'\n');
+        }
+
+        var pieceOptions = new CsvReaderOptions
         {
             Separator = options.Separator,
             HasHeader = false,
@@ -380,48 +399,55 @@ internal static class WeatherFileParser
             TrimWhitespace = options.TrimWhitespace,
             FormatProvider = CultureInfo.InvariantCulture,
         };
-        var secondHalf = Task.Run(() =>
+        var ends = new int[pieces];
+        var solved = new bool[pieces];
+        var tables = new RawWeatherTable[pieces];
+        var mistakes = new WeatherDataException?[pieces];
+        Parallel.For(0, pieces, k =>
         {
-            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, split, data.Length - split), secondOptions);
-            var (t, y, l) = (times, writtenYears, lines);
-            int end = ReadRows(reader, secondLayout, ref t, ref y, ref l, columns, firstLines, canGrow: false, out _);
-            return (End: end, Solved: SolveStates(secondLayout, columns, firstLines, end));
+            tables[k] = new RawWeatherTable(layout.File, layout.Map, layout.Table.IsOpenLayout);
+            var pieceLayout = layout with { Table = tables[k], HeaderLine = layout.HeaderLine + firstRow[k] };
+            try
+            {
+                using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, cuts[k], cuts[k + 1] - cuts[k]), pieceOptions);
+                var (t, y, l) = (times, writtenYears, lines);
+                ends[k] = ReadRows(reader, pieceLayout, ref t, ref y, ref l, columns, firstRow[k], canGrow: false, out _);
+                solved[k] = SolveStates(pieceLayout, columns, firstRow[k], ends[k]);
+            }
+            catch (WeatherDataException e)
+            {
+                mistakes[k] = e;
+            }
         });
 
-        int firstRows;
-        bool firstSolved;
-        try
+        if (Array.Find(mistakes, e => e is not null) is { } first)
         {
-            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, pos, split - pos), options);
-            var (t, y, l) = (times, writtenYears, lines);
-            firstRows = ReadRows(reader, layout, ref t, ref y, ref l, columns, 0, canGrow: false, out _);
-            firstSolved = SolveStates(layout, columns, 0, firstRows);
-        }
-        catch (WeatherDataException)
-        {
-            // The first mistake in file order wins; the second half is left to finish first.
-            ((IAsyncResult)secondHalf).AsyncWaitHandle.WaitOne();
-            throw;
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(first);
         }
 
-        var (secondEnd, secondSolved) = secondHalf.GetAwaiter().GetResult();
-        int secondRows = secondEnd - firstLines;
-        if (firstRows < firstLines)
+        int rows = 0;
+        for (int k = 0; k < pieces; k++)
         {
-            // Blank lines in the first half: its rows end before the second half's begin.
-            Array.Copy(times, firstLines, times, firstRows, secondRows);
-            Array.Copy(writtenYears, firstLines, writtenYears, firstRows, secondRows);
-            Array.Copy(lines, firstLines, lines, firstRows, secondRows);
-            foreach (var column in columns)
+            int count = ends[k] - firstRow[k];
+            if (rows < firstRow[k])
             {
-                Array.Copy(column.Values, firstLines, column.Values, firstRows, secondRows);
+                // Blank lines before this piece: its rows move up behind the rows before them.
+                Array.Copy(times, firstRow[k], times, rows, count);
+                Array.Copy(writtenYears, firstRow[k], writtenYears, rows, count);
+                Array.Copy(lines, firstRow[k], lines, rows, count);
+                foreach (var column in columns)
+                {
+                    Array.Copy(column.Values, firstRow[k], column.Values, rows, count);
+                }
+
+                layout.States?.Move(firstRow[k], rows, count);
             }
 
-            layout.States?.Move(firstLines, firstRows, secondRows);
+            rows += count;
+            layout.Table.Quality.Append(tables[k].Quality);
         }
 
-        layout.Table.Quality.Append(second.Quality);
-        return (firstRows + secondRows, firstSolved && secondSolved);
+        return (rows, solved.All(s => s));
     }
 
     /// <summary>

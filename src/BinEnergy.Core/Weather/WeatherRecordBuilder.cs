@@ -344,14 +344,14 @@ internal static class WeatherRecordBuilder
 
         // The moist-air state of every hour (Handbook ch. 1): the humidity ratio from the dew point (eqs. 5, 6 and 20) where
         // the dew point is the measure used, the wet-bulb (eqs. 33 and 35), the enthalpy (eq. 32) and, to check the file's
-        // RH column, the RH (eq. 12); all per hour, so a long record is done in two halves at once.
+        // RH column, the RH (eq. 12); all per hour, so a long record is done in pieces on all cores.
         // Already done where the parser's states hold.
         bool fromDewPoint = primary == WeatherQuantity.DewPoint;
         var wetBulb = early is not null ? Exactly(early.WetBulbC, kept) : new double[kept];
         var enthalpy = early is not null ? Exactly(early.EnthalpyJPerKg, kept) : new double[kept];
         double[]? relativeHumidity = primary == WeatherQuantity.RelativeHumidity || !columns.ContainsKey(WeatherQuantity.RelativeHumidity) ? null
             : early?.RelativeHumidity is { } solvedRh ? Exactly(solvedRh, kept) : new double[kept];
-        HourlyStateBatchSolver.InTwoHalves(early is not null ? 0 : kept, (start, length) =>
+        HourlyStateBatchSolver.InPieces(early is not null ? 0 : kept, (start, length) =>
         {
             var t = dryBulb.AsSpan(start, length);
             var p = pressure.AsSpan(start, length);

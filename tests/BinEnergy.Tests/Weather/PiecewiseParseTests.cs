@@ -4,11 +4,11 @@ using BinEnergy.Core.Weather;
 namespace BinEnergy.Tests.Weather;
 
 /// <summary>
-/// A long file is parsed in two halves at once (where the machine has a second core): the record, its
+/// A long file is parsed in pieces on all cores (where the machine has a second core): the record, its
 /// line numbers, its repair counts and the first mistake in file order must be what one pass gives.
 /// One pass is forced by quoting one field, which lets a record span lines (and changes no value).
 /// </summary>
-public sealed class TwoHalvesParseTests
+public sealed class PiecewiseParseTests
 {
     private const int Hours = 8760;
 
@@ -27,7 +27,7 @@ public sealed class TwoHalvesParseTests
     [Fact]
     public void LongFile_GivesTheSameRecordAndRepairsAsOnePass()
     {
-        // RH clamps in both halves (an RH column added), a short gap in each half and a blank line in the second.
+        // RH clamps in several pieces (an RH column added), short gaps in two pieces and a blank line in a later piece.
         string text = OpenLayoutText.File(Hours, (i, r) => i switch
         {
             100 or 101 or 7000 => r.Replace("," + OpenLayoutText.DryBulb(i) + ",", ",,", StringComparison.Ordinal),
@@ -65,7 +65,7 @@ public sealed class TwoHalvesParseTests
     [InlineData(100)]
     [InlineData(5000)]
     [InlineData(8759)]
-    public void MistakeInEitherHalf_NamesItsLine(int hour)
+    public void MistakeInAnyPiece_NamesItsLine(int hour)
     {
         string text = OpenLayoutText.File(Hours, (i, r) => i == hour ? r.Replace("," + OpenLayoutText.DryBulb(i) + ",", ",9x,", StringComparison.Ordinal) : r);
         var e = Assert.Throws<WeatherDataException>(() => Read(text));
@@ -75,7 +75,7 @@ public sealed class TwoHalvesParseTests
     }
 
     [Fact]
-    public void MistakesInBothHalves_TheFirstInFileOrderIsReported()
+    public void MistakesInTwoPieces_TheFirstInFileOrderIsReported()
     {
         string text = OpenLayoutText.File(Hours, (i, r) => i switch
         {
