@@ -15,11 +15,11 @@ internal sealed class RowStates
     /// <summary>Arrays for <paramref name="capacity"/> rows, with RH only when <paramref name="withRelativeHumidity"/>.</summary>
     public RowStates(int capacity, double? constantPressurePa, bool withRelativeHumidity)
     {
-        DewPointC = new double[capacity];
-        HumidityRatio = new double[capacity];
-        WetBulbC = new double[capacity];
-        EnthalpyJPerKg = new double[capacity];
-        RelativeHumidity = withRelativeHumidity ? new double[capacity] : null;
+        DewPointC = GC.AllocateUninitializedArray<double>(capacity); // every row is written before it is read
+        HumidityRatio = GC.AllocateUninitializedArray<double>(capacity);
+        WetBulbC = GC.AllocateUninitializedArray<double>(capacity);
+        EnthalpyJPerKg = GC.AllocateUninitializedArray<double>(capacity);
+        RelativeHumidity = withRelativeHumidity ? GC.AllocateUninitializedArray<double>(capacity) : null;
         ConstantPressurePa = constantPressurePa;
     }
 

@@ -210,9 +210,10 @@ internal static class WeatherFileParser
         // the rows unless the file has blank lines (or lone carriage returns as line breaks: then they grow).
         int newlines = body.Count((byte)'\n');
         int capacity = Math.Max(16, newlines - (body[^1] == '\n' ? 1 : 0));
-        var times = new DateTime[capacity];
-        var writtenYears = new int[capacity];
-        var lines = new int[capacity];
+        // Not zeroed: the rows fill them from the start, and only the first rows' entries are read.
+        var times = GC.AllocateUninitializedArray<DateTime>(capacity);
+        var writtenYears = GC.AllocateUninitializedArray<int>(capacity);
+        var lines = GC.AllocateUninitializedArray<int>(capacity);
         var columns = new NumberColumn[map.Columns.Count];
         int c0 = 0;
         foreach (var (q, spec) in map.Columns)
@@ -222,7 +223,7 @@ internal static class WeatherFileParser
             var (f, o) = WeatherUnits.ToInternal(q, spec);
             var (low, high) = Range(q);
             table.ColumnNames[q] = headers[idx];
-            columns[c0++] = new NumberColumn(q, idx, f, o, low, high, new double[capacity]);
+            columns[c0++] = new NumberColumn(q, idx, f, o, low, high, GC.AllocateUninitializedArray<double>(capacity));
         }
 
         var states = statesFor is null ? null : PlanStates(table, columns, capacity, statesFor);

@@ -1,4 +1,5 @@
 using System.Globalization;
+using System.Runtime.Intrinsics;
 using BinEnergy.Core.Psychrometrics;
 
 namespace BinEnergy.Core.Weather;
@@ -131,25 +132,21 @@ internal static class WeatherRecordBuilder
             quality.Warn("hour-ending times shifted back one hour to hour-beginning");
         }
 
-        // Order checks and the hourly grid.
+        // Order checks and the hourly grid. Rows in file order, one hour apart, are the grid itself; others are placed on it.
         DateTime first = keys[order[0]];
-        var gridIndex = new int[n];
+        bool inFileOrder = IsIdentity(order) && OneHourApart(keys);
+        var gridIndex = inFileOrder ? null : new int[n];
         int prev = order[0];
-        gridIndex[prev] = 0;
-        bool inFileOrder = prev == 0; // rows in file order, one hour apart
-        for (int k = 1; k < n; k++)
+        for (int k = 1; k < n && !inFileOrder; k++)
         {
             int i = order[k];
             var step = keys[i] - keys[prev];
             if (step.Ticks == TimeSpan.TicksPerHour)
             {
-                gridIndex[i] = gridIndex[prev] + 1;
-                inFileOrder &= i == k;
+                gridIndex![i] = gridIndex[prev] + 1;
                 prev = i;
                 continue;
             }
-
-            inFileOrder = false;
 
             if (step == TimeSpan.Zero)
             {
@@ -170,7 +167,7 @@ internal static class WeatherRecordBuilder
                     "Average sub-hourly data to whole hours first (one row per hour, on the hour)", line: raw.Lines[i], column: map.Time.Column, value: RawTime(raw, i));
             }
 
-            gridIndex[i] = gridIndex[prev] + (int)(step.Ticks / Hour.Ticks);
+            gridIndex![i] = gridIndex[prev] + (int)(step.Ticks / Hour.Ticks);
             if (gridIndex[i] > 24 * 366 * 30)
             {
                 throw new WeatherDataException(WeatherErrorKind.NonHourlyStep, file, "the record spans more than 30 years", "Split the file into years", line: raw.Lines[i]);
@@ -179,7 +176,7 @@ internal static class WeatherRecordBuilder
             prev = i;
         }
 
-        int hours = gridIndex[order[^1]] + 1;
+        int hours = inFileOrder ? n : gridIndex![order[^1]] + 1;
         DateTime[] times;
         int[] gridLine;
         var columns = new Dictionary<WeatherQuantity, double[]>();
@@ -204,7 +201,7 @@ internal static class WeatherRecordBuilder
 
             for (int i = 0; i < n; i++)
             {
-                gridLine[gridIndex[i]] = raw.Lines[i];
+                gridLine[gridIndex![i]] = raw.Lines[i];
             }
 
             foreach (var (q, list) in raw.Values)
@@ -213,7 +210,7 @@ internal static class WeatherRecordBuilder
                 Array.Fill(col, double.NaN);
                 for (int i = 0; i < n; i++)
                 {
-                    col[gridIndex[i]] = list[i];
+                    col[gridIndex![i]] = list[i];
                 }
 
                 columns[q] = col;
@@ -267,7 +264,7 @@ internal static class WeatherRecordBuilder
             quality.Warn("no elevation and no pressure column: sea-level pressure (101.325 kPa) assumed; give --elevation for a site above sea level");
         }
 
-        if (pressureColumn is not null && kept > 24 && pressureColumn.Max() - pressureColumn.Min() < 1e-6)
+        if (pressureColumn is not null && kept > 24 && IsConstant(pressureColumn))
         {
             quality.Warn(Inv($"the pressure column is constant at {pressureColumn[0] / 1000:0.###} kPa: it looks filled rather than measured"));
         }
@@ -409,35 +406,49 @@ internal static class WeatherRecordBuilder
 
             string key = QualityKeys.DisagreesPrefix + QualityKeys.Role(q);
             string against = WeatherFileParser.Describe(primary);
-            for (int i = 0; i < weather.Count; i++)
+            var (expected, fixedTolerance, relativeTolerance, unit) = q switch
             {
-                double t = weather.DryBulbC[i];
-                double expected, tolerance;
-                string unit;
-                switch (q)
-                {
-                    case WeatherQuantity.RelativeHumidity:
-                        expected = relativeHumidity![i];
-                        (tolerance, unit) = (RhDisagreementPoints, "%");
-                        break;
-                    case WeatherQuantity.WetBulb:
-                        (expected, tolerance, unit) = (weather.WetBulbC[i], TemperatureDisagreementK, "C");
-                        break;
-                    case WeatherQuantity.DewPoint:
-                        (expected, tolerance, unit) = (weather.DewPointC[i], TemperatureDisagreementK, "C");
-                        break;
-                    default:
-                        expected = weather.HumidityRatio[i];
-                        (tolerance, unit) = (Math.Max(0.0005, 0.05 * expected), "kg/kg");
-                        break;
-                }
-
-                if (Math.Abs(col[i] - expected) > tolerance)
-                {
-                    quality.Count(key, Inv($"{Where(gridLine[i], weather.Times[i], typical)}: {WeatherFileParser.Describe(q)} {col[i]:0.###} {unit} in the file, {expected:0.###} {unit} from the {against}"));
-                }
+                WeatherQuantity.RelativeHumidity => (relativeHumidity!, RhDisagreementPoints, 0.0, "%"),
+                WeatherQuantity.WetBulb => (weather.WetBulbC, TemperatureDisagreementK, 0.0, "C"),
+                WeatherQuantity.DewPoint => (weather.DewPointC, TemperatureDisagreementK, 0.0, "C"),
+                _ => (weather.HumidityRatio, 0.0005, 0.05, "kg/kg"),
+            };
+            for (int i = 0; (i = NextDisagreement(col, expected, fixedTolerance, relativeTolerance, i)) < weather.Count; i++)
+            {
+                quality.Count(key, Inv($"{Where(gridLine[i], weather.Times[i], typical)}: {WeatherFileParser.Describe(q)} {col[i]:0.###} {unit} in the file, {expected[i]:0.###} {unit} from the {against}"));
             }
         }
+    }
+
+    /// <summary>
+    /// The first hour at or after <paramref name="from"/> where the file's value differs from the expected one by more
+    /// than the larger of <paramref name="fixedTolerance"/> and <paramref name="relativeTolerance"/> times the expected
+    /// value, or the length when none does; four hours at a time.
+    /// </summary>
+    private static int NextDisagreement(double[] values, double[] expected, double fixedTolerance, double relativeTolerance, int from)
+    {
+        int i = from;
+        var fixedTol = Vector256.Create(fixedTolerance);
+        var relativeTol = Vector256.Create(relativeTolerance);
+        for (; i + 4 <= values.Length; i += 4)
+        {
+            var e = Vector256.Create(expected.AsSpan(i, 4));
+            var difference = Vector256.Abs(Vector256.Create(values.AsSpan(i, 4)) - e);
+            if (Vector256.GreaterThanAny(difference, Vector256.Max(fixedTol, relativeTol * e)))
+            {
+                break;
+            }
+        }
+
+        for (; i < values.Length; i++)
+        {
+            if (Math.Abs(values[i] - expected[i]) > Math.Max(fixedTolerance, relativeTolerance * expected[i]))
+            {
+                return i;
+            }
+        }
+
+        return values.Length;
     }
 
     private static void FillGaps(double[] col, WeatherQuantity q, RawWeatherTable raw, DateTime[] times, int[] gridLine, bool typical, WeatherReadOptions options, bool[] drop, QualityReport quality)
@@ -597,8 +608,8 @@ internal static class WeatherRecordBuilder
         ref double first = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(values);
         for (; i + 4 <= values.Length; i += 4)
         {
-            var v = System.Runtime.Intrinsics.Vector256.LoadUnsafe(ref first, (nuint)i);
-            if (!System.Runtime.Intrinsics.Vector256.EqualsAll(v, v))
+            var v = Vector256.LoadUnsafe(ref first, (nuint)i);
+            if (!Vector256.EqualsAll(v, v))
             {
                 break; // a NaN is the only value not equal to itself
             }
@@ -613,6 +624,66 @@ internal static class WeatherRecordBuilder
         }
 
         return values.Length;
+    }
+
+    /// <summary>Whether each time is one hour after the one before, four at a time.</summary>
+    private static bool OneHourApart(DateTime[] times)
+    {
+        var ticks = System.Runtime.InteropServices.MemoryMarshal.Cast<DateTime, long>(times.AsSpan()); // a DateTime is its ticks (with no kind set)
+        var hour = Vector256.Create(TimeSpan.TicksPerHour);
+        int i = 1;
+        for (; i + 4 <= ticks.Length; i += 4)
+        {
+            var step = Vector256.Create(ticks.Slice(i, 4)) - Vector256.Create(ticks.Slice(i - 1, 4));
+            if (step != hour)
+            {
+                return false;
+            }
+        }
+
+        for (; i < times.Length; i++)
+        {
+            if (times[i].Ticks - times[i - 1].Ticks != TimeSpan.TicksPerHour)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>
+    /// Whether the values span less than 1e-6 (a column filled with one value). A value 2e-6 or more from the first
+    /// settles it as not constant, four values at a time; only a column with none is measured exactly.
+    /// </summary>
+    private static bool IsConstant(double[] values)
+    {
+        var low = Vector256.Create(values[0] - 2e-6);
+        var high = Vector256.Create(values[0] + 2e-6);
+        for (int i = 0; i + 4 <= values.Length; i += 4)
+        {
+            var v = Vector256.Create(values.AsSpan(i, 4));
+            if (!Vector256.GreaterThanAll(v, low) || !Vector256.LessThanAll(v, high))
+            {
+                return false;
+            }
+        }
+
+        return values.Max() - values.Min() < 1e-6;
+    }
+
+    /// <summary>Whether the order is 0, 1, 2, ...</summary>
+    private static bool IsIdentity(int[] order)
+    {
+        for (int i = 0; i < order.Length; i++)
+        {
+            if (order[i] != i)
+            {
+                return false;
+            }
+        }
+
+        return true;
     }
 
     /// <summary>Row indices in file order, those placed at -1 first and those at 1 last (the identity when <paramref name="moved"/> is 0).</summary>

@@ -101,6 +101,36 @@ public sealed class CalendarAndQualityTests
         Assert.Equal(24, both.Quality.Counts[QualityKeys.DisagreesPrefix + "rh"]);
     }
 
+    [Theory]
+    [InlineData("wetbulb_c", "{0}", 1.5, 0.9)] // within 1 K of the wet-bulb from the dew point: agrees
+    [InlineData("humidity_ratio", "{1}", 1.06, 1.04)] // within 5 % of W: agrees
+    public void SecondMeasures_DisagreeingBeyondTheirTolerance_AreCountedHourByHour(string column, string format, double off, double near)
+    {
+        // Dew point 12 C at 20 C: the second column is written from the hour's own state, then put off on hours 3, 17
+        // and 30 by more than its tolerance and on hour 40 by less. Exactly the three are counted, with their lines.
+        double p = Atmosphere.PressureAtElevationPa(100);
+        double w = MoistAir.HumidityRatioFromDewPoint(12, p);
+        double wetBulb = MoistAir.WetBulb(20, w, p);
+        string Value(double scale) => string.Format(CultureInfo.InvariantCulture, format, column == "wetbulb_c" ? wetBulb + scale : 0, w * scale);
+        var record = Read(OpenLayoutText.File(48, (i, r) => r.Split(',')[0] + ",20,12," + (i is 3 or 17 or 30 ? Value(off) : i == 40 ? Value(near) : Value(column == "wetbulb_c" ? 0 : 1)),
+            header: "time,drybulb_c,dewpoint_c," + column));
+        string key = QualityKeys.DisagreesPrefix + (column == "wetbulb_c" ? "wetbulb" : "humidity_ratio");
+        Assert.Equal(3, record.Quality.Counts[key]);
+        Assert.StartsWith("line 24 (", record.Quality.Examples[key][1], StringComparison.Ordinal);
+        Assert.Equal(0, record.Quality.TotalRepairs);
+    }
+
+    [Theory]
+    [InlineData("100.1", "100.1", true)] // one value throughout: looks filled
+    [InlineData("100.1", "100.1000000005", true)] // 5e-7 Pa apart: under the rule's 1e-6 Pa
+    [InlineData("100.1", "100.1000000015", false)] // 1.5e-6 Pa apart: over it (the exact measure decides)
+    [InlineData("100.1", "100.2", false)] // 100 Pa apart
+    public void APressureColumnThatNeverChanges_IsNoticed(string even, string odd, bool noticed)
+    {
+        var record = Read(OpenLayoutText.File(48, (i, r) => r.Replace(",100.1", "," + (i % 2 == 0 ? even : odd), StringComparison.Ordinal)));
+        Assert.Equal(noticed, record.Quality.Warnings.Any(x => x.Contains("looks filled", StringComparison.Ordinal)));
+    }
+
     [Fact]
     public void SpacesAroundFieldsAndNames_AreIgnored()
     {
