@@ -234,7 +234,7 @@ internal static class WeatherFileParser
         // missing-value code such as -9900 reads as a number. Where neither can happen, the rows skip the field text.
         bool commaPossible = quoted || sep != ',';
         bool numericCode = missing.Any(code => double.TryParse(code, NumberStyles.Float, CultureInfo.InvariantCulture, out double v) && double.IsFinite(v));
-        var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, commaPossible, commaPossible || numericCode, missing, missingStarts, states);
+        var layout = new RowLayout(table, map, headers, headerLine, timeIndex, clockIndex, quoted, options.TrimWhitespace == true, commaPossible, commaPossible || numericCode, missing, missingStarts, states);
         int row, trailing = 0;
         bool solved;
         if (Pieces(data, pos, newlines, layout) is int[] cuts)
@@ -485,7 +485,7 @@ internal static class WeatherFileParser
 
     /// <summary>What the row loop needs to know about the file, fixed once the column names are read.</summary>
     private sealed record RowLayout(RawWeatherTable Table, ColumnMap Map, string[] Headers, int HeaderLine, int TimeIndex, int ClockIndex,
-        bool Quoted, bool CommaPossible, bool NumbersNeedText, byte[][] Missing, System.Buffers.SearchValues<byte> MissingStarts, RowStates? States)
+        bool Quoted, bool Spaces, bool CommaPossible, bool NumbersNeedText, byte[][] Missing, System.Buffers.SearchValues<byte> MissingStarts, RowStates? States)
     {
         public string File => Table.File;
     }
@@ -503,6 +503,7 @@ internal static class WeatherFileParser
         bool iso = layout.Map.Time.Format == "iso";
         var isoTimes = default(IsoTime.Reader);
         bool quoted = layout.Quoted;
+        bool spaces = layout.Spaces; // without a space or tab in the data, no field needs trimming
         bool numbersNeedText = layout.NumbersNeedText;
         int records = 0;
         int row = start;
@@ -554,7 +555,7 @@ internal static class WeatherFileParser
             {
                 time = MappedTime(reader, layout, line, out writtenYear);
             }
-            else if (!isoTimes.TryParse(reader.GetSpan(layout.TimeIndex).Trim(" \t"u8), out time, out writtenYear))
+            else if (!isoTimes.TryParse(spaces ? reader.GetSpan(layout.TimeIndex).Trim(" \t"u8) : reader.GetSpan(layout.TimeIndex), out time, out writtenYear))
             {
                 throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], reader.GetString(layout.TimeIndex), "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
             }

@@ -138,8 +138,12 @@ public sealed class HourlyStateBatchSolverTests
         HourlyStateBatchSolver.HumidityRatiosFromDewPoints(w.DewPointC, w.PressurePa, ratios);
         var rh = new double[w.Count];
         HourlyStateBatchSolver.RelativeHumidities(w.DryBulbC, w.HumidityRatio, w.PressurePa, rh);
+        var enthalpy = new double[w.Count];
+        HourlyStateBatchSolver.Enthalpies(w.DryBulbC, w.HumidityRatio, enthalpy);
         for (int i = 0; i < w.Count; i++)
         {
+            Assert.Equal(MoistAir.Enthalpy(w.DryBulbC[i], w.HumidityRatio[i]), enthalpy[i]); // eq. 32: the same operations, the same bits
+
             // The scalar eq. 20 and eq. 12 (Handbook ch. 1); the vector exponential agrees with Math.Exp to a few units in
             // the last place, so the two agree to about 1e-15 relative.
             double ratio = MoistAir.HumidityRatioFromDewPoint(w.DewPointC[i], w.PressurePa[i]);
