@@ -5,8 +5,9 @@ using System.Runtime.Intrinsics;
 namespace BinEnergy.Core.Psychrometrics;
 
 /// <summary>
-/// The moist-air properties of a whole record at once, four hours to a SIMD vector
-/// (<see cref="Vector256{T}"/> with its <c>Exp</c> and <c>Log</c>): saturation pressure by
+/// The moist-air properties of a whole record at once, four or eight hours to a SIMD vector
+/// (<see cref="Vector256{T}"/> or, where the processor has AVX-512, <see cref="Vector512{T}"/>, with the
+/// runtime's <c>Exp</c> and <c>Log</c>; see <see cref="ILanes{TSelf}"/>): saturation pressure by
 /// Hyland and Wexler (ASHRAE Handbook—Fundamentals 2017, ch. 1, eqs. 5 and 6), dew point (eqs. 5
 /// and 6 inverted) and thermodynamic wet-bulb (eqs. 33 and 35 with W_s* from eq. 23, solved for t*).
 /// </summary>
@@ -21,8 +22,18 @@ namespace BinEnergy.Core.Psychrometrics;
 /// </remarks>
 internal static class HourlyStateBatchSolver
 {
-    /// <summary>Hours per vector.</summary>
+    /// <summary>Hours per vector in the plain arithmetic loops (the exp and log loops take <see cref="ILanes{TSelf}.Count"/>).</summary>
     private const int Width = 4;
+
+    /// <summary>The most hours per vector of either width.</summary>
+    private const int MaxWidth = 8;
+
+    /// <summary>
+    /// Whether the exp and log loops take eight hours to a vector (the processor has AVX-512) rather than four. Each
+    /// lane's result is the same either way (the runtime computes each lane of its <c>Exp</c> and <c>Log</c> alike);
+    /// the tests hold the two to that.
+    /// </summary>
+    internal static bool WideLanes { get; } = Vector512.IsHardwareAccelerated;
 
     /// <summary>Newton steps before a lane is handed to the reference solver (two to four are needed from the first guesses used).</summary>
     internal const int MaxNewtonSteps = 8;
@@ -46,37 +57,19 @@ internal static class HourlyStateBatchSolver
     /// temperature stands in the span.
     /// </summary>
     /// <exception cref="PsychrometricException">A temperature is outside -100..200 C.</exception>
-    public static void VapourPressures(ReadOnlySpan<double> temperatureC, Span<double> result)
+    public static void VapourPressures(ReadOnlySpan<double> temperatureC, Span<double> result) => VapourPressures(temperatureC, result, WideLanes);
+
+    /// <summary>As the overload without <paramref name="wide"/>, eight temperatures to a vector when it is true, else four.</summary>
+    internal static void VapourPressures(ReadOnlySpan<double> temperatureC, Span<double> result, bool wide)
     {
         CheckLengths(temperatureC.Length, result.Length);
-        int n = temperatureC.Length;
-        int i = 0;
-        for (; i + Width <= n; i += Width)
+        if (wide)
         {
-            VapourPressureBlock(temperatureC.Slice(i, Width), result.Slice(i, Width));
+            Solver<Lanes8>.VapourPressures(temperatureC, result);
         }
-
-        if (i < n)
+        else
         {
-            Span<double> padded = stackalloc double[2 * Width];
-            Pad(temperatureC[i..], padded[..Width]);
-            VapourPressureBlock(padded[..Width], padded[Width..]);
-            padded.Slice(Width, n - i).CopyTo(result[i..]);
-        }
-    }
-
-    private static void VapourPressureBlock(ReadOnlySpan<double> temperatureC, Span<double> result)
-    {
-        var t = Vector256.Create(temperatureC);
-        Vector256.Exp(LnVapourPressure(t)).CopyTo(result);
-        var outside = ~(Vector256.GreaterThanOrEqual(t, Vector256.Create(Saturation.MinTemperatureC)) & Vector256.LessThanOrEqual(t, Vector256.Create(Saturation.MaxTemperatureC)));
-        if (outside.ExtractMostSignificantBits() != 0)
-        {
-            // The scalar function raises the error the caller expects.
-            for (int k = 0; k < Width; k++)
-            {
-                result[k] = Saturation.VapourPressurePa(temperatureC[k]);
-            }
+            Solver<Lanes4>.VapourPressures(temperatureC, result);
         }
     }
 
@@ -178,7 +171,7 @@ internal static class HourlyStateBatchSolver
         }
 
         int pieces = Math.Min(16, hours / HoursPerPiece);
-        int size = (hours + pieces - 1) / pieces / Width * Width + Width;
+        int size = (hours + pieces - 1) / pieces / MaxWidth * MaxWidth + MaxWidth; // whole vectors of either width
         var errors = new Exception?[pieces];
         Parallel.For(0, pieces, k =>
         {
@@ -223,14 +216,19 @@ internal static class HourlyStateBatchSolver
     /// here both roots are found and the same bisection is replayed on their signs alone (<see cref="BisectionPick"/>).
     /// </remarks>
     public static void WetBulbs(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> humidityRatio, ReadOnlySpan<double> pressurePa,
-        ReadOnlySpan<double> dewPointC, Span<double> wetBulbC)
+        ReadOnlySpan<double> dewPointC, Span<double> wetBulbC) =>
+        WetBulbs(dryBulbC, humidityRatio, pressurePa, dewPointC, wetBulbC, WideLanes);
+
+    /// <summary>As the overload without <paramref name="wide"/>, eight hours to a vector when it is true, else four.</summary>
+    internal static void WetBulbs(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> humidityRatio, ReadOnlySpan<double> pressurePa,
+        ReadOnlySpan<double> dewPointC, Span<double> wetBulbC, bool wide)
     {
         int n = dryBulbC.Length;
         CheckLengths(n, humidityRatio.Length, pressurePa.Length, dewPointC.Length, wetBulbC.Length);
         byte[] outcome = System.Buffers.ArrayPool<byte>.Shared.Rent(n);
         try
         {
-            Solve(dryBulbC, humidityRatio, pressurePa, dewPointC, Side.Either, wetBulbC, outcome);
+            Solve(dryBulbC, humidityRatio, pressurePa, dewPointC, Side.Either, wetBulbC, outcome, wide);
             List<int>? twoRoots = null;
             for (int i = 0; i < n; i++)
             {
@@ -246,7 +244,7 @@ internal static class HourlyStateBatchSolver
 
             if (twoRoots is not null)
             {
-                PickBetweenRoots(dryBulbC, humidityRatio, pressurePa, dewPointC, wetBulbC, twoRoots);
+                PickBetweenRoots(dryBulbC, humidityRatio, pressurePa, dewPointC, wetBulbC, twoRoots, wide);
             }
         }
         finally
@@ -260,7 +258,7 @@ internal static class HourlyStateBatchSolver
     /// and keeps the one the reference's bisection reaches.
     /// </summary>
     private static void PickBetweenRoots(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> humidityRatio, ReadOnlySpan<double> pressurePa,
-        ReadOnlySpan<double> dewPointC, Span<double> wetBulbC, List<int> hours)
+        ReadOnlySpan<double> dewPointC, Span<double> wetBulbC, List<int> hours, bool wide)
     {
         int m = hours.Count;
         var t = new double[m];
@@ -275,7 +273,7 @@ internal static class HourlyStateBatchSolver
             (t[k], w[k], p[k], d[k]) = (dryBulbC[i], humidityRatio[i], pressurePa[i], dewPointC[i]);
         }
 
-        Solve(t, w, p, d, Side.Water, overWater, outcome);
+        Solve(t, w, p, d, Side.Water, overWater, outcome, wide);
         for (int k = 0; k < m; k++)
         {
             int i = hours[k];
@@ -325,6 +323,20 @@ internal static class HourlyStateBatchSolver
         return null;
     }
 
+    /// <summary>The Newton solve of <see cref="Solver{TV}"/>, eight hours to a vector when <paramref name="wide"/>, else four.</summary>
+    private static void Solve(ReadOnlySpan<double> t, ReadOnlySpan<double> w, ReadOnlySpan<double> p, ReadOnlySpan<double> dew, Side side,
+        Span<double> x, Span<byte> outcome, bool wide)
+    {
+        if (wide)
+        {
+            Solver<Lanes8>.Solve(t, w, p, dew, side, x, outcome);
+        }
+        else
+        {
+            Solver<Lanes4>.Solve(t, w, p, dew, side, x, outcome);
+        }
+    }
+
     /// <summary>The side of 0 C a solve looks on: where the root is unique (either), or over water only.</summary>
     private enum Side
     {
@@ -338,46 +350,10 @@ internal static class HourlyStateBatchSolver
         public const byte Converged = 0, NotConverged = 1, TwoRoots = 2;
     }
 
-    /// <summary>Where each quantity of a block's four lanes lies in the solver's state, in doubles from the block's start.</summary>
+    /// <summary>Where each quantity of a block's lanes lies in the solver's state, in vectors from the block's start.</summary>
     private static class Slot
     {
-        public const int Low = 0, High = 4, Liquid = 8, Converged = 12, TwoRoots = 16, Size = 20;
-    }
-
-    /// <summary>
-    /// Newton steps over all blocks of four hours: each step is taken for every unfinished block before the next step,
-    /// so that the processor works on many independent blocks at once rather than waiting on one block's chain of exp,
-    /// log and divisions. The last few hours are padded with copies of the last one.
-    /// </summary>
-    private static void Solve(ReadOnlySpan<double> t, ReadOnlySpan<double> w, ReadOnlySpan<double> p, ReadOnlySpan<double> dew, Side side,
-        Span<double> x, Span<byte> outcome)
-    {
-        int n = t.Length;
-        int full = n / Width;
-        if (full > 0)
-        {
-            SolveBlocks(
-                new Inputs(ref MemoryMarshal.GetReference(t), ref MemoryMarshal.GetReference(w), ref MemoryMarshal.GetReference(p), ref MemoryMarshal.GetReference(dew)),
-                full, side, ref MemoryMarshal.GetReference(x), outcome);
-        }
-
-        int rest = n - full * Width;
-        if (rest > 0)
-        {
-            int at = full * Width;
-            Span<double> padded = stackalloc double[5 * Width];
-            Span<double> pt = padded[..4], pw = padded[4..8], pp = padded[8..12], pd = padded[12..16], px = padded[16..];
-            Pad(t[at..], pt);
-            Pad(w[at..], pw);
-            Pad(p[at..], pp);
-            Pad(dew[at..], pd);
-            Span<byte> last = stackalloc byte[Width];
-            SolveBlocks(
-                new Inputs(ref MemoryMarshal.GetReference(pt), ref MemoryMarshal.GetReference(pw), ref MemoryMarshal.GetReference(pp), ref MemoryMarshal.GetReference(pd)),
-                1, side, ref MemoryMarshal.GetReference(px), last);
-            px[..rest].CopyTo(x[at..]);
-            last[..rest].CopyTo(outcome[at..]);
-        }
+        public const int Low = 0, High = 1, Liquid = 2, Converged = 3, TwoRoots = 4, Size = 5;
     }
 
     /// <summary>The input columns of a solve, from their first hour.</summary>
@@ -389,231 +365,332 @@ internal static class HourlyStateBatchSolver
         public readonly ref double Dew = ref dew;
     }
 
-    private static void SolveBlocks(Inputs input, int blocks, Side side, ref double x, Span<byte> outcome)
+    /// <summary>The vector solve, written once for either width of <see cref="ILanes{TSelf}"/>.</summary>
+    private static class Solver<TV>
+        where TV : struct, ILanes<TV>
     {
-        double[] state = System.Buffers.ArrayPool<double>.Shared.Rent(blocks * Slot.Size);
-        int[] active = System.Buffers.ArrayPool<int>.Shared.Rent(blocks);
-        try
+        /// <summary>Hours per vector.</summary>
+        private static int W
         {
-            ref double first = ref MemoryMarshal.GetArrayDataReference(state);
-            int count = 0;
-            for (int b = 0; b < blocks; b++)
+            [MethodImpl(MethodImplOptions.AggressiveInlining)]
+            get => TV.Count;
+        }
+
+        private static uint AllLanes
+        {
+            [MethodImpl(MethodImplOptions.AggressiveInlining)]
+            get => (1u << TV.Count) - 1;
+        }
+
+        /// <summary>See <see cref="HourlyStateBatchSolver.VapourPressures(ReadOnlySpan{double}, Span{double})"/>.</summary>
+        public static void VapourPressures(ReadOnlySpan<double> temperatureC, Span<double> result)
+        {
+            int n = temperatureC.Length;
+            int i = 0;
+            for (; i + W <= n; i += W)
             {
-                if (StartBlock(input, b * Width, side, ref x, ref Unsafe.Add(ref first, b * Slot.Size)))
-                {
-                    active[count++] = b;
-                }
+                VapourPressureBlock(temperatureC.Slice(i, W), result.Slice(i, W));
             }
 
-            for (int step = 0; step < MaxNewtonSteps && count > 0; step++)
+            if (i < n)
             {
-                int still = 0;
-                for (int k = 0; k < count; k++)
+                Span<double> padded = stackalloc double[2 * MaxWidth];
+                Pad(temperatureC[i..], padded[..W]);
+                VapourPressureBlock(padded[..W], padded[W..(2 * W)]);
+                padded.Slice(W, n - i).CopyTo(result[i..]);
+            }
+        }
+
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static void VapourPressureBlock(ReadOnlySpan<double> temperatureC, Span<double> result)
+        {
+            var t = TV.Load(temperatureC);
+            TV.Exp(LnVapourPressure(t)).Store(result);
+            var outside = ~(TV.GreaterThanOrEqual(t, TV.Create(Saturation.MinTemperatureC)) & TV.LessThanOrEqual(t, TV.Create(Saturation.MaxTemperatureC)));
+            if (outside.Mask() != 0)
+            {
+                // The scalar function raises the error the caller expects.
+                for (int k = 0; k < W; k++)
                 {
-                    int b = active[k];
-                    if (StepBlock(input, b * Width, ref x, ref Unsafe.Add(ref first, b * Slot.Size)))
+                    result[k] = Saturation.VapourPressurePa(temperatureC[k]);
+                }
+            }
+        }
+
+        /// <summary>
+        /// Newton steps over all blocks of <see cref="ILanes{TSelf}.Count"/> hours: each step is taken for every unfinished block before the next step,
+        /// so that the processor works on many independent blocks at once rather than waiting on one block's chain of exp,
+        /// log and divisions. The last few hours are padded with copies of the last one.
+        /// </summary>
+        public static void Solve(ReadOnlySpan<double> t, ReadOnlySpan<double> w, ReadOnlySpan<double> p, ReadOnlySpan<double> dew, Side side,
+            Span<double> x, Span<byte> outcome)
+        {
+            int n = t.Length;
+            int full = n / W;
+            if (full > 0)
+            {
+                SolveBlocks(
+                    new Inputs(ref MemoryMarshal.GetReference(t), ref MemoryMarshal.GetReference(w), ref MemoryMarshal.GetReference(p), ref MemoryMarshal.GetReference(dew)),
+                    full, side, ref MemoryMarshal.GetReference(x), outcome);
+            }
+
+            int rest = n - full * W;
+            if (rest > 0)
+            {
+                int at = full * W;
+                Span<double> padded = stackalloc double[5 * MaxWidth];
+                Span<double> pt = padded[..W], pw = padded[W..(2 * W)], pp = padded[(2 * W)..(3 * W)], pd = padded[(3 * W)..(4 * W)], px = padded[(4 * W)..(5 * W)];
+                Pad(t[at..], pt);
+                Pad(w[at..], pw);
+                Pad(p[at..], pp);
+                Pad(dew[at..], pd);
+                Span<byte> last = stackalloc byte[MaxWidth];
+                SolveBlocks(
+                    new Inputs(ref MemoryMarshal.GetReference(pt), ref MemoryMarshal.GetReference(pw), ref MemoryMarshal.GetReference(pp), ref MemoryMarshal.GetReference(pd)),
+                    1, side, ref MemoryMarshal.GetReference(px), last);
+                px[..rest].CopyTo(x[at..]);
+                last[..rest].CopyTo(outcome[at..]);
+            }
+        }
+
+        private static void SolveBlocks(Inputs input, int blocks, Side side, ref double x, Span<byte> outcome)
+        {
+            double[] state = System.Buffers.ArrayPool<double>.Shared.Rent(blocks * Slot.Size * W);
+            int[] active = System.Buffers.ArrayPool<int>.Shared.Rent(blocks);
+            try
+            {
+                ref double first = ref MemoryMarshal.GetArrayDataReference(state);
+                int count = 0;
+                for (int b = 0; b < blocks; b++)
+                {
+                    if (StartBlock(input, b * W, side, ref x, ref Unsafe.Add(ref first, b * Slot.Size * W)))
                     {
-                        active[still++] = b;
+                        active[count++] = b;
                     }
                 }
 
-                count = still;
-            }
-
-            for (int b = 0; b < blocks; b++)
-            {
-                for (int k = 0; k < Width; k++)
+                for (int step = 0; step < MaxNewtonSteps && count > 0; step++)
                 {
-                    int i = b * Width + k;
-                    outcome[i] = state[b * Slot.Size + Slot.Converged + k] == 0.0 ? Outcome.NotConverged
-                        : state[b * Slot.Size + Slot.TwoRoots + k] != 0.0 ? Outcome.TwoRoots : Outcome.Converged;
+                    int still = 0;
+                    for (int k = 0; k < count; k++)
+                    {
+                        int b = active[k];
+                        if (StepBlock(input, b * W, ref x, ref Unsafe.Add(ref first, b * Slot.Size * W)))
+                        {
+                            active[still++] = b;
+                        }
+                    }
+
+                    count = still;
+                }
+
+                for (int b = 0; b < blocks; b++)
+                {
+                    for (int k = 0; k < W; k++)
+                    {
+                        int i = b * W + k;
+                        outcome[i] = state[((b * Slot.Size) + Slot.Converged) * W + k] == 0.0 ? Outcome.NotConverged
+                            : state[((b * Slot.Size) + Slot.TwoRoots) * W + k] != 0.0 ? Outcome.TwoRoots : Outcome.Converged;
+                    }
                 }
             }
+            finally
+            {
+                System.Buffers.ArrayPool<double>.Shared.Return(state);
+                System.Buffers.ArrayPool<int>.Shared.Return(active);
+            }
         }
-        finally
+
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV Load(ref double column, int at) => TV.Load(ref column, (nuint)at);
+
+        /// <summary>
+        /// Sets up the block of hours from <paramref name="at"/>: the side of 0 C and bracket of each lane and the first
+        /// guess; saturated lanes are settled at their dry-bulb, and lanes with a root on each side of 0 C (when looking on
+        /// either side) are marked. Returns whether any lane needs Newton steps.
+        /// </summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static bool StartBlock(Inputs input, int at, Side side, ref double xColumn, ref double block)
         {
-            System.Buffers.ArrayPool<double>.Shared.Return(state);
-            System.Buffers.ArrayPool<int>.Shared.Return(active);
+            var t = Load(ref input.T, at);
+            var w = Load(ref input.W, at);
+            var p = Load(ref input.P, at);
+            var zero = TV.Zero;
+            var low = TV.Min(Load(ref input.Dew, at), t);
+
+            // Saturated (to rounding): the wet-bulb is the dry-bulb.
+            var saturated = TV.LessThan(t - low, TV.Create(1e-9));
+
+            // Which equation each lane solves. Eqs. 33 and 35 do not meet exactly at 0 C, so where the bracket
+            // [dew point, dry-bulb] straddles 0 C the signs of both at 0 C say on which side the root lies; when they
+            // differ there is a root on each side (or none but the jump at 0 C).
+            var ws0 = TV.Create(MoistAir.MolecularMassRatio * IcePointPressure) / (p - TV.Create(IcePointPressure));
+            var gIce0 = (TV.Create(2830.0) * ws0 - TV.Create(1.006) * t) / (TV.Create(2830.0) + TV.Create(1.86) * t) - w;
+            var gLiquid0 = (TV.Create(2501.0) * ws0 - TV.Create(1.006) * t) / (TV.Create(2501.0) + TV.Create(1.86) * t) - w;
+            var straddles = TV.LessThan(low, zero) & TV.GreaterThan(t, zero);
+            var iceAbove = TV.GreaterThanOrEqual(gIce0, zero);
+            var liquidAbove = TV.GreaterThanOrEqual(gLiquid0, zero);
+            var twoRoots = straddles & (iceAbove ^ liquidAbove);
+            var liquid = side == Side.Water
+                ? TV.AllBitsSet
+                : TV.GreaterThanOrEqual(low, zero) | (straddles & ~iceAbove & ~liquidAbove);
+            if (side == Side.Water)
+            {
+                twoRoots = zero;
+            }
+
+            // The bracket of the chosen side.
+            var lo = TV.Select(liquid, TV.Max(low, zero), low);
+            var hi = TV.Select(liquid, t, TV.Min(t, zero));
+
+            // First guess: F(t*) = (a - b t*) W_s(t*) - 1.006 (t - t*) - W (a + 1.86 t - c t*), eq. 33 or 35 times its
+            // denominator, expanded to second order about the dew point, where W_s = W and its derivatives need no exp
+            // (p_ws there is the vapour pressure, eq. 20 inverted); the root of that quadratic, within a few hundredths of
+            // a kelvin of the root of F, is x = t_dew + u with u = -2F / (F' + sqrt(F'^2 - 2 F F'')).
+            var (a, b, c) = Coefficients(liquid);
+            var m = TV.Create(MoistAir.MolecularMassRatio);
+            var cp = TV.Create(1.006);
+            var pw = p * w / (m + w);
+            var slope1 = LnVapourPressureDerivatives(low, out var slope2);
+            var invGap = TV.One / (p - pw);
+            var dpws = pw * slope1;
+            var ws1 = m * p * dpws * invGap * invGap;
+            var ws2 = m * p * (pw * (slope1 * slope1 + slope2) + TV.Create(2.0) * dpws * dpws * invGap) * invGap * invGap;
+            var f = -(b * low * w) - cp * (t - low) - w * (TV.Create(1.86) * t - c * low);
+            var f1 = -(b * w) + (a - b * low) * ws1 + cp + c * w;
+            var f2 = TV.Create(-2.0) * b * ws1 + (a - b * low) * ws2;
+            var u = TV.Create(-2.0) * f / (f1 + TV.Sqrt(TV.Max(f1 * f1 - TV.Create(2.0) * f * f2, zero)));
+            var x = TV.Min(TV.Max(low + u, lo), hi);
+
+            // Saturated: the dry-bulb. Two roots: this pass finds the one over ice, and the lane is marked for the caller.
+            var settled = saturated;
+            TV.Select(saturated, t, x).Store(ref xColumn, (nuint)at);
+            (twoRoots & ~saturated).Store(ref block, (nuint)(W * Slot.TwoRoots));
+            lo.Store(ref block, (nuint)(W * Slot.Low));
+            hi.Store(ref block, (nuint)(W * Slot.High));
+            liquid.Store(ref block, (nuint)(W * Slot.Liquid));
+            settled.Store(ref block, (nuint)(W * Slot.Converged));
+            return settled.Mask() != AllLanes;
         }
-    }
 
-    private static Vector256<double> Load(ref double column, int at) => Vector256.LoadUnsafe(ref column, (nuint)at);
-
-    /// <summary>
-    /// Sets up the block of hours from <paramref name="at"/>: the side of 0 C and bracket of each lane and the first
-    /// guess; saturated lanes are settled at their dry-bulb, and lanes with a root on each side of 0 C (when looking on
-    /// either side) are marked. Returns whether any lane needs Newton steps.
-    /// </summary>
-    private static bool StartBlock(Inputs input, int at, Side side, ref double xColumn, ref double block)
-    {
-        var t = Load(ref input.T, at);
-        var w = Load(ref input.W, at);
-        var p = Load(ref input.P, at);
-        var zero = Vector256<double>.Zero;
-        var low = Vector256.Min(Load(ref input.Dew, at), t);
-
-        // Saturated (to rounding): the wet-bulb is the dry-bulb.
-        var saturated = Vector256.LessThan(t - low, Vector256.Create(1e-9));
-
-        // Which equation each lane solves. Eqs. 33 and 35 do not meet exactly at 0 C, so where the bracket
-        // [dew point, dry-bulb] straddles 0 C the signs of both at 0 C say on which side the root lies; when they
-        // differ there is a root on each side (or none but the jump at 0 C).
-        var ws0 = Vector256.Create(MoistAir.MolecularMassRatio * IcePointPressure) / (p - Vector256.Create(IcePointPressure));
-        var gIce0 = (Vector256.Create(2830.0) * ws0 - Vector256.Create(1.006) * t) / (Vector256.Create(2830.0) + Vector256.Create(1.86) * t) - w;
-        var gLiquid0 = (Vector256.Create(2501.0) * ws0 - Vector256.Create(1.006) * t) / (Vector256.Create(2501.0) + Vector256.Create(1.86) * t) - w;
-        var straddles = Vector256.LessThan(low, zero) & Vector256.GreaterThan(t, zero);
-        var iceAbove = Vector256.GreaterThanOrEqual(gIce0, zero);
-        var liquidAbove = Vector256.GreaterThanOrEqual(gLiquid0, zero);
-        var twoRoots = straddles & (iceAbove ^ liquidAbove);
-        var liquid = side == Side.Water
-            ? Vector256<double>.AllBitsSet
-            : Vector256.GreaterThanOrEqual(low, zero) | (straddles & ~iceAbove & ~liquidAbove);
-        if (side == Side.Water)
+        /// <summary>One Newton step on the lanes of a block not yet converged; returns whether any lane is still unconverged.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static bool StepBlock(Inputs input, int at, ref double xColumn, ref double block)
         {
-            twoRoots = zero;
+            var x = Load(ref xColumn, at);
+            var converged = TV.Load(ref block, (nuint)(W * Slot.Converged));
+            var (a, b, c) = Coefficients(TV.Load(ref block, (nuint)(W * Slot.Liquid)));
+            var next = x - WetBulbNewtonStep(x, Load(ref input.T, at), Load(ref input.P, at), Load(ref input.W, at), a, b, c);
+            next = TV.Min(TV.Max(next, TV.Load(ref block, (nuint)(W * Slot.Low))), TV.Load(ref block, (nuint)(W * Slot.High)));
+            var shortStep = TV.LessThan(TV.Abs(next - x), TV.Create(StepTolerance));
+            TV.Select(converged, x, next).Store(ref xColumn, (nuint)at);
+            converged |= shortStep;
+            converged.Store(ref block, (nuint)(W * Slot.Converged));
+            return converged.Mask() != AllLanes;
         }
 
-        // The bracket of the chosen side.
-        var lo = Vector256.ConditionalSelect(liquid, Vector256.Max(low, zero), low);
-        var hi = Vector256.ConditionalSelect(liquid, t, Vector256.Min(t, zero));
+        /// <summary>The coefficients a, b, c of eq. 33 (2501, 2.326, 4.186: over water) or eq. 35 (2830, 0.24, 2.1: over ice).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static (TV A, TV B, TV C) Coefficients(TV liquid) =>
+            (TV.Select(liquid, TV.Create(2501.0), TV.Create(2830.0)),
+             TV.Select(liquid, TV.Create(2.326), TV.Create(0.24)),
+             TV.Select(liquid, TV.Create(4.186), TV.Create(2.1)));
 
-        // First guess: F(t*) = (a - b t*) W_s(t*) - 1.006 (t - t*) - W (a + 1.86 t - c t*), eq. 33 or 35 times its
-        // denominator, expanded to second order about the dew point, where W_s = W and its derivatives need no exp
-        // (p_ws there is the vapour pressure, eq. 20 inverted); the root of that quadratic, within a few hundredths of
-        // a kelvin of the root of F, is x = t_dew + u with u = -2F / (F' + sqrt(F'^2 - 2 F F'')).
-        var (a, b, c) = Coefficients(liquid);
-        var m = Vector256.Create(MoistAir.MolecularMassRatio);
-        var cp = Vector256.Create(1.006);
-        var pw = p * w / (m + w);
-        var slope1 = LnVapourPressureDerivatives(low, out var slope2);
-        var invGap = Vector256<double>.One / (p - pw);
-        var dpws = pw * slope1;
-        var ws1 = m * p * dpws * invGap * invGap;
-        var ws2 = m * p * (pw * (slope1 * slope1 + slope2) + Vector256.Create(2.0) * dpws * dpws * invGap) * invGap * invGap;
-        var f = -(b * low * w) - cp * (t - low) - w * (Vector256.Create(1.86) * t - c * low);
-        var f1 = -(b * w) + (a - b * low) * ws1 + cp + c * w;
-        var f2 = Vector256.Create(-2.0) * b * ws1 + (a - b * low) * ws2;
-        var u = Vector256.Create(-2.0) * f / (f1 + Vector256.Sqrt(Vector256.Max(f1 * f1 - Vector256.Create(2.0) * f * f2, zero)));
-        var x = Vector256.Min(Vector256.Max(low + u, lo), hi);
+        /// <summary>
+        /// The Newton step (W(t*) - W) / W'(t*) for eq. 33 or 35 (coefficients a, b, c: 2501, 2.326, 4.186 over water; 2830, 0.24,
+        /// 2.1 over ice) with W_s* from eq. 23: with W = n / d, the step is (n - W d) d / (n' d + n c), one division.
+        /// </summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV WetBulbNewtonStep(TV x, TV t, TV p, TV w,
+            TV a, TV b, TV c)
+        {
+            var pws = TV.Exp(LnVapourPressure(x, out var dln));
+            var m = TV.Create(MoistAir.MolecularMassRatio);
+            var invGap = TV.One / (p - pws);
+            var ws = m * pws * invGap;
+            var dws = ws * p * dln * invGap;
+            var cp = TV.Create(1.006);
+            var latent = a - b * x;
+            var numerator = latent * ws - cp * (t - x);
+            var denominator = a + TV.Create(1.86) * t - c * x;
+            var dNumerator = latent * dws - b * ws + cp;
+            return (numerator - w * denominator) * denominator / (dNumerator * denominator + numerator * c);
+        }
 
-        // Saturated: the dry-bulb. Two roots: this pass finds the one over ice, and the lane is marked for the caller.
-        var settled = saturated;
-        Vector256.ConditionalSelect(saturated, t, x).StoreUnsafe(ref xColumn, (nuint)at);
-        (twoRoots & ~saturated).StoreUnsafe(ref block, Slot.TwoRoots);
-        lo.StoreUnsafe(ref block, Slot.Low);
-        hi.StoreUnsafe(ref block, Slot.High);
-        liquid.StoreUnsafe(ref block, Slot.Liquid);
-        settled.StoreUnsafe(ref block, Slot.Converged);
-        return settled.ExtractMostSignificantBits() != AllLanes;
-    }
+        /// <summary>ln p_ws (Pa) at temperatures in C by eq. 5 at or below the triple point and eq. 6 above, as <see cref="Saturation.LnVapourPressure"/>.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV LnVapourPressure(TV temperatureC)
+        {
+            var t = Absolute(temperatureC, out var inv, out var overIce);
+            return Ln(t, inv, overIce);
+        }
 
-    /// <summary>One Newton step on the lanes of a block not yet converged; returns whether any lane is still unconverged.</summary>
-    private static bool StepBlock(Inputs input, int at, ref double xColumn, ref double block)
-    {
-        var x = Load(ref xColumn, at);
-        var converged = Vector256.LoadUnsafe(ref block, Slot.Converged);
-        var (a, b, c) = Coefficients(Vector256.LoadUnsafe(ref block, Slot.Liquid));
-        var next = x - WetBulbNewtonStep(x, Load(ref input.T, at), Load(ref input.P, at), Load(ref input.W, at), a, b, c);
-        next = Vector256.Min(Vector256.Max(next, Vector256.LoadUnsafe(ref block, Slot.Low)), Vector256.LoadUnsafe(ref block, Slot.High));
-        var shortStep = Vector256.LessThan(Vector256.Abs(next - x), Vector256.Create(StepTolerance));
-        Vector256.ConditionalSelect(converged, x, next).StoreUnsafe(ref xColumn, (nuint)at);
-        converged |= shortStep;
-        converged.StoreUnsafe(ref block, Slot.Converged);
-        return converged.ExtractMostSignificantBits() != AllLanes;
-    }
+        /// <summary>ln p_ws (Pa) and its derivative in temperature, 1/K (eqs. 5 and 6 differentiated term by term).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV LnVapourPressure(TV temperatureC, out TV derivative)
+        {
+            var t = Absolute(temperatureC, out var inv, out var overIce);
+            derivative = Slope(t, inv, overIce);
+            return Ln(t, inv, overIce);
+        }
 
-    /// <summary>The coefficients a, b, c of eq. 33 (2501, 2.326, 4.186: over water) or eq. 35 (2830, 0.24, 2.1: over ice).</summary>
-    private static (Vector256<double> A, Vector256<double> B, Vector256<double> C) Coefficients(Vector256<double> liquid) =>
-        (Vector256.ConditionalSelect(liquid, Vector256.Create(2501.0), Vector256.Create(2830.0)),
-         Vector256.ConditionalSelect(liquid, Vector256.Create(2.326), Vector256.Create(0.24)),
-         Vector256.ConditionalSelect(liquid, Vector256.Create(4.186), Vector256.Create(2.1)));
+        /// <summary>First and second derivatives of ln p_ws in temperature, 1/K and 1/K^2, without ln p_ws itself.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV LnVapourPressureDerivatives(TV temperatureC, out TV second)
+        {
+            var t = Absolute(temperatureC, out var inv, out var overIce);
+            second = Curvature(t, inv, overIce);
+            return Slope(t, inv, overIce);
+        }
 
-    /// <summary>
-    /// The Newton step (W(t*) - W) / W'(t*) for eq. 33 or 35 (coefficients a, b, c: 2501, 2.326, 4.186 over water; 2830, 0.24,
-    /// 2.1 over ice) with W_s* from eq. 23: with W = n / d, the step is (n - W d) d / (n' d + n c), one division.
-    /// </summary>
-    private static Vector256<double> WetBulbNewtonStep(Vector256<double> x, Vector256<double> t, Vector256<double> p, Vector256<double> w,
-        Vector256<double> a, Vector256<double> b, Vector256<double> c)
-    {
-        var pws = Vector256.Exp(LnVapourPressure(x, out var dln));
-        var m = Vector256.Create(MoistAir.MolecularMassRatio);
-        var invGap = Vector256<double>.One / (p - pws);
-        var ws = m * pws * invGap;
-        var dws = ws * p * dln * invGap;
-        var cp = Vector256.Create(1.006);
-        var latent = a - b * x;
-        var numerator = latent * ws - cp * (t - x);
-        var denominator = a + Vector256.Create(1.86) * t - c * x;
-        var dNumerator = latent * dws - b * ws + cp;
-        return (numerator - w * denominator) * denominator / (dNumerator * denominator + numerator * c);
-    }
+        /// <summary>Absolute temperature, K, its inverse, and where eq. 5 applies (at or below the triple point; eq. 6 above).</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV Absolute(TV temperatureC, out TV inverse, out TV overIce)
+        {
+            var t = temperatureC + TV.Create(Kelvin);
+            inverse = TV.One / t;
+            overIce = TV.LessThanOrEqual(temperatureC, TV.Create(Saturation.TriplePointC));
+            return t;
+        }
 
-    /// <summary>ln p_ws (Pa) at temperatures in C by eq. 5 at or below the triple point and eq. 6 above, as <see cref="Saturation.LnVapourPressure"/>.</summary>
-    private static Vector256<double> LnVapourPressure(Vector256<double> temperatureC)
-    {
-        var t = Absolute(temperatureC, out var inv, out var overIce);
-        return Ln(t, inv, overIce);
-    }
+        /// <summary>Eqs. 5 and 6 at absolute temperature t (K), with 1/t given.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV Ln(TV t, TV inv, TV overIce)
+        {
+            var lnT = TV.Log(t);
+            var ice = TV.Create(Saturation.C1) * inv + TV.Create(Saturation.C2)
+                + t * (TV.Create(Saturation.C3) + t * (TV.Create(Saturation.C4) + t * (TV.Create(Saturation.C5) + t * TV.Create(Saturation.C6))))
+                + TV.Create(Saturation.C7) * lnT;
+            var water = TV.Create(Saturation.C8) * inv + TV.Create(Saturation.C9)
+                + t * (TV.Create(Saturation.C10) + t * (TV.Create(Saturation.C11) + t * TV.Create(Saturation.C12)))
+                + TV.Create(Saturation.C13) * lnT;
+            return TV.Select(overIce, ice, water);
+        }
 
-    /// <summary>ln p_ws (Pa) and its derivative in temperature, 1/K (eqs. 5 and 6 differentiated term by term).</summary>
-    private static Vector256<double> LnVapourPressure(Vector256<double> temperatureC, out Vector256<double> derivative)
-    {
-        var t = Absolute(temperatureC, out var inv, out var overIce);
-        derivative = Slope(t, inv, overIce);
-        return Ln(t, inv, overIce);
-    }
+        /// <summary>Eqs. 5 and 6 differentiated once in t.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV Slope(TV t, TV inv, TV overIce)
+        {
+            var ice = -TV.Create(Saturation.C1) * inv * inv + TV.Create(Saturation.C3)
+                + t * (TV.Create(2 * Saturation.C4) + t * (TV.Create(3 * Saturation.C5) + t * TV.Create(4 * Saturation.C6)))
+                + TV.Create(Saturation.C7) * inv;
+            var water = -TV.Create(Saturation.C8) * inv * inv + TV.Create(Saturation.C10)
+                + t * (TV.Create(2 * Saturation.C11) + t * TV.Create(3 * Saturation.C12))
+                + TV.Create(Saturation.C13) * inv;
+            return TV.Select(overIce, ice, water);
+        }
 
-    /// <summary>First and second derivatives of ln p_ws in temperature, 1/K and 1/K^2, without ln p_ws itself.</summary>
-    private static Vector256<double> LnVapourPressureDerivatives(Vector256<double> temperatureC, out Vector256<double> second)
-    {
-        var t = Absolute(temperatureC, out var inv, out var overIce);
-        second = Curvature(t, inv, overIce);
-        return Slope(t, inv, overIce);
-    }
-
-    /// <summary>Absolute temperature, K, its inverse, and where eq. 5 applies (at or below the triple point; eq. 6 above).</summary>
-    private static Vector256<double> Absolute(Vector256<double> temperatureC, out Vector256<double> inverse, out Vector256<double> overIce)
-    {
-        var t = temperatureC + Vector256.Create(Kelvin);
-        inverse = Vector256<double>.One / t;
-        overIce = Vector256.LessThanOrEqual(temperatureC, Vector256.Create(Saturation.TriplePointC));
-        return t;
-    }
-
-    /// <summary>Eqs. 5 and 6 at absolute temperature t (K), with 1/t given.</summary>
-    private static Vector256<double> Ln(Vector256<double> t, Vector256<double> inv, Vector256<double> overIce)
-    {
-        var lnT = Vector256.Log(t);
-        var ice = Vector256.Create(Saturation.C1) * inv + Vector256.Create(Saturation.C2)
-            + t * (Vector256.Create(Saturation.C3) + t * (Vector256.Create(Saturation.C4) + t * (Vector256.Create(Saturation.C5) + t * Vector256.Create(Saturation.C6))))
-            + Vector256.Create(Saturation.C7) * lnT;
-        var water = Vector256.Create(Saturation.C8) * inv + Vector256.Create(Saturation.C9)
-            + t * (Vector256.Create(Saturation.C10) + t * (Vector256.Create(Saturation.C11) + t * Vector256.Create(Saturation.C12)))
-            + Vector256.Create(Saturation.C13) * lnT;
-        return Vector256.ConditionalSelect(overIce, ice, water);
-    }
-
-    /// <summary>Eqs. 5 and 6 differentiated once in t.</summary>
-    private static Vector256<double> Slope(Vector256<double> t, Vector256<double> inv, Vector256<double> overIce)
-    {
-        var ice = -Vector256.Create(Saturation.C1) * inv * inv + Vector256.Create(Saturation.C3)
-            + t * (Vector256.Create(2 * Saturation.C4) + t * (Vector256.Create(3 * Saturation.C5) + t * Vector256.Create(4 * Saturation.C6)))
-            + Vector256.Create(Saturation.C7) * inv;
-        var water = -Vector256.Create(Saturation.C8) * inv * inv + Vector256.Create(Saturation.C10)
-            + t * (Vector256.Create(2 * Saturation.C11) + t * Vector256.Create(3 * Saturation.C12))
-            + Vector256.Create(Saturation.C13) * inv;
-        return Vector256.ConditionalSelect(overIce, ice, water);
-    }
-
-    /// <summary>Eqs. 5 and 6 differentiated twice in t.</summary>
-    private static Vector256<double> Curvature(Vector256<double> t, Vector256<double> inv, Vector256<double> overIce)
-    {
-        var inv2 = inv * inv;
-        var ice = Vector256.Create(2 * Saturation.C1) * inv2 * inv + Vector256.Create(2 * Saturation.C4)
-            + t * (Vector256.Create(6 * Saturation.C5) + t * Vector256.Create(12 * Saturation.C6)) - Vector256.Create(Saturation.C7) * inv2;
-        var water = Vector256.Create(2 * Saturation.C8) * inv2 * inv + Vector256.Create(2 * Saturation.C11)
-            + t * Vector256.Create(6 * Saturation.C12) - Vector256.Create(Saturation.C13) * inv2;
-        return Vector256.ConditionalSelect(overIce, ice, water);
+        /// <summary>Eqs. 5 and 6 differentiated twice in t.</summary>
+        [MethodImpl(MethodImplOptions.AggressiveInlining)]
+        private static TV Curvature(TV t, TV inv, TV overIce)
+        {
+            var inv2 = inv * inv;
+            var ice = TV.Create(2 * Saturation.C1) * inv2 * inv + TV.Create(2 * Saturation.C4)
+                + t * (TV.Create(6 * Saturation.C5) + t * TV.Create(12 * Saturation.C6)) - TV.Create(Saturation.C7) * inv2;
+            var water = TV.Create(2 * Saturation.C8) * inv2 * inv + TV.Create(2 * Saturation.C11)
+                + t * TV.Create(6 * Saturation.C12) - TV.Create(Saturation.C13) * inv2;
+            return TV.Select(overIce, ice, water);
+        }
     }
 
     /// <summary>Copies the values and fills the rest of the block with the last of them.</summary>
