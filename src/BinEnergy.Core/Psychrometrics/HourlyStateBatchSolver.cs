@@ -523,13 +523,17 @@ internal static class HourlyStateBatchSolver
 
             // Which equation each lane solves. Eqs. 33 and 35 do not meet exactly at 0 C, so where the bracket
             // [dew point, dry-bulb] straddles 0 C the signs of both at 0 C say on which side the root lies; when they
-            // differ there is a root on each side (or none but the jump at 0 C).
-            var ws0 = TV.Create(MoistAir.MolecularMassRatio * IcePointPressure) / (p - TV.Create(IcePointPressure));
-            var gIce0 = (TV.Create(2830.0) * ws0 - TV.Create(1.006) * t) / (TV.Create(2830.0) + TV.Create(1.86) * t) - w;
-            var gLiquid0 = (TV.Create(2501.0) * ws0 - TV.Create(1.006) * t) / (TV.Create(2501.0) + TV.Create(1.86) * t) - w;
+            // differ there is a root on each side (or none but the jump at 0 C). The sign of W(0 C) - W with
+            // W(0 C) = (a W_s0 - 1.006 t) / (a + 1.86 t) and W_s0 = 0.621945 p_ws0 / (p - p_ws0) (eq. 23) is that of
+            // a 0.621945 p_ws0 - (1.006 t + W (a + 1.86 t)) (p - p_ws0): both denominators are positive, so no division.
+            var icePoint = TV.Create(IcePointPressure);
+            var gap0 = p - icePoint;
+            var heat = TV.Create(1.006) * t;
+            var wetSlope = TV.Create(1.86) * t;
+            var mPws0 = TV.Create(MoistAir.MolecularMassRatio * IcePointPressure);
             var straddles = TV.LessThan(low, zero) & TV.GreaterThan(t, zero);
-            var iceAbove = TV.GreaterThanOrEqual(gIce0, zero);
-            var liquidAbove = TV.GreaterThanOrEqual(gLiquid0, zero);
+            var iceAbove = TV.GreaterThanOrEqual(TV.Create(2830.0) * mPws0 - (heat + w * (TV.Create(2830.0) + wetSlope)) * gap0, zero);
+            var liquidAbove = TV.GreaterThanOrEqual(TV.Create(2501.0) * mPws0 - (heat + w * (TV.Create(2501.0) + wetSlope)) * gap0, zero);
             var twoRoots = straddles & (iceAbove ^ liquidAbove);
             var liquid = side == Side.Water
                 ? TV.AllBitsSet
@@ -598,23 +602,22 @@ internal static class HourlyStateBatchSolver
 
         /// <summary>
         /// The Newton step (W(t*) - W) / W'(t*) for eq. 33 or 35 (coefficients a, b, c: 2501, 2.326, 4.186 over water; 2830, 0.24,
-        /// 2.1 over ice) with W_s* from eq. 23: with W = n / d, the step is (n - W d) d / (n' d + n c), one division.
+        /// 2.1 over ice) with W_s* = 0.621945 p_ws / g, g = p - p_ws (eq. 23). With W = n / d the step is (n - W d) d / (n' d + n c);
+        /// written with n = N / g and n' = M / g^2 it is (N - W d g) d g / (M d + N c g), one division.
         /// </summary>
         [MethodImpl(MethodImplOptions.AggressiveInlining)]
         private static TV WetBulbNewtonStep(TV x, TV t, TV p, TV w,
             TV a, TV b, TV c)
         {
             var pws = TV.Exp(LnVapourPressure(x, out var dln));
-            var m = TV.Create(MoistAir.MolecularMassRatio);
-            var invGap = TV.One / (p - pws);
-            var ws = m * pws * invGap;
-            var dws = ws * p * dln * invGap;
+            var mPws = TV.Create(MoistAir.MolecularMassRatio) * pws;
+            var g = p - pws;
             var cp = TV.Create(1.006);
             var latent = a - b * x;
-            var numerator = latent * ws - cp * (t - x);
-            var denominator = a + TV.Create(1.86) * t - c * x;
-            var dNumerator = latent * dws - b * ws + cp;
-            return (numerator - w * denominator) * denominator / (dNumerator * denominator + numerator * c);
+            var n = latent * mPws - cp * (t - x) * g; // the numerator times g
+            var d = a + TV.Create(1.86) * t - c * x;
+            var dn = latent * mPws * p * dln - b * mPws * g + cp * g * g; // its derivative times g^2
+            return (n - w * d * g) * d * g / (dn * d + n * c * g);
         }
 
         /// <summary>ln p_ws (Pa) at temperatures in C by eq. 5 at or below the triple point and eq. 6 above, as <see cref="Saturation.LnVapourPressure"/>.</summary>
