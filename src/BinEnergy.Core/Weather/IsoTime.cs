@@ -98,9 +98,10 @@ internal static class IsoTime
     }
 
     /// <summary>
-    /// Reads the times of a file in turn, remembering the last day read: an hour's file has 24 rows a day, and a time
-    /// whose date bytes are those of the day before needs only its time of day read. The results are those of
-    /// <see cref="IsoTime.TryParse"/> for every text, in any order.
+    /// Reads the times of a file in turn, remembering the last day read and the time expected next: an hour's file has
+    /// 24 rows a day, each an hour after the one before. A text equal to the expected next one (same date, the hour one
+    /// more, the same minutes) is that time without being read; a text with the date bytes of the last day needs only
+    /// its time of day read. The results are those of <see cref="IsoTime.TryParse"/> for every text, in any order.
     /// </summary>
     internal struct Reader
     {
@@ -108,18 +109,32 @@ internal static class IsoTime
         private ushort dayTail; // its last two, "dd"
         private long dayTicks; // midnight starting that day; 0 (0001-01-01) before a day is remembered
         private int dayYear;
+        private ulong nextTail; // bytes 8 to 15 of the text expected next, "ddTHH:mm", when hasNext
+        private long nextTicks;
+        private bool hasNext;
 
         /// <summary>As <see cref="IsoTime.TryParse"/>.</summary>
         public bool TryParse(ReadOnlySpan<byte> s, out DateTime value, out int writtenYear)
         {
+            if (hasNext && s.Length == 16 && MemoryMarshal.Read<ulong>(s[8..]) == nextTail && MemoryMarshal.Read<ulong>(s) == dayHead)
+            {
+                // The expected text, byte for byte: the same day (the date's last two bytes are in the tail), one hour on.
+                value = new DateTime(nextTicks);
+                writtenYear = dayYear;
+                Expect(s, value);
+                return true;
+            }
+
             if (dayYear > 0 && s.Length is 16 or 19 && MemoryMarshal.Read<ulong>(s) == dayHead && MemoryMarshal.Read<ushort>(s[8..]) == dayTail
                 && TimeOfDay(s, out int hour, out long clock) && hour < 24)
             {
                 value = new DateTime(dayTicks + clock);
                 writtenYear = dayYear;
+                Expect(s, value);
                 return true;
             }
 
+            hasNext = false;
             if (!IsoTime.TryParse(s, out value, out writtenYear))
             {
                 return false;
@@ -132,9 +147,25 @@ internal static class IsoTime
                 dayTail = MemoryMarshal.Read<ushort>(s[8..]);
                 dayTicks = value.Date.Ticks;
                 dayYear = writtenYear;
+                Expect(s, value);
             }
 
             return true;
+        }
+
+        /// <summary>After <paramref name="s"/> read as <paramref name="value"/> on the remembered day: the text an hour later on the same day, if any.</summary>
+        private void Expect(ReadOnlySpan<byte> s, DateTime value)
+        {
+            int hour = ((s[11] - '0') * 10) + (s[12] - '0');
+            hasNext = s.Length == 16 && hour < 23;
+            if (hasNext)
+            {
+                // Little-endian: byte 8 of the text is the lowest byte of the tail, so bytes 11 and 12 (the hour) are bits 24 to 39.
+                int next = hour + 1;
+                ulong digits = ((ulong)('0' + (next / 10)) << 24) | ((ulong)('0' + (next % 10)) << 32);
+                nextTail = (MemoryMarshal.Read<ulong>(s[8..]) & ~(0xFFFFUL << 24)) | digits;
+                nextTicks = value.Ticks + TimeSpan.TicksPerHour;
+            }
         }
     }
 }

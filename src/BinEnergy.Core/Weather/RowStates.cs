@@ -1,3 +1,4 @@
+using System.Runtime.Intrinsics;
 using BinEnergy.Core.Psychrometrics;
 
 namespace BinEnergy.Core.Weather;
@@ -66,9 +67,17 @@ internal sealed class RowStates
             }
 
             var dew = DewPointC.AsSpan(start, n);
-            for (int i = 0; i < n; i++)
+            int i = 0;
+            for (; i + 4 <= n; i += 4)
             {
-                dew[i] = Math.Min(given[i], t[i]);
+                var dryBulb = Vector256.Create(t.Slice(i, 4));
+                var dewPoint = Vector256.Create(given.Slice(i, 4));
+                Vector256.ConditionalSelect(Vector256.GreaterThan(dewPoint, dryBulb), dryBulb, dewPoint).CopyTo(dew.Slice(i, 4));
+            }
+
+            for (; i < n; i++)
+            {
+                dew[i] = given[i] > t[i] ? t[i] : given[i]; // held to the dry-bulb, as the builder holds it
             }
 
             var w = HumidityRatio.AsSpan(start, n);
@@ -107,16 +116,5 @@ internal sealed class RowStates
         }
     }
 
-    private static bool HasMissing(ReadOnlySpan<double> values)
-    {
-        foreach (double v in values)
-        {
-            if (double.IsNaN(v))
-            {
-                return true;
-            }
-        }
-
-        return false;
-    }
+    private static bool HasMissing(ReadOnlySpan<double> values) => WeatherRecordBuilder.IndexOfMissing(values) < values.Length;
 }

@@ -63,17 +63,13 @@ internal static class WeatherRecordBuilder
         }
 
         int n = raw.Count;
-        var shifted = new DateTime[n];
         long shiftTicks = Noon.AddHours(shiftHours).Ticks - Noon.Ticks; // what AddHours adds, whatever the date
-        for (int i = 0; i < n; i++)
-        {
-            shifted[i] = raw.Times[i].AddTicks(shiftTicks);
-        }
+        var shifted = Shift(raw.Times, n, shiftTicks);
 
         bool typical = raw.TypicalYear ?? DetectTypicalYear(shifted, raw.WrittenYears);
         int calendarYear = options.CalendarYear;
         string calendarNote;
-        int[] order;
+        int[]? order; // the rows in the order of their hours; null: file order
         DateTime[] keys;
         if (typical)
         {
@@ -83,7 +79,8 @@ internal static class WeatherRecordBuilder
             }
 
             // Each hour moves to the same month, day and time of day in the calendar year; the move is worked out once a day.
-            keys = new DateTime[n];
+            // The keys take the shifted times' place (each is read before its key is written).
+            keys = shifted;
             var place = new sbyte[n]; // -1: moved to the front of the year, 1: to the back, 0: stays
             int front = 0, back = 0;
             long dayStart = 1, dayEnd = 0, move = 0;
@@ -112,7 +109,7 @@ internal static class WeatherRecordBuilder
                 quality.Warn($"{front + back} hour(s) crossed the year boundary when shifted to hour-beginning local standard time and were moved to the other end of the typical year");
             }
 
-            order = OrderByPlace(place, front + back);
+            order = front + back > 0 ? OrderByPlace(place) : null;
             string start = new DateTime(calendarYear, 1, 1).DayOfWeek.ToString();
             calendarNote = Inv($"typical year (months from different years), keyed on month, day and hour; weekdays from {calendarYear}, a {(DateTime.IsLeapYear(calendarYear) ? "leap" : "non-leap")} year starting on a {start}")
                 + (calendarYear != options.CalendarYear ? Inv($" (the record has a 29 February, so {calendarYear} is used instead of {options.CalendarYear})") : "");
@@ -120,7 +117,7 @@ internal static class WeatherRecordBuilder
         else
         {
             keys = shifted;
-            order = Enumerable.Range(0, n).ToArray();
+            order = null;
             calendarYear = shifted[0].Year;
             calendarNote = shifted[0].Year == shifted[^1].Year
                 ? Inv($"calendar year {calendarYear} as recorded, with its own dates and weekdays")
@@ -133,13 +130,13 @@ internal static class WeatherRecordBuilder
         }
 
         // Order checks and the hourly grid. Rows in file order, one hour apart, are the grid itself; others are placed on it.
-        DateTime first = keys[order[0]];
-        bool inFileOrder = IsIdentity(order) && OneHourApart(keys);
+        DateTime first = keys[order?[0] ?? 0];
+        bool inFileOrder = order is null && OneHourApart(keys);
         var gridIndex = inFileOrder ? null : new int[n];
-        int prev = order[0];
+        int prev = order?[0] ?? 0;
         for (int k = 1; k < n && !inFileOrder; k++)
         {
-            int i = order[k];
+            int i = order?[k] ?? k;
             var step = keys[i] - keys[prev];
             if (step.Ticks == TimeSpan.TicksPerHour)
             {
@@ -176,7 +173,7 @@ internal static class WeatherRecordBuilder
             prev = i;
         }
 
-        int hours = inFileOrder ? n : gridIndex![order[^1]] + 1;
+        int hours = inFileOrder ? n : gridIndex![order?[^1] ?? n - 1] + 1;
         DateTime[] times;
         int[] gridLine;
         var columns = new Dictionary<WeatherQuantity, double[]>();
@@ -602,13 +599,15 @@ internal static class WeatherRecordBuilder
     }
 
     /// <summary>The index of the first missing value (NaN) at or after <paramref name="from"/>, or the length when there is none; four values at a time.</summary>
-    private static int NextMissing(double[] values, int from)
+    private static int NextMissing(double[] values, int from) => from + IndexOfMissing(values.AsSpan(from));
+
+    /// <summary>The index of the first missing value (NaN), or the length when there is none; four values at a time.</summary>
+    internal static int IndexOfMissing(ReadOnlySpan<double> values)
     {
-        int i = from;
-        ref double first = ref System.Runtime.InteropServices.MemoryMarshal.GetArrayDataReference(values);
+        int i = 0;
         for (; i + 4 <= values.Length; i += 4)
         {
-            var v = Vector256.LoadUnsafe(ref first, (nuint)i);
+            var v = Vector256.Create(values.Slice(i, 4));
             if (!Vector256.EqualsAll(v, v))
             {
                 break; // a NaN is the only value not equal to itself
@@ -624,6 +623,46 @@ internal static class WeatherRecordBuilder
         }
 
         return values.Length;
+    }
+
+    /// <summary>
+    /// The first <paramref name="n"/> times moved by <paramref name="ticks"/>: four at a time on their ticks (a DateTime
+    /// with no kind set is its ticks), or one by one through <see cref="DateTime.AddTicks"/> (which raises the error)
+    /// where a time would leave the calendar's range or has a kind set.
+    /// </summary>
+    private static DateTime[] Shift(DateTime[] times, int n, long ticks)
+    {
+        var shifted = GC.AllocateUninitializedArray<DateTime>(n);
+        var from = System.Runtime.InteropServices.MemoryMarshal.Cast<DateTime, long>(times.AsSpan(0, n));
+        var to = System.Runtime.InteropServices.MemoryMarshal.Cast<DateTime, long>(shifted.AsSpan());
+        long low = Math.Max(DateTime.MinValue.Ticks, DateTime.MinValue.Ticks - ticks);
+        long high = Math.Min(DateTime.MaxValue.Ticks, DateTime.MaxValue.Ticks - ticks);
+        var move = Vector256.Create(ticks);
+        bool inRange = true;
+        int i = 0;
+        for (; i + 4 <= n; i += 4)
+        {
+            var t = Vector256.Create(from.Slice(i, 4));
+            inRange &= Vector256.GreaterThanOrEqualAll(t, Vector256.Create(low)) && Vector256.LessThanOrEqualAll(t, Vector256.Create(high));
+            (t + move).CopyTo(to.Slice(i, 4));
+        }
+
+        for (; i < n; i++)
+        {
+            inRange &= from[i] >= low && from[i] <= high;
+            to[i] = from[i] + ticks;
+        }
+
+        if (!inRange)
+        {
+            // Outside the calendar's range, or a time with a kind set (its kind bits put it above the range): one by one.
+            for (int k = 0; k < n; k++)
+            {
+                shifted[k] = times[k].AddTicks(ticks);
+            }
+        }
+
+        return shifted;
     }
 
     /// <summary>Whether each time is one hour after the one before, four at a time.</summary>
@@ -672,34 +711,10 @@ internal static class WeatherRecordBuilder
         return values.Max() - values.Min() < 1e-6;
     }
 
-    /// <summary>Whether the order is 0, 1, 2, ...</summary>
-    private static bool IsIdentity(int[] order)
-    {
-        for (int i = 0; i < order.Length; i++)
-        {
-            if (order[i] != i)
-            {
-                return false;
-            }
-        }
-
-        return true;
-    }
-
-    /// <summary>Row indices in file order, those placed at -1 first and those at 1 last (the identity when <paramref name="moved"/> is 0).</summary>
-    private static int[] OrderByPlace(sbyte[] place, int moved)
+    /// <summary>Row indices in file order, those placed at -1 first and those at 1 last.</summary>
+    private static int[] OrderByPlace(sbyte[] place)
     {
         var order = new int[place.Length];
-        if (moved == 0)
-        {
-            for (int i = 0; i < order.Length; i++)
-            {
-                order[i] = i;
-            }
-
-            return order;
-        }
-
         int k = 0;
         foreach (sbyte wanted in new sbyte[] { -1, 0, 1 })
         {
