@@ -283,7 +283,7 @@ internal static class WeatherRecordBuilder
         var given = columns[primary];
         if (primary == WeatherQuantity.DewPoint)
         {
-            ClampDewPoints(given, dryBulb, dewPoint, gridLine, times, typical, quality);
+            ClampDewPoints(given, dryBulb, dewPoint, held: early is not null, gridLine, times, typical, quality);
         }
 
         for (int i = 0; i < kept && primary != WeatherQuantity.DewPoint; i++)
@@ -371,23 +371,49 @@ internal static class WeatherRecordBuilder
         return weather;
     }
 
-    /// <summary>Dew point given (DESIGN 5.1): clamped to the dry-bulb and counted where above it (5.4).</summary>
-    private static void ClampDewPoints(double[] given, double[] dryBulb, double[] dewPoint, int[] gridLine, DateTime[] times, bool typical, QualityReport quality)
+    /// <summary>
+    /// Dew point given (DESIGN 5.1): clamped to the dry-bulb and counted where above it (5.4). Where <paramref name="held"/>,
+    /// the parser's states already hold the clamped dew points and only the counting is left.
+    /// </summary>
+    private static void ClampDewPoints(double[] given, double[] dryBulb, double[] dewPoint, bool held, int[] gridLine, DateTime[] times, bool typical, QualityReport quality)
     {
-        for (int i = 0; i < dewPoint.Length; i++)
+        if (!held)
+        {
+            given.AsSpan(0, dewPoint.Length).CopyTo(dewPoint);
+        }
+
+        for (int i = 0; (i = NextAbove(given, dryBulb, i)) < dewPoint.Length; i++)
         {
             double t = dryBulb[i];
             double v = given[i];
-            if (v > t)
-            {
-                bool suspect = v - t > DewPointClampToleranceK;
-                quality.Count(suspect ? QualityKeys.DewPointAboveDryBulbSuspect : QualityKeys.DewPointAboveDryBulbClamped,
-                    Inv($"{Where(gridLine[i], times[i], typical)}: dew point {v:0.0##} C above dry-bulb {t:0.0##} C, set to the dry-bulb"));
-                v = t;
-            }
-
-            dewPoint[i] = v;
+            bool suspect = v - t > DewPointClampToleranceK;
+            quality.Count(suspect ? QualityKeys.DewPointAboveDryBulbSuspect : QualityKeys.DewPointAboveDryBulbClamped,
+                Inv($"{Where(gridLine[i], times[i], typical)}: dew point {v:0.0##} C above dry-bulb {t:0.0##} C, set to the dry-bulb"));
+            dewPoint[i] = t;
         }
+    }
+
+    /// <summary>The first index at or after <paramref name="from"/> where the value is above the limit, or the length when none is; four at a time.</summary>
+    private static int NextAbove(double[] values, double[] limits, int from)
+    {
+        int i = from;
+        for (; i + 4 <= values.Length; i += 4)
+        {
+            if (Vector256.GreaterThanAny(Vector256.Create(values.AsSpan(i, 4)), Vector256.Create(limits.AsSpan(i, 4))))
+            {
+                break;
+            }
+        }
+
+        for (; i < values.Length; i++)
+        {
+            if (values[i] > limits[i])
+            {
+                return i;
+            }
+        }
+
+        return values.Length;
     }
 
     /// <summary>The other humidity measures, checked against the one used (DESIGN 5.1): disagreements are counted, not repaired.</summary>
