@@ -61,6 +61,21 @@ public sealed class PiecewiseParseTests
         Assert.Contains($"line {LineOf(8000) + 1}:", split.Quality.Examples[QualityKeys.RhClamped][3], StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void LongFileWithWindowsLineEnds_ReadsAsWithUnixOnes()
+    {
+        // CRLF line ends (a file saved on Windows) and no line end after the last row: the pieces are cut after a
+        // line feed, so every piece starts on a row, and the last row is read without its line end.
+        string text = OpenLayoutText.File(Hours);
+        var unix = Read(text);
+        var windows = Read(text.TrimEnd('\n').Replace("\n", "\r\n", StringComparison.Ordinal));
+        Assert.Equal(Hours, windows.Count);
+        Assert.Equal(unix.Times, windows.Times);
+        Assert.Equal(unix.DryBulbC, windows.DryBulbC);
+        Assert.Equal(unix.WetBulbC, windows.WetBulbC);
+        Assert.Equal(unix.Quality.Counts, windows.Quality.Counts);
+    }
+
     [Theory]
     [InlineData(100)]
     [InlineData(5000)]
