@@ -536,7 +536,7 @@ internal static class WeatherFileParser
             {
                 if (!canGrow)
                 {
-                    throw new InvalidOperationException("more rows than lines in a half of the file");
+                    throw new InvalidOperationException("more rows than lines in a piece of the file");
                 }
 
                 int grown = Math.Max(16, 2 * row);
