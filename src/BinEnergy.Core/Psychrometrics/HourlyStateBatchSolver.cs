@@ -150,6 +150,28 @@ internal static class HourlyStateBatchSolver
         }
     }
 
+    /// <summary>
+    /// The moist-air state of a run of hours (Handbook ch. 1): where <paramref name="humidityFromDewPoint"/>, the humidity
+    /// ratio from the dew point first (eqs. 5, 6 and 20); then the wet-bulb (eqs. 33 and 35), the enthalpy (eq. 32) and,
+    /// unless <paramref name="relativeHumidity"/> is empty, the RH (eq. 12). The reader's one sequence of per-hour work,
+    /// whether the parser or the record builder does it.
+    /// </summary>
+    public static void States(ReadOnlySpan<double> dryBulbC, ReadOnlySpan<double> pressurePa, ReadOnlySpan<double> dewPointC, Span<double> humidityRatio,
+        bool humidityFromDewPoint, Span<double> wetBulbC, Span<double> enthalpyJPerKg, Span<double> relativeHumidity)
+    {
+        if (humidityFromDewPoint)
+        {
+            HumidityRatiosFromDewPoints(dewPointC, pressurePa, humidityRatio);
+        }
+
+        WetBulbs(dryBulbC, humidityRatio, pressurePa, dewPointC, wetBulbC);
+        Enthalpies(dryBulbC, humidityRatio, enthalpyJPerKg);
+        if (!relativeHumidity.IsEmpty)
+        {
+            RelativeHumidities(dryBulbC, humidityRatio, pressurePa, relativeHumidity);
+        }
+    }
+
     /// <summary>Records at least this long are solved in pieces on all cores (where the machine has two cores or more).</summary>
     internal const int ParallelHours = 2048;
 

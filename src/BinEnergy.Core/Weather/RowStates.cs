@@ -80,15 +80,8 @@ internal sealed class RowStates
                 dew[i] = given[i] > t[i] ? t[i] : given[i]; // held to the dry-bulb, as the builder holds it
             }
 
-            var w = HumidityRatio.AsSpan(start, n);
-            HourlyStateBatchSolver.HumidityRatiosFromDewPoints(dew, p, w);
-            HourlyStateBatchSolver.WetBulbs(t, w, p, dew, WetBulbC.AsSpan(start, n));
-            HourlyStateBatchSolver.Enthalpies(t, w, EnthalpyJPerKg.AsSpan(start, n));
-            if (RelativeHumidity is not null)
-            {
-                HourlyStateBatchSolver.RelativeHumidities(t, w, p, RelativeHumidity.AsSpan(start, n));
-            }
-
+            HourlyStateBatchSolver.States(t, p, dew, HumidityRatio.AsSpan(start, n), humidityFromDewPoint: true, WetBulbC.AsSpan(start, n),
+                EnthalpyJPerKg.AsSpan(start, n), RelativeHumidity is null ? [] : RelativeHumidity.AsSpan(start, n));
             return true;
         }
         catch (PsychrometricException)

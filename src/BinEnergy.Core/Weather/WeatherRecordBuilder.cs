@@ -345,23 +345,12 @@ internal static class WeatherRecordBuilder
         var enthalpy = early is not null ? Exactly(early.EnthalpyJPerKg, kept) : new double[kept];
         double[]? relativeHumidity = primary == WeatherQuantity.RelativeHumidity || !columns.ContainsKey(WeatherQuantity.RelativeHumidity) ? null
             : early?.RelativeHumidity is { } solvedRh ? Exactly(solvedRh, kept) : new double[kept];
-        HourlyStateBatchSolver.InPieces(early is not null ? 0 : kept, (start, length) =>
+        if (early is null)
         {
-            var t = dryBulb.AsSpan(start, length);
-            var p = pressure.AsSpan(start, length);
-            var h = w.AsSpan(start, length);
-            if (fromDewPoint)
-            {
-                HourlyStateBatchSolver.HumidityRatiosFromDewPoints(dewPoint.AsSpan(start, length), p, h);
-            }
-
-            HourlyStateBatchSolver.WetBulbs(t, h, p, dewPoint.AsSpan(start, length), wetBulb.AsSpan(start, length));
-            HourlyStateBatchSolver.Enthalpies(t, h, enthalpy.AsSpan(start, length));
-            if (relativeHumidity is not null)
-            {
-                HourlyStateBatchSolver.RelativeHumidities(t, h, p, relativeHumidity.AsSpan(start, length));
-            }
-        });
+            HourlyStateBatchSolver.InPieces(kept, (start, length) => HourlyStateBatchSolver.States(dryBulb.AsSpan(start, length), pressure.AsSpan(start, length),
+                dewPoint.AsSpan(start, length), w.AsSpan(start, length), fromDewPoint, wetBulb.AsSpan(start, length), enthalpy.AsSpan(start, length),
+                relativeHumidity is null ? [] : relativeHumidity.AsSpan(start, length)));
+        }
 
         var weather = new HourlyWeather(site, times, dryBulb, w, pressure, dewPoint, wetBulb, enthalpy, quality, new CalendarInfo(calendarYear, typical, calendarNote))
         {
