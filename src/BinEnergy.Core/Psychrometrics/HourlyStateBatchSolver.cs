@@ -194,24 +194,11 @@ internal static class HourlyStateBatchSolver
 
         int pieces = Math.Min(16, hours / HoursPerPiece);
         int size = (hours + pieces - 1) / pieces / MaxWidth * MaxWidth + MaxWidth; // whole vectors of either width
-        var errors = new Exception?[pieces];
-        Parallel.For(0, pieces, k =>
+        Concurrency.Pieces.Run(pieces, k =>
         {
             int start = Math.Min(hours, k * size);
-            try
-            {
-                work(start, Math.Min(hours, start + size) - start);
-            }
-            catch (Exception e)
-            {
-                errors[k] = e;
-            }
+            work(start, Math.Min(hours, start + size) - start);
         });
-
-        if (Array.Find(errors, e => e is not null) is { } first)
-        {
-            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(first);
-        }
     }
 
     /// <summary>

@@ -403,28 +403,15 @@ internal static class WeatherFileParser
         var ends = new int[pieces];
         var solved = new bool[pieces];
         var tables = new RawWeatherTable[pieces];
-        var mistakes = new WeatherDataException?[pieces];
-        Parallel.For(0, pieces, k =>
+        Concurrency.Pieces.Run(pieces, k =>
         {
             tables[k] = new RawWeatherTable(layout.File, layout.Map, layout.Table.IsOpenLayout);
             var pieceLayout = layout with { Table = tables[k], HeaderLine = layout.HeaderLine + firstRow[k] };
-            try
-            {
-                using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, cuts[k], cuts[k + 1] - cuts[k]), pieceOptions);
-                var (t, y, l) = (times, writtenYears, lines);
-                ends[k] = ReadRows(reader, pieceLayout, ref t, ref y, ref l, columns, firstRow[k], canGrow: false, out _);
-                solved[k] = SolveStates(pieceLayout, columns, firstRow[k], ends[k]);
-            }
-            catch (WeatherDataException e)
-            {
-                mistakes[k] = e;
-            }
+            using var reader = CsvReader.Create(new ReadOnlyMemory<byte>(data, cuts[k], cuts[k + 1] - cuts[k]), pieceOptions);
+            var (t, y, l) = (times, writtenYears, lines);
+            ends[k] = ReadRows(reader, pieceLayout, ref t, ref y, ref l, columns, firstRow[k], canGrow: false, out _);
+            solved[k] = SolveStates(pieceLayout, columns, firstRow[k], ends[k]);
         });
-
-        if (Array.Find(mistakes, e => e is not null) is { } first)
-        {
-            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(first);
-        }
 
         int rows = 0;
         for (int k = 0; k < pieces; k++)
