@@ -43,12 +43,12 @@ public static class CliApp
         }
         catch (CommandParseException e)
         {
-            stderr.WriteLine($"binenergy: {Explain(e.Message)}");
+            stderr.WriteLine($"binenergy: {(Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message))}");
             return ExitCodes.Usage;
         }
         catch (CommandRuntimeException e)
         {
-            stderr.WriteLine($"binenergy: {Explain(e.Message)}");
+            stderr.WriteLine($"binenergy: {(Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message))}");
             return ExitCodes.Usage;
         }
         catch (UsageException e)
@@ -72,6 +72,21 @@ public static class CliApp
             stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
             return ExitCodes.Unexpected;
         }
+    }
+
+    /// <summary>The first exception of type <typeparamref name="T"/> in the chain of <paramref name="e"/>.</summary>
+    private static T? Inner<T>(Exception e)
+        where T : Exception
+    {
+        for (Exception? x = e; x is not null; x = x.InnerException)
+        {
+            if (x is T t)
+            {
+                return t;
+            }
+        }
+
+        return null;
     }
 
     /// <summary>Rewords the parser's type-conversion message into plain language.</summary>

@@ -1,26 +1,33 @@
 using System.ComponentModel;
+using BinEnergy.Cli.Options;
 using BinEnergy.Core.Units;
+using BinEnergy.Reporting.Output;
+using BinEnergy.Reporting.Units;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli;
 
-/// <summary>Options every command takes: the display units and machine-readable output.</summary>
-public class CommonSettings : CommandSettings
+/// <summary>Options every command takes: the display units and the output format.</summary>
+public class CommonSettings : OutputSettings
 {
     [CommandOption("--units <UNITS>")]
     [Description("Display units: ip (F, Btu, cfm) or si (C, kWh, L/s). Default ip.")]
-    [DefaultValue("ip")]
-    public string Units { get; init; } = "ip";
+    [TypeConverter(typeof(UnitSystemChoice))]
+    public UnitSystem Units { get; init; } = UnitSystem.IP;
 
+    /// <summary>The display units of the outputs.</summary>
+    public DisplayUnits DisplayUnits => new(Units);
+}
+
+/// <summary>How a command writes its results: JSON, or text in a format.</summary>
+public class OutputSettings : CommandSettings
+{
     [CommandOption("--json")]
     [Description("Write one JSON object to standard output instead of tables.")]
     public bool Json { get; init; }
 
-    /// <summary>The parsed unit system.</summary>
-    public UnitSystem UnitSystem => Units.ToLowerInvariant() switch
-    {
-        "ip" => UnitSystem.IP,
-        "si" => UnitSystem.SI,
-        _ => throw new UsageException($"--units must be ip or si, not '{Units}'"),
-    };
+    [CommandOption("--format <FORMAT>")]
+    [Description("Text output: table (default), tsv (pastes into a spreadsheet) or markdown.")]
+    [TypeConverter(typeof(TextFormatChoice))]
+    public TextFormat Format { get; init; } = TextFormat.Table;
 }

@@ -2,7 +2,7 @@ using System.ComponentModel;
 using System.Globalization;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Units;
-using Spectre.Console;
+using BinEnergy.Reporting.Documents;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -50,24 +50,16 @@ public sealed class AirCommand : Command<AirCommand.Settings>
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        var units = settings.UnitSystem;
-        var state = BuildState(settings, units, out string pressureSource);
-        var result = AirReport.From(state, units, pressureSource);
-        if (settings.Json)
-        {
-            output.WriteJson(result.ToJson());
-        }
-        else
-        {
-            result.Render(output.Console);
-        }
-
+        var state = BuildState(settings, out string pressureSource);
+        output.Write(AirDocument.Build(state, settings.DisplayUnits, pressureSource), settings);
         return ExitCodes.Ok;
     }
 
     /// <summary>Turns the options into a state, or throws a <see cref="UsageException"/> naming the problem.</summary>
-    internal static AirState BuildState(Settings s, UnitSystem units, out string pressureSource)
+    internal static AirState BuildState(Settings s, out string pressureSource)
     {
+        var units = s.Units;
+        var u = s.DisplayUnits;
         if (s.DryBulb is not double db)
         {
             throw new UsageException("--drybulb is required (F with --units ip, C with --units si)");
@@ -92,9 +84,7 @@ public sealed class AirCommand : Command<AirCommand.Settings>
             pressure = Core.Units.Pressure.From(p, units);
             if (!(pressure.Kilopascals >= 30 && pressure.Kilopascals <= 120))
             {
-                throw new UsageException(units == UnitSystem.IP
-                    ? Inv($"--pressure {p} psia is outside 4.4 to 17.4 psia (30 to 120 kPa)")
-                    : Inv($"--pressure {p} kPa is outside 30 to 120 kPa"));
+                throw new UsageException(Inv($"--pressure {p} {u.Pressure.Symbol} is outside 30 to 120 kPa (4.4 to 17.4 psia)"));
             }
 
             pressureSource = "given";
@@ -104,14 +94,12 @@ public sealed class AirCommand : Command<AirCommand.Settings>
             var elevation = Length.From(s.Elevation ?? 0.0, units);
             if (!(elevation.Feet >= MinElevationFt - 1e-9 && elevation.Feet <= MaxElevationFt + 1e-9))
             {
-                throw new UsageException(units == UnitSystem.IP
-                    ? Inv($"--elevation {s.Elevation} ft is outside -1,000 to 36,000 ft")
-                    : Inv($"--elevation {s.Elevation} m is outside -305 to 10,973 m (-1,000 to 36,000 ft)"));
+                throw new UsageException(Inv($"--elevation {s.Elevation} {u.Length.Symbol} is outside -1,000 to 36,000 ft (-305 to 10,973 m)"));
             }
 
             pressure = Atmosphere.PressureAt(elevation);
             pressureSource = s.Elevation.HasValue
-                ? Inv($"standard atmosphere at {s.Elevation:0.#} {(units == UnitSystem.IP ? "ft" : "m")}")
+                ? Inv($"standard atmosphere at {s.Elevation:0.#} {u.Length.Symbol}")
                 : "standard atmosphere at sea level";
         }
 

@@ -1,9 +1,9 @@
 using System.ComponentModel;
 using System.Globalization;
+using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Schedules;
-using BinEnergy.Core.Units;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -13,43 +13,43 @@ public class BinOptions : WeatherFileSettings
 {
     [CommandOption("--width <W>")]
     [Description("Dry-bulb bin width (F in ip, K in si). Bins sit on multiples of the width, lower edge inclusive. Default 5 F or 2 C.")]
+    [StudyKey("study", "bin_width", KeyUnit.TemperatureDifference)]
     public double? Width { get; init; }
 
     [CommandOption("--occupied <SCHEDULE>")]
     [Description("Occupied hours, e.g. \"Mon-Fri 07:00-19:00; Sat 08:00-13:00\", \"always\" or \"never\" (whole hours; 'Hol' for holidays). Default always.")]
+    [StudyKey("schedule", "occupied")]
     public string? Occupied { get; init; }
 
     [CommandOption("--holidays <DATES>")]
     [Description("Holiday dates, unoccupied unless the schedule has a 'Hol' clause: comma-separated YYYY-MM-DD (the record's calendar year).")]
+    [StudyKey("schedule", "holidays", List = true)]
     public string? Holidays { get; init; }
+
+    [CommandOption("--csv")]
+    [Description("Write the main table as CSV to standard output (the same column names and units as the study tables).")]
+    public bool Csv { get; init; }
 
     /// <summary>The help text of <c>--bin-point</c>, for the commands that evaluate loads on bins.</summary>
     internal const string BinPointHelp =
         "Where the bin method evaluates each bin: mean (the mean dry-bulb of the bin's hours that count, default) or mid (the bin midpoint, the classic method for bin tables that give hours only).";
 
-    /// <summary>Reads <c>--bin-point</c>: <c>mean</c> or <c>mid</c> (<c>midpoint</c>).</summary>
-    internal static BinEvaluationPoint ParseBinPoint(string text) => text.ToLowerInvariant() switch
+    /// <summary>The help text of <c>--headline</c>.</summary>
+    internal const string HeadlineHelp =
+        "The method of the headline figures: hourly (the sum over the hours, default), joint-bin (dry-bulb x humidity bins) or bin (the classic dry-bulb bin method). Every method is shown.";
+
+    public override Spectre.Console.ValidationResult Validate()
     {
-        "mid" or "midpoint" => BinEvaluationPoint.Midpoint,
-        "mean" => BinEvaluationPoint.MeanDryBulb,
-        _ => throw new UsageException($"--bin-point must be mean or mid, not '{text}'"),
-    };
+        if (Width is double w && !(w >= 0.1 && w <= 50))
+        {
+            return Spectre.Console.ValidationResult.Error(FormattableString.Invariant($"--width {w} must be between 0.1 and 50 degrees of the display unit"));
+        }
+
+        return base.Validate();
+    }
 
     /// <summary>The bin scale the options give.</summary>
-    internal DryBulbBinScale Scale(UnitSystem units)
-    {
-        if (Width is not double w)
-        {
-            return DryBulbBinScale.Default(units);
-        }
-
-        if (!(w >= 0.1 && w <= 50))
-        {
-            throw new UsageException(FormattableString.Invariant($"--width {w} must be between 0.1 and 50 ({(units == UnitSystem.IP ? "F" : "K")})"));
-        }
-
-        return new DryBulbBinScale(w, units);
-    }
+    internal DryBulbBinScale Scale() => Width is double w ? new DryBulbBinScale(w, Units) : DryBulbBinScale.Default(Units);
 
     /// <summary>The occupancy schedule the options give; a syntax error becomes a usage error naming the option.</summary>
     internal OccupancySchedule Schedule()

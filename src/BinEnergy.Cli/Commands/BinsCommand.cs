@@ -1,18 +1,22 @@
 using System.ComponentModel;
+using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Weather;
+using BinEnergy.Reporting.Documents;
+using Spectre.Console;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
-/// <summary><c>binenergy bins</c>: the dry-bulb bin table of a weather file, optionally split or joint with humidity ratio.</summary>
+/// <summary><c>binenergy bins</c>: the dry-bulb bin table of a weather file, optionally split by month or time of day, or joint with humidity.</summary>
 public sealed class BinsCommand : Command<BinsCommand.Settings>
 {
     public sealed class Settings : BinOptions
     {
         [CommandOption("--by <SPLIT>")]
         [Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise).")]
-        public string? By { get; init; }
+        [TypeConverter(typeof(BinSplitChoice))]
+        public BinSplit? By { get; init; }
 
         [CommandOption("--blocks <HOURS>")]
         [Description("Time-of-day block boundaries for --by block, comma-separated whole hours from 0 to 24, e.g. 0,6,12,18,24.")]
@@ -26,88 +30,43 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
         [Description("Humidity-ratio bin width for --joint (gr/lb in ip, g/kg in si). Default 10 gr/lb or 1 g/kg.")]
         public double? HumidityWidth { get; init; }
 
-        [CommandOption("--csv")]
-        [Description("Write the table as CSV to standard output (one row per bin, ascending).")]
-        public bool Csv { get; init; }
+        public override ValidationResult Validate()
+        {
+            if (By is not null && Joint)
+            {
+                return ValidationResult.Error("--by and --joint cannot be combined: choose a split or joint bins");
+            }
+
+            if (Blocks is not null && By != BinSplit.TimeOfDayBlock)
+            {
+                return ValidationResult.Error("--blocks applies to --by block only");
+            }
+
+            if (HumidityWidth is double w && (!Joint || !(w >= 0.01 && w <= 100)))
+            {
+                return ValidationResult.Error(Joint
+                    ? FormattableString.Invariant($"--humidity-width {w} must be between 0.01 and 100 (gr/lb in ip, g/kg in si)")
+                    : "--humidity-width applies to --joint only");
+            }
+
+            return base.Validate();
+        }
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        var units = settings.UnitSystem;
-        if (settings.Csv && settings.Json)
-        {
-            throw new UsageException("give --csv or --json, not both");
-        }
-
-        BinSplit? split = settings.By?.ToLowerInvariant() switch
-        {
-            null => null,
-            "month" => BinSplit.Month,
-            "block" => BinSplit.TimeOfDayBlock,
-            _ => throw new UsageException($"--by must be month or block, not '{settings.By}'"),
-        };
-        if (split is not null && settings.Joint)
-        {
-            throw new UsageException("--by and --joint cannot be combined: choose a split or joint bins");
-        }
-
-        if (settings.Blocks is not null && split != BinSplit.TimeOfDayBlock)
-        {
-            throw new UsageException("--blocks applies to --by block only");
-        }
-
         var blocks = ParseBlocks(settings.Blocks);
-        var scale = settings.Scale(units);
-        var humidityScale = HumidityScale(settings, units);
         var schedule = settings.Schedule();
-        var options = settings.ReadOptions(units);
+        var options = settings.ReadOptions();
 
         // Everything is computed before anything is written: a failure leaves no half-written table.
         var weather = WeatherReader.Read(settings.Weather, options);
-        var flags = schedule.Flags(weather);
-        var table = BinTable.Build(weather, scale, flags);
-        var report = new BinsReport(weather, table, schedule, units, settings.Weather + " (" + (options.Map?.Source ?? "open layout") + ")")
-        {
-            Groups = split is BinSplit s ? table.Split(s, blocks) : null,
-            SplitName = split == BinSplit.Month ? "month" : "block",
-            Joint = settings.Joint ? table.Joint(humidityScale.Width) : null,
-        };
-
-        if (settings.Csv)
-        {
-            output.Out.Write(report.ToCsv());
-        }
-        else if (settings.Json)
-        {
-            output.WriteJson(report.ToJson());
-        }
-        else
-        {
-            report.Render(output.Console);
-        }
-
+        var table = BinTable.Build(weather, settings.Scale(), schedule.Flags(weather));
+        var split = settings.By is BinSplit by ? (by == BinSplit.Month ? "month" : "block", table.Split(by, blocks)) : ((string, IReadOnlyList<BinGroup>)?)null;
+        var joint = settings.Joint ? table.Joint(settings.HumidityWidth ?? HumidityBinScale.Default(settings.Units).Width) : null;
+        output.Write(BinsDocument.Build(weather, table, schedule.Text, settings.DisplayUnits, settings.Source(options), split, joint), settings, settings.Csv);
         return ExitCodes.Ok;
-    }
-
-    private static HumidityBinScale HumidityScale(Settings settings, Core.Units.UnitSystem units)
-    {
-        if (settings.HumidityWidth is not double w)
-        {
-            return HumidityBinScale.Default(units);
-        }
-
-        if (!settings.Joint)
-        {
-            throw new UsageException("--humidity-width applies to --joint only");
-        }
-
-        if (!(w >= 0.01 && w <= 100))
-        {
-            throw new UsageException(FormattableString.Invariant($"--humidity-width {w} must be between 0.01 and 100 ({(units == Core.Units.UnitSystem.IP ? "gr/lb" : "g/kg")})"));
-        }
-
-        return new HumidityBinScale(w, units);
     }
 
     private static TimeOfDayBlocks ParseBlocks(string? text)

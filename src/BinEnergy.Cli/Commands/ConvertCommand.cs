@@ -1,7 +1,7 @@
 using System.ComponentModel;
 using System.IO.Compression;
 using BinEnergy.Core.Weather;
-using Spectre.Console;
+using BinEnergy.Reporting.Documents;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -14,6 +14,10 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
         [CommandOption("--out <FILE>")]
         [Description("The open-layout file to write (.csv, or .csv.gz to compress). Required.")]
         public string? Out { get; init; }
+
+        [CommandOption("--force")]
+        [Description("Replace --out if it exists.")]
+        public bool Force { get; init; }
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
@@ -30,7 +34,12 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
             throw new UsageException("--out must differ from the input file");
         }
 
-        var options = settings.ReadOptions(settings.UnitSystem);
+        if (File.Exists(target) && !settings.Force)
+        {
+            throw new UsageException($"{settings.Out} exists; add --force to replace it, or choose another --out");
+        }
+
+        var options = settings.ReadOptions();
         var weather = WeatherReader.Read(settings.Weather, options);
         var comments = new List<string>
         {
@@ -72,21 +81,7 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
             }
         }
 
-        if (settings.Json)
-        {
-            output.WriteJson(new Dictionary<string, object?>
-            {
-                ["out"] = settings.Out,
-                ["hours"] = weather.Count,
-                ["calendar"] = weather.Calendar.Note,
-                ["repairs"] = weather.Quality.Counts.ToDictionary(kv => kv.Key, kv => kv.Value),
-            });
-        }
-        else
-        {
-            output.Console.WriteLine($"Wrote {weather.Count} hours of {weather.Site.Name} to {settings.Out} in the open layout ({weather.Quality.TotalRepairs} repairs counted; see binenergy inspect).");
-        }
-
+        output.Write(ConvertDocument.Build(weather, settings.Out), settings);
         return ExitCodes.Ok;
     }
 }

@@ -10,7 +10,7 @@ namespace BinEnergy.Cli.Commands;
 /// </summary>
 public sealed class DemoCommand : Command<DemoCommand.Settings>
 {
-    public sealed class Settings : CommandSettings
+    public sealed class Settings : OutputSettings
     {
         [CommandOption("--out <DIR>")]
         [Description("Output folder. Default reports/demo/ (an earlier demo there is replaced).")]
@@ -32,7 +32,7 @@ public sealed class DemoCommand : Command<DemoCommand.Settings>
         }
 
         output.Error.WriteLine($"Running the demo study {study} (invented climates and building; see weather-samples/README.md).");
-        return RunCommand.RunStudy(output, study, folder, hourly: false, force: force, json: false, cancellationToken);
+        return RunCommand.RunStudy(output, study, folder, hourly: false, force: force, settings, cancellationToken);
     }
 
     private static string FindStudy()

@@ -1,4 +1,6 @@
+using BinEnergy.Core.Climate;
 using BinEnergy.Core.Weather;
+using BinEnergy.Reporting.Documents;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -9,19 +11,11 @@ public sealed class InspectCommand : Command<WeatherFileSettings>
     public override int Execute(CommandContext context, WeatherFileSettings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        var units = settings.UnitSystem;
-        var options = settings.ReadOptions(units);
+        var options = settings.ReadOptions();
         var weather = WeatherReader.Read(settings.Weather, options);
-        var report = new InspectReport(weather, units, settings.Weather + " (" + (options.Map?.Source ?? "open layout") + ")");
-        if (settings.Json)
-        {
-            output.WriteJson(report.ToJson());
-        }
-        else
-        {
-            report.Render(output.Console);
-        }
-
+        var u = settings.DisplayUnits;
+        var climate = ClimateSummary.Of(weather, u.DegreeDayBaseC, u.DegreeDayCurveBasesC);
+        output.Write(InspectDocument.Build(weather, climate, settings.DisplayUnits, settings.Source(options)), settings);
         return ExitCodes.Ok;
     }
 }

@@ -1,7 +1,6 @@
 using System.ComponentModel;
-using System.Globalization;
 using BinEnergy.Core.Study;
-using BinEnergy.Core.Units;
+using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Study;
 using Spectre.Console;
 using Spectre.Console.Cli;
@@ -9,12 +8,13 @@ using Spectre.Console.Cli;
 namespace BinEnergy.Cli.Commands;
 
 /// <summary>
-/// <c>binenergy run STUDY.toml</c>: runs every climate x variant of a study file and writes
-/// the result tables (Parquet and CSV) and <c>summary.json</c> into an output folder, atomically.
+/// <c>binenergy run STUDY.toml</c>: runs every climate x variant of a study file and writes the
+/// result tables (Parquet and CSV), charts, <c>report.html</c> and <c>summary.json</c> into an
+/// output folder, atomically; prints the summary.
 /// </summary>
 public sealed class RunCommand : Command<RunCommand.Settings>
 {
-    public sealed class Settings : CommandSettings
+    public sealed class Settings : OutputSettings
     {
         [CommandArgument(0, "<STUDY>")]
         [Description("The study file (TOML). Its [study] units govern the outputs.")]
@@ -31,22 +31,17 @@ public sealed class RunCommand : Command<RunCommand.Settings>
         [CommandOption("--force")]
         [Description("Replace the output folder if it exists and is not empty.")]
         public bool Force { get; init; }
-
-        [CommandOption("--json")]
-        [Description("Write summary.json to standard output instead of the terminal table.")]
-        public bool Json { get; init; }
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken) =>
-        RunStudy((CommandOutput)context.Data!, settings.Study, settings.Out, settings.Hourly, settings.Force, settings.Json, cancellationToken);
+        RunStudy((CommandOutput)context.Data!, settings.Study, settings.Out, settings.Hourly, settings.Force, settings, cancellationToken);
 
     /// <summary>Runs a study file into a folder (tables, charts, report, summary); shared by <c>run</c> and <c>demo</c>.</summary>
-    internal static int RunStudy(CommandOutput output, string studyPath, string? outDir, bool hourly, bool force, bool json, CancellationToken cancellationToken)
+    internal static int RunStudy(CommandOutput output, string studyPath, string? outDir, bool hourly, bool force, OutputSettings format, CancellationToken cancellationToken)
     {
-        var settings = (Hourly: hourly, Force: force, Json: json);
         var study = StudyFileReader.Read(studyPath);
         string folder = outDir ?? Path.Combine("reports", FolderName(study.Name));
-        if (!settings.Force && Directory.Exists(folder) && Directory.EnumerateFileSystemEntries(folder).Any())
+        if (!force && Directory.Exists(folder) && Directory.EnumerateFileSystemEntries(folder).Any())
         {
             throw new Reporting.Tables.OutputFolderException(
                 $"{folder} already exists and is not empty: add --force to replace it, or choose another --out folder");
@@ -54,84 +49,51 @@ public sealed class RunCommand : Command<RunCommand.Settings>
 
         StudyRunResult run;
         int total = study.Climates.Count * study.Variants.Count;
-        bool interactive = !settings.Json && output.Console.Profile.Capabilities.Interactive;
-        if (interactive)
+        if (!format.Json && output.Console.Profile.Capabilities.Interactive)
         {
             run = null!;
             output.Console.Progress().Start(ctx =>
             {
-                var task = ctx.AddTask($"[bold]{Markup.Escape(study.Name)}[/]", maxValue: total);
+                var task = ctx.AddTask($"[bold]{Markup.Escape(PrintableText.Of(study.Name))}[/]", maxValue: total);
                 var progress = new SyncProgress(step =>
                 {
-                    task.Description = Markup.Escape(step);
+                    task.Description = Markup.Escape(PrintableText.Of(step));
                     if (!step.StartsWith("reading ", StringComparison.Ordinal))
                     {
                         task.Increment(1);
                     }
                 });
-                run = StudyRunner.Run(study, settings.Hourly, progress, cancellationToken);
+                run = StudyRunner.Run(study, hourly, progress, cancellationToken);
                 task.Description = "done";
             });
         }
         else
         {
-            run = StudyRunner.Run(study, settings.Hourly, null, cancellationToken);
+            run = StudyRunner.Run(study, hourly, null, cancellationToken);
         }
 
         var runAt = DateTimeOffset.UtcNow;
-        var tables = StudyOutputWriter.WriteAsync(run, folder, settings.Force, settings.Hourly,
-            extra: o => Reporting.Study.StudyReport.WriteInto(o, run, runAt), ct: cancellationToken).GetAwaiter().GetResult();
+        var tables = StudyOutputWriter.WriteAsync(run, folder, force, hourly,
+            extra: o => StudyReport.WriteInto(o, run, runAt), ct: cancellationToken).GetAwaiter().GetResult();
         foreach (var w in run.Warnings)
         {
-            output.Error.WriteLine("warning: " + w);
+            output.Error.WriteLine("warning: " + PrintableText.Of(w));
         }
 
-        if (settings.Json)
+        var summary = StudySummary.Build(run);
+        if (!format.Json)
         {
-            output.Out.WriteLine(StudySummary.ToJson(run));
-            return ExitCodes.Ok;
+            summary.Note(NoteKind.Note, $"Wrote {Path.GetFullPath(folder)}: " + string.Join(", ", tables.Select(t => $"{t.Name} ({t.RowCount} rows)"))
+                + " as Parquet and CSV in tables/, charts in charts/, and summary.json.");
+            summary.Note(NoteKind.Note, "Report: " + Path.GetFullPath(Path.Combine(folder, "report.html")));
         }
 
-        WriteSummary(output.Console, run, folder, tables.Select(t => (t.Name, t.RowCount)).ToList());
+        output.Write(summary, format);
         return ExitCodes.Ok;
     }
 
     /// <summary>A folder name from the study name: lower case, spaces and punctuation to dashes.</summary>
-    internal static string FolderName(string studyName) => Reporting.Study.StudyReport.Slug(studyName, "study");
-
-    private static void WriteSummary(IAnsiConsole console, StudyRunResult run, string folder, List<(string Name, int Rows)> tables)
-    {
-        bool ip = run.Study.Units == UnitSystem.IP;
-        string e = ip ? "kBtu" : "kWh";
-        var table = new Table().Border(TableBorder.Rounded).Title($"[bold]{Markup.Escape(run.Study.Name)}[/] (bin method; hourly check in the tables)");
-        table.AddColumn("climate").AddColumn("variant").AddColumn(new TableColumn(ip ? "airflow cfm" : "airflow L/s").RightAligned())
-            .AddColumn(new TableColumn($"heating {e}").RightAligned()).AddColumn(new TableColumn($"cooling {e}").RightAligned())
-            .AddColumn(new TableColumn($"recovered {e}").RightAligned()).AddColumn(new TableColumn("fan kWh").RightAligned())
-            .AddColumn(new TableColumn($"cost {run.Study.Currency.ToUpperInvariant()}").RightAligned()).AddColumn(new TableColumn("carbon kg").RightAligned());
-        foreach (var c in run.Cases)
-        {
-            var f = c.AnnualBin;
-            double E(double j) => Energy.FromJoules(j).In(run.Study.Units);
-            table.AddRow(
-                Markup.Escape(c.Case.Climate.Name), Markup.Escape(c.Case.Variant.Name),
-                N(ip ? c.Case.OutdoorAir.EffectiveAirflow.Cfm : c.Case.OutdoorAir.EffectiveAirflow.LitresPerSecond),
-                N(E(f.HeatingJ)), N(E(f.CoolingSensibleJ + f.CoolingLatentJ)), N(E(f.RecoveredHeatingJ + f.RecoveredCoolingJ)),
-                N(f.FanJ / 3.6e6), N(f.Total.Cost), N(f.Total.CarbonKg));
-        }
-
-        console.Write(table);
-        console.MarkupLine($"Wrote [bold]{Markup.Escape(Path.GetFullPath(folder))}[/]: " +
-            Markup.Escape(string.Join(", ", tables.Select(t => $"{t.Name} ({t.Rows} rows)"))) + " as Parquet and CSV in tables/, charts in charts/, and summary.json.");
-        console.MarkupLine($"Report: [bold]{Markup.Escape(Path.GetFullPath(Path.Combine(folder, "report.html")))}[/]");
-        if (run.Warnings.Count > 0)
-        {
-            console.MarkupLine($"[yellow]{run.Warnings.Count} warning(s)[/] (on standard error and in summary.json).");
-        }
-
-        console.MarkupLine(Markup.Escape(StudySummary.Caution));
-    }
-
-    private static string N(double v) => v.ToString("N0", CultureInfo.InvariantCulture);
+    internal static string FolderName(string studyName) => StudyReport.Slug(studyName, "study");
 
     /// <summary>An <see cref="IProgress{T}"/> that reports on the calling thread (Spectre's display is refreshed by its own loop).</summary>
     private sealed class SyncProgress(Action<string> report) : IProgress<string>

@@ -1,64 +1,71 @@
 using System.ComponentModel;
+using BinEnergy.Cli.Options;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
-/// <summary>Options of the commands that read one weather file: the file, its map, the elevation and the gap policy.</summary>
+/// <summary>Options of the commands that read one weather file: the file, its map, the elevation, the gap policy and the calendar year.</summary>
 public class WeatherFileSettings : CommonSettings
 {
     [CommandArgument(0, "<WEATHER>")]
     [Description("Hourly weather file: the open CSV layout, or another layout with --map (.csv or .csv.gz).")]
+    [StudyKey("climate", "weather")]
     public string Weather { get; init; } = "";
 
     [CommandOption("--map <NAME|PATH>")]
     [Description("Column map for a layout other than the open one: a shipped map (tmy3, pvgis) or the path of a TOML map file.")]
+    [StudyKey("climate", "map")]
     public string? Map { get; init; }
 
     [CommandOption("--elevation <Z>")]
     [Description("Site elevation (ft in ip, m in si), overriding the file's metadata; sets the site pressure.")]
+    [StudyKey("climate", "elevation", KeyUnit.Length)]
     public double? Elevation { get; init; }
 
     [CommandOption("--drop-long-gaps")]
     [Description("Leave hours in gaps longer than 6 h out (counted and reported) instead of stopping with an error.")]
+    [StudyKey("climate", "drop_long_gaps")]
     public bool DropLongGaps { get; init; }
 
     [CommandOption("--calendar-year <YEAR>")]
     [Description("Year whose weekdays a typical-year file uses. Default 2018 (a non-leap year starting on a Monday).")]
+    [StudyKey("climate", "calendar_year")]
     public int? CalendarYear { get; init; }
 
-    /// <summary>The reader options these settings describe.</summary>
-    internal WeatherReadOptions ReadOptions(UnitSystem units)
+    /// <summary>The weather file and how it is read, for headings.</summary>
+    internal string Source(WeatherReadOptions options) => Weather + " (" + (options.Map?.Source ?? "open layout") + ")";
+
+    /// <summary>The file and its map, for headings, without reading the map.</summary>
+    internal string Source() => Weather + " (" + (Map is null ? "open layout" : "map " + Map) + ")";
+
+    public override Spectre.Console.ValidationResult Validate()
     {
         if (string.IsNullOrWhiteSpace(Weather))
         {
-            throw new UsageException("give the weather file, e.g. binenergy inspect weather.csv");
+            return Spectre.Console.ValidationResult.Error("give the weather file, e.g. binenergy inspect weather.csv");
         }
 
-        double? elevationM = null;
-        if (Elevation is double z)
+        if (Elevation is double z && !(Length.From(z, Units).Metres is >= -500 and <= 9000))
         {
-            elevationM = Length.From(z, units).Metres;
-            if (!(elevationM >= -500 && elevationM <= 9000))
-            {
-                throw new UsageException(units == UnitSystem.IP
-                    ? FormattableString.Invariant($"--elevation {z} ft is outside -1,640 to 29,500 ft")
-                    : FormattableString.Invariant($"--elevation {z} m is outside -500 to 9,000 m"));
-            }
+            return Spectre.Console.ValidationResult.Error(FormattableString.Invariant($"--elevation {z} is outside -500 to 9,000 m (-1,640 to 29,500 ft)"));
         }
 
         if (CalendarYear is int y && (y < 1900 || y > 2200))
         {
-            throw new UsageException($"--calendar-year {y} is outside 1900 to 2200");
+            return Spectre.Console.ValidationResult.Error($"--calendar-year {y} is outside 1900 to 2200");
         }
 
-        return new WeatherReadOptions
-        {
-            Map = Map is null ? null : ColumnMap.Load(Map),
-            ElevationM = elevationM,
-            AllowDroppingLongGaps = DropLongGaps,
-            CalendarYear = CalendarYear ?? CalendarInfo.DefaultTypicalYear,
-        };
+        return base.Validate();
     }
+
+    /// <summary>The reader options these settings describe.</summary>
+    internal WeatherReadOptions ReadOptions() => new()
+    {
+        Map = Map is null ? null : ColumnMap.Load(Map),
+        ElevationM = Elevation is double z ? Length.From(z, Units).Metres : null,
+        AllowDroppingLongGaps = DropLongGaps,
+        CalendarYear = CalendarYear ?? CalendarInfo.DefaultTypicalYear,
+    };
 }

@@ -1,60 +1,46 @@
+using BinEnergy.Core.Loads;
+using BinEnergy.Core.Plant;
 using BinEnergy.Core.Units;
 
 namespace BinEnergy.Core.Economizer;
 
 /// <summary>
-/// One control's year: the bin method (bin evaluation point and mean coincident humidity ratio of the
-/// occupied hours, times the bin's occupied hours), the hourly sum over the same occupied
-/// hours, optionally the joint-bin method, the savings of each against the baseline by the
-/// same method, and the breakdowns by bin and by month.
+/// One control's year by the three integration methods (hourly sum over the occupied hours; joint
+/// dry-bulb x humidity-ratio bins; the classic dry-bulb bins), each against the baseline by the
+/// same method (negative savings are kept), with breakdowns by bin (every method) and by month
+/// (hourly).
 /// </summary>
 public sealed record EconomizerControlResult
 {
     /// <summary>The control (the baseline's is <see cref="EconomizerControl.None"/>).</summary>
     public required EconomizerControl Control { get; init; }
 
-    /// <summary>Totals by the bin method.</summary>
-    public required EconomizerTotals Bin { get; init; }
+    /// <summary>The year's totals by each method.</summary>
+    public required ByMethod<EconomizerTotals> Totals { get; init; }
 
-    /// <summary>Totals by the hourly sum.</summary>
-    public required EconomizerTotals Hourly { get; init; }
+    /// <summary>The baseline's year by each method (the same system without an economizer).</summary>
+    public required ByMethod<EconomizerTotals> Baseline { get; init; }
 
-    /// <summary>Totals by joint dry-bulb x humidity-ratio bins; null when not asked for.</summary>
-    public EconomizerTotals? JointBin { get; init; }
-
-    /// <summary>Bin-method totals per row of <see cref="EconomizerEvaluation.Bins"/> (all of a bin's hours in one mode).</summary>
-    public required IReadOnlyList<EconomizerTotals> ByBin { get; init; }
-
-    /// <summary>Hourly totals per row of <see cref="EconomizerEvaluation.Bins"/>, each hour put in its dry-bulb bin.</summary>
-    public required IReadOnlyList<EconomizerTotals> ByBinHourly { get; init; }
+    /// <summary>Totals per row of <see cref="EconomizerEvaluation.Bins"/> by each method (hourly: each hour in its dry-bulb bin).</summary>
+    public required IReadOnlyList<ByMethod<EconomizerTotals>> ByBin { get; init; }
 
     /// <summary>Hourly totals per calendar month, January first (12 entries).</summary>
     public required IReadOnlyList<EconomizerTotals> ByMonth { get; init; }
 
-    /// <summary>Bin-method savings against the bin-method baseline (negative when the control adds load).</summary>
-    public required Energy BinSavings { get; init; }
+    /// <summary>Coil energy saved against the baseline by a method (negative when the control adds load).</summary>
+    public Energy Savings(IntegrationMethod method) => Totals[method].SavingsAgainst(Baseline[method]);
 
-    /// <summary>Bin-method savings in percent of the baseline coil energy; null when the baseline has none.</summary>
-    public required double? BinSavingsPercent { get; init; }
+    /// <summary>Savings in percent of the baseline coil energy by a method; null when the baseline has none.</summary>
+    public double? SavingsPercent(IntegrationMethod method) => Totals[method].SavingsPercentAgainst(Baseline[method]);
 
-    /// <summary>Hourly savings against the hourly baseline (negative when the control adds load).</summary>
-    public required Energy HourlySavings { get; init; }
+    /// <summary>Compressor electricity, cost and carbon saved against the baseline by a method.</summary>
+    public SiteEnergy CompressorSavings(IntegrationMethod method) => Totals[method].CompressorSavingsAgainst(Baseline[method]);
 
-    /// <summary>Hourly savings in percent of the baseline coil energy; null when the baseline has none.</summary>
-    public required double? HourlySavingsPercent { get; init; }
+    /// <summary>A method's total coil energy against the hourly sum, in percent of the hourly value; null when that is zero.</summary>
+    public double? CoilDifferencePercent(IntegrationMethod method) =>
+        MethodDifference.Percent(Totals[method].CoilTotal.Joules, Totals.Hourly.CoilTotal.Joules);
 
-    /// <summary>Joint-bin savings against the joint-bin baseline; null when joint bins were not asked for.</summary>
-    public Energy? JointBinSavings { get; init; }
-
-    /// <summary>
-    /// Bin method against the hourly sum for the total coil energy, in percent of the hourly
-    /// value ((bin - hourly) / hourly x 100); null when the hourly value is zero.
-    /// </summary>
-    public double? CoilDifferencePercent => Percent(Bin.CoilTotal, Hourly.CoilTotal);
-
-    /// <summary>Bin-method savings against hourly savings, in percent of the hourly savings; null when those are zero.</summary>
-    public double? SavingsDifferencePercent => Percent(BinSavings, HourlySavings);
-
-    private static double? Percent(Energy bin, Energy hourly) =>
-        hourly.Joules != 0 ? (bin.Joules - hourly.Joules) / Math.Abs(hourly.Joules) * 100.0 : null;
+    /// <summary>A method's savings against the hourly savings, in percent of the hourly savings; null when those are zero.</summary>
+    public double? SavingsDifferencePercent(IntegrationMethod method) =>
+        MethodDifference.Percent(Savings(method).Joules, Savings(IntegrationMethod.Hourly).Joules);
 }

@@ -1,6 +1,6 @@
-using System.Globalization;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Loads;
+using BinEnergy.Core.Plant;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
@@ -9,11 +9,13 @@ namespace BinEnergy.Core.Economizer;
 
 /// <summary>
 /// Every chosen economizer control side by side with the baseline over one weather record
-/// (DESIGN 8): per control, the bin method (each bin at its evaluation point, see
-/// <see cref="EconomizerSettings.BinPoint"/>, with the mean coincident humidity ratio of
-/// the occupied hours) and the hourly sum, hours per mode, coil sensible, latent and total
-/// energy, savings against the baseline by the same method (negative savings are kept), per-bin
-/// and per-month breakdowns, and optionally joint dry-bulb x humidity-ratio bins.
+/// (DESIGN 8), by the three integration methods (DESIGN 15): the hourly sum over the occupied
+/// hours, joint dry-bulb x humidity-ratio bins and the classic dry-bulb bins, each bin or cell at
+/// its evaluation point (<see cref="EconomizerSettings.BinPoint"/>) and the mean coincident
+/// humidity ratio of its occupied hours. Per control: hours per mode, coil sensible, latent and
+/// total energy, compressor energy through the plant's cooling COP (when a plant is given),
+/// savings against the baseline by the same method (negative savings are kept), per-bin and
+/// per-month breakdowns.
 /// </summary>
 /// <remarks>
 /// The system runs in occupied hours only; unoccupied hours are not counted in any mode.
@@ -28,7 +30,7 @@ public sealed class EconomizerEvaluation
         IReadOnlyList<EconomizerBinRow> bins,
         EconomizerControlResult baseline,
         IReadOnlyList<EconomizerControlResult> controls,
-        bool joint)
+        bool hasPlant)
     {
         Model = model;
         Weather = weather;
@@ -36,7 +38,7 @@ public sealed class EconomizerEvaluation
         Bins = bins;
         Baseline = baseline;
         Controls = controls;
-        HasJointBins = joint;
+        HasPlant = hasPlant;
     }
 
     /// <summary>The model (settings and the derived indoor states).</summary>
@@ -59,11 +61,27 @@ public sealed class EconomizerEvaluation
     /// <summary>The controls, in the order of <see cref="EconomizerSettings.Controls"/>.</summary>
     public IReadOnlyList<EconomizerControlResult> Controls { get; }
 
-    /// <summary>True when the results carry joint-bin totals.</summary>
-    public bool HasJointBins { get; }
+    /// <summary>The baseline, then the controls.</summary>
+    public IEnumerable<EconomizerControlResult> BaselineAndControls => Controls.Prepend(Baseline);
 
-    /// <summary>The control with the largest hourly savings (ties: the first listed).</summary>
-    public EconomizerControlResult Best => Controls.Aggregate((a, b) => b.HourlySavings.Joules > a.HourlySavings.Joules ? b : a);
+    /// <summary>True when compressor energy was bought through a plant.</summary>
+    public bool HasPlant { get; }
+
+    /// <summary>The control with the largest savings by <paramref name="method"/> (ties: the first listed).</summary>
+    public EconomizerControlResult Best(IntegrationMethod method = IntegrationMethod.Hourly) =>
+        Controls.Aggregate((a, b) => b.Savings(method).Joules > a.Savings(method).Joules ? b : a);
+
+    /// <summary>
+    /// Evaluates every control of <paramref name="settings"/> and the baseline over a record, with
+    /// joint bins of the default humidity width (10 gr/lb or 1 g/kg).
+    /// </summary>
+    /// <exception cref="EconomizerSettingsException">The settings describe no workable system.</exception>
+    public static EconomizerEvaluation Evaluate(HourlyWeather weather, bool[] occupied, BinTable bins, EconomizerSettings settings, PlantModel? plant = null)
+    {
+        ArgumentNullException.ThrowIfNull(weather);
+        ArgumentNullException.ThrowIfNull(bins);
+        return Evaluate(weather, occupied, bins, HourCells.Build(weather, bins.Scale, HumidityBinScale.Default(bins.Scale.Units)), settings, plant);
+    }
 
     /// <summary>
     /// Evaluates every control of <paramref name="settings"/> and the baseline over a record.
@@ -71,19 +89,22 @@ public sealed class EconomizerEvaluation
     /// <param name="weather">The hourly record.</param>
     /// <param name="occupied">Per-hour occupancy (the system runs in occupied hours).</param>
     /// <param name="bins">The record's dry-bulb bin table, built with the same <paramref name="occupied"/> flags.</param>
+    /// <param name="cells">The record's hour cells with the bin table's dry-bulb scale (for joint bins).</param>
     /// <param name="settings">The air system and the controls.</param>
-    /// <param name="joint">Optional joint dry-bulb x humidity-ratio bins (built with the same flags) for a third method.</param>
+    /// <param name="plant">The plant whose cooling COP buys the compressor energy; null for coil energy only.</param>
     /// <exception cref="EconomizerSettingsException">The settings describe no workable system.</exception>
     public static EconomizerEvaluation Evaluate(
         HourlyWeather weather,
         bool[] occupied,
         BinTable bins,
+        HourCells cells,
         EconomizerSettings settings,
-        JointBinTable? joint = null)
+        PlantModel? plant = null)
     {
         ArgumentNullException.ThrowIfNull(weather);
         ArgumentNullException.ThrowIfNull(occupied);
         ArgumentNullException.ThrowIfNull(bins);
+        ArgumentNullException.ThrowIfNull(cells);
         if (occupied.Length != weather.Count)
         {
             throw new ArgumentException(FormattableString.Invariant($"occupancy flags have {occupied.Length} entries but the record has {weather.Count} hours"), nameof(occupied));
@@ -94,6 +115,11 @@ public sealed class EconomizerEvaluation
             throw new ArgumentException("the bin table was not built from this record with these occupancy flags", nameof(bins));
         }
 
+        if (cells.CellOfHour.Length != weather.Count || cells.DryBulbBins != bins.Rows.Count || cells.FirstDryBulbIndex != bins.FirstIndex)
+        {
+            throw new ArgumentException("the hour cells were not built from this record with the bin table's scale", nameof(cells));
+        }
+
         var model = new EconomizerModel(settings, weather.Site.SitePressurePa);
         var controls = new EconomizerControl[settings.Controls.Count + 1];
         controls[0] = EconomizerControl.None;
@@ -102,217 +128,164 @@ public sealed class EconomizerEvaluation
             controls[c + 1] = settings.Controls[c];
         }
 
+        var run = new Run(model, controls, plant);
         int nc = controls.Length;
         int nb = bins.Rows.Count;
         var monthly = new ModeEnergySums[nc * 12];
         var byBinHourly = new ModeEnergySums[nc * nb];
-        int occupiedHours = SumHourly(model, weather, occupied, bins.Scale, bins.FirstIndex, controls, monthly, byBinHourly);
+        var cellStats = new CellStatistics[cells.Count];
+        int occupiedHours = run.SumHourly(weather, occupied, cells, monthly, byBinHourly, cellStats);
+
+        // Cells merged over month and humidity (the bin method) and over month (joint bins).
+        int nj = cells.HumidityBins;
+        var (binStats, jointStats) = cells.Merge(cellStats);
 
         var rows = new EconomizerBinRow[nb];
         var byBin = new ModeEnergySums[nc * nb];
+        var byBinJoint = new ModeEnergySums[nc * nb];
         double p = model.SitePressurePa;
         for (int b = 0; b < nb; b++)
         {
             var row = bins.Rows[b];
-            var occ = row.Occupied;
-            double w = occ.MeanHumidityRatio.KilogramsPerKilogram;
-            double t = BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, occ);
-            double h = occ.Hours > 0 ? MoistAir.Enthalpy(t, w) : double.NaN;
-            double dp = occ.Hours > 0 && w > 0 ? MoistAir.DewPoint(w, p) : double.NaN;
-            rows[b] = new EconomizerBinRow(row.Index, row.Low, row.High, row.Mid, occ.Hours, occ.MeanHumidityRatio,
+            var stats = binStats[b];
+            double w = stats.MeanHumidityRatio;
+            double t = BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, stats);
+            double h = stats.Hours > 0 ? MoistAir.Enthalpy(t, w) : double.NaN;
+            double dp = stats.Hours > 0 ? DewPointOf(w, p) : double.NaN;
+            rows[b] = new EconomizerBinRow(row.Index, row.Low, row.High, row.Mid, (int)stats.Hours, HumidityRatio.FromKilogramsPerKilogram(w),
                 SpecificEnthalpy.FromJoulesPerKilogram(h), Temperature.FromCelsius(dp))
             { EvaluatedAt = Temperature.FromCelsius(t) };
-            if (occ.Hours > 0)
+            run.AddState(stats, t, byBin, b * nc);
+            for (int j = 0; j < nj; j++)
             {
-                AddState(model, controls, t, w, h, dp, occ.Hours, byBin, b * nc);
+                var cell = jointStats[b * nj + j];
+                run.AddState(cell, BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, cell), byBinJoint, b * nc);
             }
         }
 
-        ModeEnergySums[]? jointSums = null;
-        if (joint is not null)
+        var baseline = Totals(0, nc, nb, byBin, byBinJoint, byBinHourly, monthly, out var baseByBin, out var baseByMonth);
+        var results = new EconomizerControlResult[nc];
+        for (int c = 0; c < nc; c++)
         {
-            jointSums = new ModeEnergySums[nc];
-            foreach (var cell in joint.Cells)
+            var totals = c == 0 ? baseline : Totals(c, nc, nb, byBin, byBinJoint, byBinHourly, monthly, out baseByBin, out baseByMonth);
+            results[c] = new EconomizerControlResult
             {
-                var occ = cell.Occupied;
-                if (occ.Hours == 0)
+                Control = controls[c],
+                Totals = totals,
+                Baseline = baseline,
+                ByBin = baseByBin,
+                ByMonth = baseByMonth,
+            };
+        }
+
+        return new EconomizerEvaluation(model, weather, occupiedHours, rows, results[0], results[1..], plant is not null);
+    }
+
+    private static double DewPointOf(double w, double p) => w > 0 ? MoistAir.DewPoint(w, p) : Saturation.MinTemperatureC;
+
+    /// <summary>One control's annual totals by each method, with its per-bin and per-month breakdowns.</summary>
+    private static ByMethod<EconomizerTotals> Totals(int c, int nc, int nb, ModeEnergySums[] byBin, ModeEnergySums[] byBinJoint,
+        ModeEnergySums[] byBinHourly, ModeEnergySums[] monthly, out ByMethod<EconomizerTotals>[] perBin, out EconomizerTotals[] perMonth)
+    {
+        ModeEnergySums bin = default, joint = default, hourly = default;
+        perBin = new ByMethod<EconomizerTotals>[nb];
+        for (int b = 0; b < nb; b++)
+        {
+            bin.Add(in byBin[b * nc + c]);
+            joint.Add(in byBinJoint[b * nc + c]);
+            perBin[b] = new ByMethod<EconomizerTotals>(byBinHourly[c * nb + b].ToTotals(), byBinJoint[b * nc + c].ToTotals(), byBin[b * nc + c].ToTotals());
+        }
+
+        perMonth = new EconomizerTotals[12];
+        for (int m = 0; m < 12; m++)
+        {
+            hourly.Add(in monthly[c * 12 + m]);
+            perMonth[m] = monthly[c * 12 + m].ToTotals();
+        }
+
+        return new ByMethod<EconomizerTotals>(hourly.ToTotals(), joint.ToTotals(), bin.ToTotals());
+    }
+
+    /// <summary>The model, the controls and the plant of one evaluation.</summary>
+    private sealed class Run(EconomizerModel model, EconomizerControl[] controls, PlantModel? plant)
+    {
+        private readonly CurveClampCounter clamps = new();
+
+        /// <summary>The hours in which a cooling COP was held at its end value (hourly method).</summary>
+        public CurveClampCounter Clamps { get; } = new();
+
+        private double Cop(double t, double hours, CurveClampCounter counter) => plant?.CoolingCop(t, hours, counter) ?? 1.0;
+
+        /// <summary>
+        /// The hourly sum: every occupied hour under every control, into per-month and per-bin sums,
+        /// and each hour's state into its cell's statistics. Allocation-free.
+        /// </summary>
+        public int SumHourly(HourlyWeather weather, bool[] occupied, HourCells cells, ModeEnergySums[] monthly, ModeEnergySums[] byBin,
+            CellStatistics[] cellStats)
+        {
+            var t = weather.DryBulbC;
+            var w = weather.HumidityRatio;
+            var h = weather.EnthalpyJPerKg;
+            var dp = weather.DewPointC;
+            var times = weather.Times;
+            int nc = controls.Length;
+            int nb = byBin.Length / nc;
+            int count = 0;
+            for (int i = 0; i < t.Length; i++)
+            {
+                if (!occupied[i])
                 {
                     continue;
                 }
 
-                double t = BinEvaluation.DryBulbC(settings.BinPoint, cell.DryBulbMid, occ);
-                double w = occ.MeanHumidityRatio.KilogramsPerKilogram;
-                double dp = w > 0 ? MoistAir.DewPoint(w, p) : Saturation.MinTemperatureC;
-                AddState(model, controls, t, w, MoistAir.Enthalpy(t, w), dp, occ.Hours, jointSums, 0);
-            }
-        }
-
-        var results = new EconomizerControlResult[nc];
-        EconomizerTotals? baseBin = null, baseHourly = null, baseJoint = null;
-        for (int c = 0; c < nc; c++)
-        {
-            var annualBin = new ModeEnergySums();
-            var perBin = new EconomizerTotals[nb];
-            var perBinHourly = new EconomizerTotals[nb];
-            for (int b = 0; b < nb; b++)
-            {
-                annualBin.Add(in byBin[b * nc + c]);
-                perBin[b] = byBin[b * nc + c].ToTotals();
-                perBinHourly[b] = byBinHourly[c * nb + b].ToTotals();
-            }
-
-            var annualHourly = new ModeEnergySums();
-            var perMonth = new EconomizerTotals[12];
-            for (int m = 0; m < 12; m++)
-            {
-                annualHourly.Add(in monthly[c * 12 + m]);
-                perMonth[m] = monthly[c * 12 + m].ToTotals();
-            }
-
-            var binTotals = annualBin.ToTotals();
-            var hourlyTotals = annualHourly.ToTotals();
-            var jointTotals = jointSums?[c].ToTotals();
-            baseBin ??= binTotals;
-            baseHourly ??= hourlyTotals;
-            baseJoint ??= jointTotals;
-            results[c] = new EconomizerControlResult
-            {
-                Control = controls[c],
-                Bin = binTotals,
-                Hourly = hourlyTotals,
-                JointBin = jointTotals,
-                ByBin = perBin,
-                ByBinHourly = perBinHourly,
-                ByMonth = perMonth,
-                BinSavings = binTotals.SavingsAgainst(baseBin),
-                BinSavingsPercent = binTotals.SavingsPercentAgainst(baseBin),
-                HourlySavings = hourlyTotals.SavingsAgainst(baseHourly),
-                HourlySavingsPercent = hourlyTotals.SavingsPercentAgainst(baseHourly),
-                JointBinSavings = jointTotals is null || baseJoint is null ? null : jointTotals.SavingsAgainst(baseJoint),
-            };
-        }
-
-        return new EconomizerEvaluation(model, weather, occupiedHours, rows, results[0], results[1..], joint is not null);
-    }
-
-    /// <summary>
-    /// The hourly sum: every occupied hour under every control, into per-month and per-bin sums.
-    /// Allocation-free: reads the column arrays, writes the preallocated sums.
-    /// </summary>
-    private static int SumHourly(
-        EconomizerModel model,
-        HourlyWeather weather,
-        bool[] occupied,
-        DryBulbBinScale scale,
-        int firstBin,
-        EconomizerControl[] controls,
-        ModeEnergySums[] monthly,
-        ModeEnergySums[] byBin)
-    {
-        var t = weather.DryBulbC;
-        var w = weather.HumidityRatio;
-        var h = weather.EnthalpyJPerKg;
-        var dp = weather.DewPointC;
-        var times = weather.Times;
-        int nc = controls.Length;
-        int nb = byBin.Length / nc;
-        int count = 0;
-        for (int i = 0; i < t.Length; i++)
-        {
-            if (!occupied[i])
-            {
-                continue;
-            }
-
-            count++;
-            int month = times[i].Month - 1;
-            int bin = scale.IndexOf(t[i]) - firstBin;
-            double qb = model.BuildingLoadW(t[i]);
-            if (qb <= 0)
-            {
-                var none = new EconomizerHour(EconomizerMode.NoCooling, 0, 0, 0, 0, 0, 0, 0, 0);
-                for (int c = 0; c < nc; c++)
+                count++;
+                int month = times[i].Month - 1;
+                int cell = cells.CellOfHour[i];
+                int bin = cells.DryBulbBinOfCell[cell];
+                cellStats[cell].Add(t[i], w[i], 1.0);
+                double qb = model.BuildingLoadW(t[i]);
+                if (qb <= 0)
                 {
-                    monthly[c * 12 + month].Add(in none, 1.0);
-                    byBin[c * nb + bin].Add(in none, 1.0);
+                    var none = new EconomizerHour(EconomizerMode.NoCooling, 0, 0, 0, 0, 0, 0, 0, 0);
+                    for (int c = 0; c < nc; c++)
+                    {
+                        monthly[c * 12 + month].Add(in none, 1.0, null, 1.0);
+                        byBin[c * nb + bin].Add(in none, 1.0, null, 1.0);
+                    }
+
+                    continue;
                 }
 
-                continue;
+                double cop = Cop(t[i], 1.0, Clamps);
+                var baseline = model.AtMinimum(qb, t[i], w[i]);
+                for (int c = 0; c < nc; c++)
+                {
+                    var r = c == 0 ? baseline : model.Resolve(controls[c], qb, in baseline, t[i], w[i], h[i], dp[i]);
+                    monthly[c * 12 + month].Add(in r, 1.0, plant, cop);
+                    byBin[c * nb + bin].Add(in r, 1.0, plant, cop);
+                }
             }
 
-            var baseline = model.AtMinimum(qb, t[i], w[i]);
-            for (int c = 0; c < nc; c++)
+            return count;
+        }
+
+        /// <summary>A bin's or cell's state (evaluation dry-bulb, mean humidity ratio) for every control, times its hours.</summary>
+        public void AddState(in CellStatistics stats, double t, ModeEnergySums[] sums, int offset)
+        {
+            if (stats.Hours <= 0)
             {
-                var r = c == 0 ? baseline : model.Resolve(controls[c], qb, in baseline, t[i], w[i], h[i], dp[i]);
-                monthly[c * 12 + month].Add(in r, 1.0);
-                byBin[c * nb + bin].Add(in r, 1.0);
+                return;
+            }
+
+            double w = stats.MeanHumidityRatio;
+            double h = MoistAir.Enthalpy(t, w);
+            double dp = DewPointOf(w, model.SitePressurePa);
+            double cop = Cop(t, stats.Hours, clamps);
+            for (int c = 0; c < controls.Length; c++)
+            {
+                var r = model.Evaluate(controls[c], t, w, h, dp);
+                sums[offset + c].Add(in r, stats.Hours, plant, cop);
             }
         }
-
-        return count;
     }
-
-    /// <summary>One bin state (dry-bulb, humidity ratio, enthalpy, dew point) for every control, times its hours.</summary>
-    private static void AddState(EconomizerModel model, EconomizerControl[] controls, double t, double w, double h, double dp,
-        double hours, ModeEnergySums[] sums, int offset)
-    {
-        for (int c = 0; c < controls.Length; c++)
-        {
-            var r = model.Evaluate(controls[c], t, w, h, dp);
-            sums[offset + c].Add(in r, hours);
-        }
-    }
-
-    /// <summary>
-    /// The assumptions behind the numbers, in the display unit of <paramref name="units"/>, for
-    /// the terminal, the JSON and the report.
-    /// </summary>
-    public IReadOnlyList<string> Assumptions(UnitSystem units)
-    {
-        var s = Settings;
-        bool ip = units == UnitSystem.IP;
-        string tu = ip ? "F" : "C";
-        string T(Temperature x) => F(x.In(units), 1) + " " + tu;
-        string Flow(VolumeFlow v) => F(v.In(units), 0) + (ip ? " cfm" : " L/s");
-        string W(double kgkg) => ip ? F(kgkg * Conversions.GrainsPerPound, 1) + " gr/lb" : F(kgkg * 1000, 2) + " g/kg";
-        string H(double jkg) => F(SpecificEnthalpy.FromJoulesPerKilogram(jkg).In(units), 2) + (ip ? " Btu/lb" : " kJ/kg");
-        string Point(string whose) => s.BinPoint == BinEvaluationPoint.Midpoint ? $"{whose} dry-bulb midpoint" : $"the mean dry-bulb of {whose} occupied hours";
-        double xMin = s.MinOutdoorAirflow.CubicMetresPerSecond / s.SupplyAirflow.CubicMetresPerSecond;
-        var list = new List<string>
-        {
-            s.IsVariableVolume
-                ? $"variable supply airflow {Flow(s.SupplyAirflowMin!.Value)} to {Flow(s.SupplyAirflow)}, following the building load m_s = Q_b / (c_p (T_r - T_s)) between those bounds"
-                : $"constant supply airflow {Flow(s.SupplyAirflow)}",
-            $"minimum outdoor airflow {Flow(s.MinOutdoorAirflow)} (outdoor fraction at least {F(xMin * 100, 1)} % at full supply airflow{(s.IsVariableVolume ? ", more at reduced airflow" : "")})",
-            FlowBasisText(s.FlowBasis, units),
-            $"supply (coil-leaving) temperature {T(s.SupplyTemperature)}; coil-leaving humidity at most {F(s.CoilLeavingRelativeHumidity * 100, 0)} % RH at the supply temperature ({W(Model.CoilLeavingHumidityLimit)})",
-            $"return air {T(s.ReturnTemperature)} at {F(s.ReturnRelativeHumidity * 100, 0)} % RH: humidity ratio {W(Model.ReturnHumidityRatio)}, enthalpy {H(Model.ReturnEnthalpyJPerKg)}",
-            $"building sensible cooling load {(ip ? F(s.LoadLine.DesignLoad.BtuPerHour, 0) + " Btu/h" : F(s.LoadLine.DesignLoad.Kilowatts, 1) + " kW")} at {T(s.LoadLine.DesignOutdoor)} outdoors, falling linearly to zero at the {T(s.LoadLine.BalancePoint)} balance point (no cooling below it)",
-            $"site pressure {F(Model.SitePressurePa / 1000, 2)} kPa for the indoor states; each hour's outdoor enthalpy and dew point from the record",
-            "mixing linear in dry-bulb and humidity ratio; the coil cools the mixed air to the supply temperature; coil energy is that of the coil only (no fan, no reheat, no plant efficiency)",
-            "the economizer runs only when the outdoor air is cooler than the return air and the control's high limit allows it; integrated controls keep 100 % outdoor air while the coil trims, non-integrated ones lock out to minimum outdoor air whenever the coil must run",
-            $"{OccupiedHours} occupied hours of {Weather.Count}; the system runs in occupied hours only",
-            $"bin method: each dry-bulb bin at {Point("its")} and the mean coincident humidity ratio of its occupied hours, times those hours; hourly: the same model summed over every occupied hour" +
-                (HasJointBins ? $"; joint bins: each dry-bulb x humidity-ratio cell at {Point("the cell's")} and the cell's mean humidity ratio" : ""),
-            s.LimitsAreSuggested
-                ? "high limits: " + HighLimits.SuggestedNote
-                : $"high limits set by the user: dry-bulb {T(s.Limits.DryBulb)}, enthalpy {F(s.Limits.Enthalpy.In(units), 1)} {(ip ? "Btu/lb" : "kJ/kg")}, dew point {T(s.Limits.DewPoint)}; the energy code adopted locally governs the choice of control and limit",
-            "caution: the minimum outdoor airflow must meet the ventilation code adopted locally and the judgement of the responsible licensed engineer; reducing outdoor air below the required minimum harms occupants",
-        };
-        if (s.MinOutdoorAirflow.CubicMetresPerSecond == 0)
-        {
-            list.Add("caution: the minimum outdoor airflow is zero, so outside economizer hours the building gets no ventilation air; occupied buildings need the minimum their ventilation code requires");
-        }
-
-        return list;
-    }
-
-    private static string FlowBasisText(FlowBasis basis, UnitSystem units) => basis switch
-    {
-        FlowBasis.Standard => "flow basis standard: airflows are standard air, 0.075 lb/ft3 (1.2014 kg/m3) of dry air",
-        FlowBasis.Site => "flow basis site: airflows are dry air at 70 F (21.1 C) at the site pressure",
-        _ => "flow basis actual: airflows are at the coil-entering (mixed-air) state, so its density sets both mass flows",
-    };
-
-    private static string F(double v, int digits) => v.ToString("N" + digits, CultureInfo.InvariantCulture);
 }

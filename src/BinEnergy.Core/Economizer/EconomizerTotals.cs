@@ -1,11 +1,12 @@
+using BinEnergy.Core.Plant;
 using BinEnergy.Core.Units;
 
 namespace BinEnergy.Core.Economizer;
 
 /// <summary>
-/// Hours per mode and coil energy of one control over a set of occupied hours (a year, a month
-/// or a bin), by one integration method. Hours are fractional only in the bin method's joint
-/// or weighted forms; the hourly method counts whole hours.
+/// Hours per mode, coil energy and the compressor energy bought for it, of one control over a
+/// set of occupied hours (a year, a month or a bin), by one integration method. Hours are whole
+/// in the hourly method; a bin's hours may be fractional only where a bin method weights them.
 /// </summary>
 /// <param name="HoursNoCooling">Occupied hours with no cooling needed.</param>
 /// <param name="HoursFree">Hours of free cooling (economizer on, coil off).</param>
@@ -13,16 +14,18 @@ namespace BinEnergy.Core.Economizer;
 /// <param name="HoursMinimum">Hours at minimum outdoor air (disabled, locked out, or no economizer).</param>
 /// <param name="CoilSensible">Sensible coil energy.</param>
 /// <param name="CoilLatent">Latent coil energy.</param>
+/// <param name="Compressor">Electricity bought for the coil energy through the cooling COP (zero without a plant).</param>
 public sealed record EconomizerTotals(
     double HoursNoCooling,
     double HoursFree,
     double HoursIntegrated,
     double HoursMinimum,
     Energy CoilSensible,
-    Energy CoilLatent)
+    Energy CoilLatent,
+    SiteEnergy Compressor)
 {
     /// <summary>No hours, no energy.</summary>
-    public static EconomizerTotals Zero { get; } = new(0, 0, 0, 0, Energy.FromJoules(0), Energy.FromJoules(0));
+    public static EconomizerTotals Zero { get; } = new(0, 0, 0, 0, Energy.FromJoules(0), Energy.FromJoules(0), SiteEnergy.Zero);
 
     /// <summary>Total coil energy: sensible plus latent.</summary>
     public Energy CoilTotal => CoilSensible + CoilLatent;
@@ -52,4 +55,7 @@ public sealed record EconomizerTotals(
 
     /// <summary>Latent coil energy saved against <paramref name="baseline"/>; negative when this control adds latent load.</summary>
     public Energy LatentSavingsAgainst(EconomizerTotals baseline) => baseline.CoilLatent - CoilLatent;
+
+    /// <summary>Compressor electricity, cost and carbon saved against <paramref name="baseline"/>.</summary>
+    public SiteEnergy CompressorSavingsAgainst(EconomizerTotals baseline) => baseline.Compressor - Compressor;
 }

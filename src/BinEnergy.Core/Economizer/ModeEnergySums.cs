@@ -1,3 +1,4 @@
+using BinEnergy.Core.Plant;
 using BinEnergy.Core.Units;
 
 namespace BinEnergy.Core.Economizer;
@@ -11,9 +12,13 @@ internal struct ModeEnergySums
     private double _minimum;
     private double _sensibleJ;
     private double _latentJ;
+    private SiteEnergy _compressor;
 
-    /// <summary>Adds <paramref name="hours"/> of an hour's result (loads in W, energy in J).</summary>
-    public void Add(in EconomizerHour hour, double hours)
+    /// <summary>
+    /// Adds <paramref name="hours"/> of an hour's result (loads in W, energy in J), and the
+    /// compressor energy for its coil load at <paramref name="cop"/> through <paramref name="plant"/> (when given).
+    /// </summary>
+    public void Add(in EconomizerHour hour, double hours, PlantModel? plant, double cop)
     {
         switch (hour.Mode)
         {
@@ -32,8 +37,14 @@ internal struct ModeEnergySums
         }
 
         double seconds = hours * 3600.0;
-        _sensibleJ += hour.CoilSensibleW * seconds;
-        _latentJ += hour.CoilLatentW * seconds;
+        double sensible = hour.CoilSensibleW * seconds;
+        double latent = hour.CoilLatentW * seconds;
+        _sensibleJ += sensible;
+        _latentJ += latent;
+        if (plant is not null && sensible + latent > 0)
+        {
+            _compressor += plant.Electricity((sensible + latent) / cop);
+        }
     }
 
     /// <summary>Adds another set of sums.</summary>
@@ -45,8 +56,9 @@ internal struct ModeEnergySums
         _minimum += other._minimum;
         _sensibleJ += other._sensibleJ;
         _latentJ += other._latentJ;
+        _compressor += other._compressor;
     }
 
     public readonly EconomizerTotals ToTotals() =>
-        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ));
+        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ), _compressor);
 }

@@ -3,7 +3,7 @@ using BinEnergy.Core.Units;
 
 namespace BinEnergy.Core.Loads;
 
-/// <summary>The state at which the bin method evaluates a bin or a joint cell.</summary>
+/// <summary>The state at which the bin methods evaluate a dry-bulb bin or a joint cell.</summary>
 public static class BinEvaluation
 {
     /// <summary>
@@ -11,9 +11,6 @@ public static class BinEvaluation
     /// statistics <paramref name="hours"/> of the hours that count is evaluated: their mean
     /// dry-bulb for <see cref="BinEvaluationPoint.MeanDryBulb"/>, else (or without hours) the midpoint.
     /// </summary>
-    public static double DryBulbC(BinEvaluationPoint point, Temperature mid, BinStatistics hours)
-    {
-        ArgumentNullException.ThrowIfNull(hours);
-        return point == BinEvaluationPoint.MeanDryBulb && hours.Hours > 0 ? hours.MeanDryBulb.Celsius : mid.Celsius;
-    }
+    public static double DryBulbC(BinEvaluationPoint point, Temperature mid, in CellStatistics hours) =>
+        point == BinEvaluationPoint.MeanDryBulb && hours.Hours > 0 ? hours.MeanDryBulbC : mid.Celsius;
 }

@@ -21,15 +21,15 @@ internal static class DesignPeakLoads
         var without = settings.Recovery is null ? with : new OutdoorAirLoad(settings with { Recovery = null }, p);
         double v = settings.EffectiveAirflow.CubicMetresPerSecond;
 
-        OutdoorAirPeak Peak(string condition, double t, double w)
+        OutdoorAirPeak Peak(string condition, string key, double t, double w)
         {
             double rho = FlowBasisDensity.For(settings.FlowBasis, p, t, w, p);
             var dryBulb = Temperature.FromCelsius(t);
             var ratio = HumidityRatio.FromKilogramsPerKilogram(w);
-            return new OutdoorAirPeak(condition, dryBulb, ratio,
+            return new OutdoorAirPeak(condition, key, dryBulb, ratio,
                 Temperature.FromCelsius(MoistAir.WetBulb(t, w, p)),
                 Temperature.FromCelsius(w > 0 ? Math.Min(MoistAir.DewPoint(w, p), t) : double.NegativeInfinity),
-                with.At(dryBulb, ratio, rho * v), without.At(dryBulb, ratio, rho * v));
+                with.OneHourAt(dryBulb, ratio, rho * v), without.OneHourAt(dryBulb, ratio, rho * v));
         }
 
         double th = design.Heating996DryBulbC;
@@ -41,9 +41,9 @@ internal static class DesignPeakLoads
         double dehumT = Math.Max(dehum.MeanCoincidentDryBulbC, dehum.DewPointC);
         double dehumW = MoistAir.HumidityRatioFromDewPoint(dehum.DewPointC, p);
         return new OutdoorAirPeaks(
-            Peak("Heating 99.6 % dry-bulb", th, heatingW),
-            Peak("Cooling 0.4 % dry-bulb, MCWB", tc, coolW),
-            Peak("Dehumidification 0.4 % dew point, MCDB", dehumT, dehumW),
+            Peak("Heating 99.6 % dry-bulb", "heating_99_6", th, heatingW),
+            Peak("Cooling 0.4 % dry-bulb, MCWB", "cooling_0_4", tc, coolW),
+            Peak("Dehumidification 0.4 % dew point, MCDB", "dehumidification_0_4", dehumT, dehumW),
             DesignConditions.QuantileMethod + FormattableString.Invariant(
                 $"; coincident means over hours within {DesignConditions.CoincidenceWindowK} K of the design value"));
     }

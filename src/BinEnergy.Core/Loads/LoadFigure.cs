@@ -1,6 +1,9 @@
 namespace BinEnergy.Core.Loads;
 
-/// <summary>The annual figures of an outdoor-air estimate; each is an energy.</summary>
+/// <summary>
+/// The figures of an outdoor-air estimate, each an energy; they index a <see cref="LoadVector"/>.
+/// Adding a figure here (and to <see cref="LoadVector.FigureCount"/>) adds it to every table.
+/// </summary>
 public enum LoadFigure
 {
     /// <summary>Heating the outdoor air to the heating setpoint.</summary>

@@ -41,4 +41,8 @@ public sealed record OutdoorAirAssumptions(
     BinEvaluationPoint BinPoint,
     EnergyRecoverySettings? Recovery,
     Power FanPenalty,
-    string Calendar);
+    string Calendar)
+{
+    /// <summary>The humidity-ratio bins of the joint-bin method.</summary>
+    public HumidityBinScale HumidityScale { get; init; } = HumidityBinScale.Default(BinScale.Units);
+}

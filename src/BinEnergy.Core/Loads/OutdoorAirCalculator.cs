@@ -1,6 +1,6 @@
-using System.Runtime.InteropServices;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Climate;
+using BinEnergy.Core.Plant;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
@@ -8,60 +8,78 @@ using BinEnergy.Core.Weather;
 namespace BinEnergy.Core.Loads;
 
 /// <summary>
-/// Annual outdoor-air loads of a record by two integrations, always both (DESIGN 7): the bin
-/// method, which evaluates <see cref="OutdoorAirLoad"/> at each dry-bulb bin's evaluation point
+/// Annual, monthly and per-bin outdoor-air loads of a record by the three integration methods
+/// (DESIGN 15), with the energy the plant buys for them: the hourly sum (each hour at its own
+/// state), joint dry-bulb x humidity-ratio bins and the classic dry-bulb bin method, each bin
+/// or cell evaluated with <see cref="OutdoorAirLoad"/> at its evaluation dry-bulb
 /// (<see cref="OutdoorAirSettings.BinPoint"/>: the mean dry-bulb of its ventilated hours by
-/// default, or its midpoint) and mean coincident humidity ratio and multiplies by the bin's
-/// ventilated hours, and the hourly sum over the same hours. Optionally a third: joint
-/// dry-bulb x humidity-ratio bins, evaluated the same way per cell.
+/// default, or its midpoint) and mean coincident humidity ratio, times its ventilated hours.
 /// </summary>
 /// <remarks>
-/// Mass flow of dry air m = rho_da V, rho_da from the flow basis (<see cref="FlowBasisDensity"/>):
+/// <para>Mass flow of dry air m = rho_da V, rho_da from the flow basis (<see cref="FlowBasisDensity"/>):
 /// constant for <c>standard</c> and <c>site</c>; for <c>actual</c>, the dry-air density of each
-/// hour's outdoor state at that hour's pressure (hourly) or of the bin's evaluation point and
-/// mean humidity ratio at the site pressure (bins). The recovery device's fan penalty is
-/// P = 2 V dp / eta (both air streams), charged in every ventilated hour unless the air
-/// bypasses an idle device. The per-hour loop reads the record's columns and allocates nothing.
+/// hour's outdoor state at that hour's pressure (hourly) or of the bin's evaluation state at the
+/// site pressure (bins). The recovery device's fan penalty is P = 2 V dp / eta (both air streams),
+/// charged in every ventilated hour unless the air bypasses an idle device.</para>
+/// <para>One pass over the hours sums each hour's loads by month and by dry-bulb bin and the
+/// statistics of each month x dry-bulb x humidity cell (<see cref="HourCells"/>); the bin methods
+/// then merge cells: the classic bin method over month and humidity (per month: over humidity),
+/// joint bins over month (per month: each cell). Plant energy depends on the outdoor temperature
+/// through the COP curves, so it is bought where the temperature is known: at each hour's
+/// dry-bulb (hourly) or each bin's or cell's evaluation dry-bulb.</para>
 /// <para>With <see cref="OutdoorAirSettings.AirflowMultipliers"/> (e.g. demand-controlled
-/// ventilation) each hour's volume flow, and with it the fan penalty, is the airflow times
-/// the multiplier of the hour's clock hour. The loads are linear in the airflow, so the hourly
-/// method scales each hour's loads; the bin method uses, per bin (and per joint cell) and
-/// occupancy class, the mean multiplier over the bin's ventilated hours, which is exact for
-/// the flow-weighted hours and keeps the bin's state at its evaluation point and mean humidity ratio.
-/// The design-day peaks stay at the full airflow (what the equipment must handle).</para>
+/// ventilation) each hour's volume flow, and with it the fan penalty, is the airflow times the
+/// multiplier of the hour's clock hour. The loads are linear in the airflow, so the hourly method
+/// scales each hour's loads; the bin methods use the mean multiplier over a bin's (or cell's)
+/// ventilated hours. The design-day peaks stay at the full airflow (what the equipment must handle).</para>
 /// </remarks>
 public static class OutdoorAirCalculator
 {
     /// <summary>
-    /// Bins the record with the settings' schedule and computes the loads by both methods (and
-    /// by joint bins when <paramref name="jointScale"/> is given), with the peaks at the record's
-    /// own design conditions.
+    /// Bins the record with the settings' schedule and computes the loads by the three methods
+    /// (joint bins of <paramref name="humidityScale"/>, by default 10 gr/lb or 1 g/kg), with the
+    /// peaks at the record's own design conditions; no plant.
     /// </summary>
     /// <exception cref="ArgumentException">The settings have problems (<see cref="OutdoorAirSettings.Problems"/>).</exception>
     public static OutdoorAirResult Compute(HourlyWeather weather, OutdoorAirSettings settings, DryBulbBinScale binScale,
-        HumidityBinScale? jointScale = null)
+        HumidityBinScale? humidityScale = null)
     {
         ArgumentNullException.ThrowIfNull(weather);
         ArgumentNullException.ThrowIfNull(settings);
         var flags = settings.Schedule.Flags(weather);
         var table = BinTable.Build(weather, binScale, flags);
+        var cells = HourCells.Build(weather, binScale, humidityScale ?? HumidityBinScale.Default(binScale.Units));
         var design = weather.Count > 0 ? DesignConditions.FromRecord(weather) : null;
-        return Compute(weather, settings, table, flags, jointScale, design);
+        return Compute(weather, settings, table, cells, flags, null, design);
     }
 
     /// <summary>
-    /// Computes the loads on an existing bin table built with the same occupancy flags
-    /// (<paramref name="occupied"/>, one per hour); peaks only when <paramref name="design"/> is given; each hour's
-    /// loads in <see cref="OutdoorAirResult.Hours"/> when <paramref name="keepHours"/> is set (for energy bought at
-    /// each hour's outdoor temperature).
+    /// Computes the loads on a bin table of the record (built with the occupancy flags
+    /// <paramref name="occupied"/>), with joint bins of the default humidity width (10 gr/lb or 1 g/kg).
     /// </summary>
     /// <exception cref="ArgumentException">The settings have problems, or the flags do not match the record.</exception>
     public static OutdoorAirResult Compute(HourlyWeather weather, OutdoorAirSettings settings, BinTable table, bool[] occupied,
-        HumidityBinScale? jointScale = null, DesignConditions? design = null, bool keepHours = false)
+        PlantModel? plant = null, DesignConditions? design = null, bool keepHours = false)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        var cells = HourCells.Build(weather, table.Scale, HumidityBinScale.Default(table.Scale.Units));
+        return Compute(weather, settings, table, cells, occupied, plant, design, keepHours);
+    }
+
+    /// <summary>
+    /// Computes the loads on a bin table and hour cells of the record (built with the same
+    /// occupancy flags <paramref name="occupied"/>, one per hour); energy bought through
+    /// <paramref name="plant"/> when given; peaks only when <paramref name="design"/> is given;
+    /// each hour's figures in <see cref="OutdoorAirResult.Hours"/> when <paramref name="keepHours"/> is set.
+    /// </summary>
+    /// <exception cref="ArgumentException">The settings have problems, or the flags or cells do not match the record.</exception>
+    public static OutdoorAirResult Compute(HourlyWeather weather, OutdoorAirSettings settings, BinTable table, HourCells cells, bool[] occupied,
+        PlantModel? plant = null, DesignConditions? design = null, bool keepHours = false)
     {
         ArgumentNullException.ThrowIfNull(weather);
         ArgumentNullException.ThrowIfNull(settings);
         ArgumentNullException.ThrowIfNull(table);
+        ArgumentNullException.ThrowIfNull(cells);
         var problems = settings.Problems();
         if (problems.Count > 0)
         {
@@ -69,168 +87,39 @@ public static class OutdoorAirCalculator
         }
 
         BinTable.CheckFlags(weather, occupied);
-        double sitePressure = weather.Site.SitePressurePa;
-        var load = new OutdoorAirLoad(settings, sitePressure);
-        var flow = new FlowModel(settings, sitePressure);
-        bool always = settings.Operation == VentilationOperation.Always;
-
-        var profile = settings.AirflowMultipliers;
-        var byHour = new double[24];
-        for (int h = 0; h < 24; h++)
+        if (cells.CellOfHour.Length != weather.Count || cells.DryBulbBins != table.Rows.Count || cells.FirstDryBulbIndex != table.FirstIndex)
         {
-            byHour[h] = settings.AirflowMultiplier(h);
+            throw new ArgumentException("the hour cells were not built from this record with the bin table's scale", nameof(cells));
         }
 
-        var hours = keepHours ? new OutdoorAirTotals?[weather.Count] : null;
-        var binSums = new LoadSums[table.Rows.Count];
-        var binMultiplierSums = new double[table.Rows.Count];
-        var monthSums = new LoadSums[12];
-        var hourly = default(LoadSums);
-        double densitySum = 0;
-        var t = weather.DryBulbC;
-        var w = weather.HumidityRatio;
-        var p = weather.PressurePa;
-        var times = weather.Times;
-        var scale = table.Scale;
-        int first = table.FirstIndex;
-        for (int i = 0; i < t.Length; i++)
-        {
-            if (!always && !occupied[i])
-            {
-                continue;
-            }
-
-            double rho = flow.Density(t[i], w[i], p[i]);
-            densitySum += rho;
-            load.Evaluate(t[i], w[i], out var s);
-            double f = byHour[times[i].Hour];
-            double m = rho * flow.VolumeM3PerS * f;
-            double fan = flow.FanPower(s.Recovering) * f;
-            hourly.Add(s, m, fan, 1);
-            if (hours is not null)
-            {
-                var one = default(LoadSums);
-                one.Add(s, m, fan, 1);
-                hours[i] = one.ToTotals();
-            }
-
-            int bin = scale.IndexOf(t[i]) - first;
-            binSums[bin].Add(s, m, fan, 1);
-            binMultiplierSums[bin] += f;
-            monthSums[times[i].Month - 1].Add(s, m, fan, 1);
-        }
-
-        var occupancy = always ? OccupancyClass.All : OccupancyClass.Occupied;
-        var binMethod = default(LoadSums);
-        var rows = new OutdoorAirBinRow[table.Rows.Count];
-        for (int b = 0; b < rows.Length; b++)
-        {
-            var row = table.Rows[b];
-            var stats = row.For(occupancy);
-            var own = default(LoadSums);
-            var at = stats.IsEmpty ? row.Mid : Temperature.FromCelsius(BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, stats));
-            if (!stats.IsEmpty)
-            {
-                double f = binSums[b].Hours > 0 ? binMultiplierSums[b] / binSums[b].Hours : 1.0;
-                AddBin(ref own, load, flow, at.Celsius, stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
-                binMethod.Add(own);
-            }
-
-            rows[b] = new OutdoorAirBinRow(row, stats.Hours, stats.MeanHumidityRatio, own.ToTotals(), binSums[b].ToTotals()) { EvaluatedAt = at };
-        }
-
-        OutdoorAirTotals? joint = null;
-        if (jointScale is HumidityBinScale js)
-        {
-            var cells = JointBinTable.Build(weather, scale, js, occupied);
-            var cellMultipliers = profile is null ? null : JointCellMultipliers(weather, scale, js, byHour, occupied, always);
-            var sums = default(LoadSums);
-            foreach (var cell in cells.Cells)
-            {
-                var stats = cell.For(occupancy);
-                if (!stats.IsEmpty)
-                {
-                    double f = cellMultipliers is not null && cellMultipliers.TryGetValue((cell.DryBulbIndex, cell.HumidityIndex), out var c) && c.Hours > 0
-                        ? c.Sum / c.Hours
-                        : 1.0;
-                    AddBin(ref sums, load, flow, BinEvaluation.DryBulbC(settings.BinPoint, cell.DryBulbMid, stats), stats.MeanHumidityRatio.KilogramsPerKilogram, stats.Hours, sitePressure, f);
-                }
-            }
-
-            joint = sums.ToTotals();
-        }
-
-        var months = new List<OutdoorAirMonth>();
-        for (int m = 0; m < 12; m++)
-        {
-            if (monthSums[m].Hours > 0)
-            {
-                months.Add(new OutdoorAirMonth(m + 1, monthSums[m].ToTotals()));
-            }
-        }
-
-        double density = flow.Basis == FlowBasis.Actual
-            ? (hourly.Hours > 0 ? densitySum / hourly.Hours : FlowBasisDensity.Site(sitePressure))
-            : flow.ConstantDensity;
-        var assumptions = new OutdoorAirAssumptions(
-            Airflow: settings.EffectiveAirflow,
-            FlowBasis: settings.FlowBasis,
-            DryAirDensity: density,
-            Factors: AirflowFactors.For(density, 0.0),
-            SitePressure: Pressure.FromPascals(sitePressure),
-            HeatTo: settings.HeatTo,
-            CoolTo: settings.CoolTo,
-            MaxRelativeHumidity: settings.MaxRelativeHumidity,
-            MinRelativeHumidity: settings.MinRelativeHumidity,
-            MaxHumidityRatio: load.MaxHumidityRatio,
-            MinHumidityRatio: load.MinHumidityRatio,
-            Operation: settings.Operation,
-            Schedule: always ? "always (ventilation runs every hour)" : settings.Schedule.Text,
-            BinScale: scale,
-            BinPoint: settings.BinPoint,
-            Recovery: settings.Recovery,
-            FanPenalty: Power.FromWatts(flow.FanPowerW),
-            Calendar: weather.Calendar.Note);
-
+        var engine = new Engine(weather, settings, plant);
+        var hourly = engine.SumHours(occupied, cells, keepHours);
+        var bins = engine.BinRows(table, cells, hourly);
+        var months = engine.Months(cells, hourly);
+        var annual = new ByMethod<EnergyFigures>(Sum(bins, m => m.Hourly), Sum(bins, m => m.JointBin), Sum(bins, m => m.Bin));
         return new OutdoorAirResult
         {
-            Bin = binMethod.ToTotals(),
-            Hourly = hourly.ToTotals(),
-            Hours = hours,
-            JointBin = joint,
-            Bins = rows,
+            Annual = annual,
+            Bins = bins,
             Months = months,
+            Hours = hourly.Hours,
+            HasPlant = plant is not null,
             Peaks = design is null ? null : DesignPeakLoads.Compute(weather, settings, design),
-            Assumptions = assumptions,
-            Warnings = Warnings(weather, settings, hourly.Hours),
+            Assumptions = engine.Assumptions(table.Scale, cells.HumidityScale, hourly.DensitySum, annual.Hourly.Loads.HoursVentilated),
+            Warnings = Warnings(weather, settings, (int)annual.Hourly.Loads.HoursVentilated),
+            Clamps = hourly.Clamps,
         };
     }
 
-    private static void AddBin(ref LoadSums sums, OutdoorAirLoad load, FlowModel flow, double t, double w, int hours, double sitePressure, double multiplier)
+    private static EnergyFigures Sum(IReadOnlyList<OutdoorAirBinRow> rows, Func<ByMethod<EnergyFigures>, EnergyFigures> pick)
     {
-        load.Evaluate(t, w, out var s);
-        double m = flow.Density(t, w, sitePressure) * flow.VolumeM3PerS * multiplier;
-        sums.Add(s, m, flow.FanPower(s.Recovering) * multiplier, hours);
-    }
-
-    /// <summary>Mean airflow multiplier over the ventilated hours of each joint cell, by (dry-bulb index, humidity index).</summary>
-    private static Dictionary<(int K, int J), (double Sum, int Hours)> JointCellMultipliers(HourlyWeather weather, DryBulbBinScale scale,
-        HumidityBinScale js, double[] byHour, bool[] occupied, bool always)
-    {
-        var t = weather.DryBulbC;
-        var w = weather.HumidityRatio;
-        var times = weather.Times;
-        var result = new Dictionary<(int K, int J), (double Sum, int Hours)>();
-        for (int i = 0; i < t.Length; i++)
+        var sum = EnergyFigures.Zero;
+        foreach (var r in rows)
         {
-            if (always || occupied[i])
-            {
-                ref var entry = ref CollectionsMarshal.GetValueRefOrAddDefault(result, (scale.IndexOf(t[i]), js.IndexOf(w[i])), out _);
-                entry = (entry.Sum + byHour[times[i].Hour], entry.Hours + 1);
-            }
+            sum += pick(r.Figures);
         }
 
-        return result;
+        return sum;
     }
 
     private static List<string> Warnings(HourlyWeather weather, OutdoorAirSettings settings, int hoursVentilated)
@@ -241,6 +130,11 @@ public static class OutdoorAirCalculator
         {
             warnings.Add(FormattableString.Invariant(
                 $"The airflow {given.Cfm:0} cfm ({given.LitresPerSecond:0} L/s) is below the people-and-area minimum you entered, {rate.OutdoorAirflow.Cfm:0} cfm ({rate.OutdoorAirflow.LitresPerSecond:0} L/s). Too little outdoor air harms occupants: the ventilation rate must meet the locally adopted code and the judgement of the responsible licensed engineer."));
+        }
+
+        if (settings.EffectiveAirflow.CubicMetresPerSecond == 0)
+        {
+            warnings.Add("The outdoor airflow is zero, so every load is zero. An occupied building needs the outdoor air its ventilation code requires; too little outdoor air harms occupants.");
         }
 
         if (hoursVentilated == 0)
@@ -256,32 +150,207 @@ public static class OutdoorAirCalculator
         return warnings;
     }
 
-    /// <summary>How volume becomes mass, and the recovery fan's power; fixed for one run.</summary>
-    private readonly struct FlowModel
+    /// <summary>What one pass over the hours summed.</summary>
+    private sealed class HourlySums(int bins, int cells)
     {
-        private readonly bool bypassWhenIdle;
+        public EnergyFigures[] ByBin { get; } = new EnergyFigures[bins];
 
-        public FlowModel(OutdoorAirSettings settings, double sitePressurePa)
+        public EnergyFigures[] ByMonth { get; } = new EnergyFigures[12];
+
+        public CellStatistics[] Cells { get; } = new CellStatistics[cells];
+
+        public EnergyFigures[]? Hours { get; set; }
+
+        public double DensitySum { get; set; }
+
+        public CurveClampCounter Clamps { get; } = new();
+    }
+
+    /// <summary>The settings resolved once for a run: the load model, the flow and fan model and the plant.</summary>
+    private sealed class Engine
+    {
+        private readonly HourlyWeather weather;
+        private readonly OutdoorAirSettings settings;
+        private readonly OutdoorAirLoad load;
+        private readonly PlantModel? plant;
+        private readonly double sitePressure;
+        private readonly double volume;
+        private readonly double constantDensity;
+        private readonly double fanPowerW;
+        private readonly bool bypassWhenIdle;
+        private readonly bool always;
+        private readonly double[] multiplierByHour = new double[24];
+        private readonly CurveClampCounter binClamps = new();
+
+        public Engine(HourlyWeather weather, OutdoorAirSettings settings, PlantModel? plant)
         {
-            Basis = settings.FlowBasis;
-            VolumeM3PerS = settings.EffectiveAirflow.CubicMetresPerSecond;
-            ConstantDensity = Basis == FlowBasis.Actual ? double.NaN : FlowBasisDensity.For(Basis, sitePressurePa, 0, 0, sitePressurePa);
+            this.weather = weather;
+            this.settings = settings;
+            this.plant = plant;
+            sitePressure = weather.Site.SitePressurePa;
+            load = new OutdoorAirLoad(settings, sitePressure);
+            volume = settings.EffectiveAirflow.CubicMetresPerSecond;
+            constantDensity = settings.FlowBasis == FlowBasis.Actual ? double.NaN : FlowBasisDensity.For(settings.FlowBasis, sitePressure, 0, 0, sitePressure);
             var r = settings.Recovery;
-            FanPowerW = r is null ? 0.0 : 2.0 * VolumeM3PerS * r.PressureDropPa / r.FanEfficiency;
+            fanPowerW = r is null ? 0.0 : 2.0 * volume * r.PressureDropPa / r.FanEfficiency;
             bypassWhenIdle = r?.BypassWhenIdle ?? false;
+            always = settings.Operation == VentilationOperation.Always;
+            for (int h = 0; h < 24; h++)
+            {
+                multiplierByHour[h] = settings.AirflowMultiplier(h);
+            }
         }
 
-        public FlowBasis Basis { get; }
+        private double Density(double t, double w, double p) =>
+            settings.FlowBasis == FlowBasis.Actual ? MoistAir.DryAirDensity(t, w, p) : constantDensity;
 
-        public double VolumeM3PerS { get; }
+        /// <summary>The figures of <paramref name="hours"/> hours at one outdoor state, density, airflow multiplier and plant temperature.</summary>
+        private EnergyFigures At(double t, double w, double rho, double multiplier, double hours, CurveClampCounter clamps)
+        {
+            var perKg = load.Evaluate(t, w, out bool recovering);
+            double seconds = 3600.0 * hours;
+            var loads = perKg.Scaled(rho * volume * multiplier * seconds);
+            loads.Add(LoadFigure.FanEnergy, (bypassWhenIdle && !recovering ? 0.0 : fanPowerW) * multiplier * seconds);
+            loads.AddHours(hours);
+            return new EnergyFigures(loads, plant?.Buy(loads, t, clamps) ?? PlantEnergy.Zero);
+        }
 
-        public double ConstantDensity { get; }
+        /// <summary>The hourly method: every ventilated hour into its month and bin, and the cells' statistics.</summary>
+        public HourlySums SumHours(bool[] occupied, HourCells cells, bool keepHours)
+        {
+            var sums = new HourlySums(cells.DryBulbBins, cells.Count) { Hours = keepHours ? new EnergyFigures[weather.Count] : null };
+            var t = weather.DryBulbC;
+            var w = weather.HumidityRatio;
+            var p = weather.PressurePa;
+            var times = weather.Times;
+            var cellOf = cells.CellOfHour;
+            var binOf = cells.DryBulbBinOfCell;
+            double densitySum = 0;
+            for (int i = 0; i < t.Length; i++)
+            {
+                if (!always && !occupied[i])
+                {
+                    continue;
+                }
 
-        public double FanPowerW { get; }
+                double rho = Density(t[i], w[i], p[i]);
+                densitySum += rho;
+                double f = multiplierByHour[times[i].Hour];
+                var figures = At(t[i], w[i], rho, f, 1.0, sums.Clamps);
+                int c = cellOf[i];
+                sums.ByBin[binOf[c]] += figures;
+                sums.ByMonth[times[i].Month - 1] += figures;
+                sums.Cells[c].Add(t[i], w[i], f);
+                if (sums.Hours is not null)
+                {
+                    sums.Hours[i] = figures;
+                }
+            }
 
-        public double Density(double t, double w, double p) =>
-            Basis == FlowBasis.Actual ? MoistAir.DryAirDensity(t, w, p) : ConstantDensity;
+            sums.DensitySum = densitySum;
+            return sums;
+        }
 
-        public double FanPower(bool recovering) => bypassWhenIdle && !recovering ? 0.0 : FanPowerW;
+        /// <summary>A bin or cell by a bin method: at its evaluation dry-bulb and mean humidity ratio, times its hours.</summary>
+        private EnergyFigures Evaluate(in CellStatistics stats, Temperature mid)
+        {
+            if (stats.Hours <= 0)
+            {
+                return EnergyFigures.Zero;
+            }
+
+            double t = BinEvaluation.DryBulbC(settings.BinPoint, mid, stats);
+            double w = stats.MeanHumidityRatio;
+            return At(t, w, Density(t, w, sitePressure), stats.MeanWeight, stats.Hours, binClamps);
+        }
+
+        /// <summary>Per dry-bulb bin: the hourly sum of its hours, joint bins (its cells merged over month) and the bin method.</summary>
+        public List<OutdoorAirBinRow> BinRows(BinTable table, HourCells cells, HourlySums hourly)
+        {
+            int nb = cells.DryBulbBins;
+            int nj = cells.HumidityBins;
+            var (binStats, jointStats) = cells.Merge(hourly.Cells);
+
+            var rows = new List<OutdoorAirBinRow>(nb);
+            for (int b = 0; b < nb; b++)
+            {
+                var row = table.Rows[b];
+                var joint = EnergyFigures.Zero;
+                for (int j = 0; j < nj; j++)
+                {
+                    joint += Evaluate(jointStats[b * nj + j], row.Mid);
+                }
+
+                var stats = binStats[b];
+                rows.Add(new OutdoorAirBinRow(row, (int)stats.Hours, HumidityRatio.FromKilogramsPerKilogram(stats.MeanHumidityRatio),
+                    Temperature.FromCelsius(BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, stats)),
+                    new ByMethod<EnergyFigures>(hourly.ByBin[b], joint, Evaluate(stats, row.Mid))));
+            }
+
+            return rows;
+        }
+
+        /// <summary>Per calendar month with ventilated hours: the hourly sum, joint bins (each cell) and the bin method (the month's bins).</summary>
+        public List<OutdoorAirMonth> Months(HourCells cells, HourlySums hourly)
+        {
+            int nb = cells.DryBulbBins;
+            var monthBins = new CellStatistics[12 * nb];
+            var joint = new EnergyFigures[12];
+            for (int c = 0; c < cells.Count; c++)
+            {
+                int m = cells.MonthOfCell[c];
+                int b = cells.DryBulbBinOfCell[c];
+                monthBins[m * nb + b].Add(hourly.Cells[c]);
+                joint[m] += Evaluate(hourly.Cells[c], cells.DryBulbScale.Mid(cells.FirstDryBulbIndex + b));
+            }
+
+            var months = new List<OutdoorAirMonth>();
+            for (int m = 0; m < 12; m++)
+            {
+                if (hourly.ByMonth[m].Loads.HoursVentilated <= 0)
+                {
+                    continue;
+                }
+
+                var bin = EnergyFigures.Zero;
+                for (int b = 0; b < nb; b++)
+                {
+                    bin += Evaluate(monthBins[m * nb + b], cells.DryBulbScale.Mid(cells.FirstDryBulbIndex + b));
+                }
+
+                months.Add(new OutdoorAirMonth(m + 1, new ByMethod<EnergyFigures>(hourly.ByMonth[m], joint[m], bin)));
+            }
+
+            return months;
+        }
+
+        public OutdoorAirAssumptions Assumptions(DryBulbBinScale scale, HumidityBinScale humidity, double densitySum, double hoursVentilated)
+        {
+            double density = settings.FlowBasis == FlowBasis.Actual
+                ? (hoursVentilated > 0 ? densitySum / hoursVentilated : FlowBasisDensity.Site(sitePressure))
+                : constantDensity;
+            return new OutdoorAirAssumptions(
+                Airflow: settings.EffectiveAirflow,
+                FlowBasis: settings.FlowBasis,
+                DryAirDensity: density,
+                Factors: AirflowFactors.For(density, 0.0),
+                SitePressure: Pressure.FromPascals(sitePressure),
+                HeatTo: settings.HeatTo,
+                CoolTo: settings.CoolTo,
+                MaxRelativeHumidity: settings.MaxRelativeHumidity,
+                MinRelativeHumidity: settings.MinRelativeHumidity,
+                MaxHumidityRatio: load.MaxHumidityRatio,
+                MinHumidityRatio: load.MinHumidityRatio,
+                Operation: settings.Operation,
+                Schedule: always ? "always (ventilation runs every hour)" : settings.Schedule.Text,
+                BinScale: scale,
+                BinPoint: settings.BinPoint,
+                Recovery: settings.Recovery,
+                FanPenalty: Power.FromWatts(fanPowerW),
+                Calendar: weather.Calendar.Note)
+            {
+                HumidityScale = humidity,
+            };
+        }
     }
 }

@@ -68,18 +68,25 @@ public sealed class OutdoorAirLoad
     /// <summary>Minimum indoor humidity ratio W_min (at T_h and the minimum RH), when set.</summary>
     public HumidityRatio? MinHumidityRatio => hasMin ? HumidityRatio.FromKilogramsPerKilogram(wMin) : null;
 
-    /// <summary>The load rates of outdoor air at a state and a dry-air mass flow (kg/s).</summary>
-    public OutdoorAirLoadRates At(Temperature dryBulb, HumidityRatio humidityRatio, double dryAirMassFlowKgPerS)
+    /// <summary>
+    /// The loads of one hour of outdoor air at a state and a dry-air mass flow (kg/s); the fan
+    /// figure is left at zero (the fan is the flow model's). Its energies over 3,600 s are the
+    /// load rates: see <see cref="OutdoorAirPeak.Rate"/>.
+    /// </summary>
+    public LoadVector OneHourAt(Temperature dryBulb, HumidityRatio humidityRatio, double dryAirMassFlowKgPerS)
     {
-        Evaluate(dryBulb.Celsius, humidityRatio.KilogramsPerKilogram, out var s);
-        double m = dryAirMassFlowKgPerS;
-        return new OutdoorAirLoadRates(Power.FromWatts(s.Heating * m), Power.FromWatts(s.CoolingSensible * m),
-            Power.FromWatts(s.CoolingLatent * m), Power.FromWatts(s.Humidification * m),
-            Power.FromWatts(s.RecoveredHeating * m), Power.FromWatts(s.RecoveredCooling * m));
+        var perKg = Evaluate(dryBulb.Celsius, humidityRatio.KilogramsPerKilogram, out _);
+        var hour = perKg.Scaled(dryAirMassFlowKgPerS * 3600.0);
+        hour.AddHours(1.0);
+        return hour;
     }
 
-    /// <summary>Loads per unit mass of dry air (J/kg) of an outdoor state: dry-bulb in C, humidity ratio in kg/kg.</summary>
-    internal void Evaluate(double t, double w, out SpecificLoads r)
+    /// <summary>
+    /// Loads per unit mass of dry air (J/kg in each energy figure; no fan energy, no hours) of an
+    /// outdoor state: dry-bulb in C, humidity ratio in kg/kg. <paramref name="recovering"/> says
+    /// whether the recovery device changed the air's state.
+    /// </summary>
+    internal LoadVector Evaluate(double t, double w, out bool recovering)
     {
         double cp = MoistAir.DryAirSpecificHeat + MoistAir.VapourSpecificHeat * w;
         const double hfg = MoistAir.LatentHeat;
@@ -87,14 +94,15 @@ public sealed class OutdoorAirLoad
         double coolS0 = t > tc ? cp * (t - tc) : 0.0;
         double lat0 = w > wMax ? hfg * (w - wMax) : 0.0;
         double hum0 = hasMin && w < wMin ? hfg * (wMin - w) : 0.0;
-        r = default;
+        var r = LoadVector.Zero;
+        recovering = false;
         if (!hasRecovery)
         {
-            r.Heating = heat0;
-            r.CoolingSensible = coolS0;
-            r.CoolingLatent = lat0;
-            r.Humidification = hum0;
-            return;
+            r.Add(LoadFigure.Heating, heat0);
+            r.Add(LoadFigure.CoolingSensible, coolS0);
+            r.Add(LoadFigure.CoolingLatent, lat0);
+            r.Add(LoadFigure.Humidification, hum0);
+            return r;
         }
 
         bool frost = t < frostLimit;
@@ -104,12 +112,17 @@ public sealed class OutdoorAirLoad
         double wx = w > wMax ? wMax : hasMin && w < wMin ? wMin : w;
         double t1 = t + eS * (tx - t);
         double w1 = w + eL * (wx - w);
-        r.Heating = t1 < th ? cp * (th - t1) : 0.0;
-        r.CoolingSensible = t1 > tc ? cp * (t1 - tc) : 0.0;
-        r.CoolingLatent = w1 > wMax ? hfg * (w1 - wMax) : 0.0;
-        r.Humidification = hasMin && w1 < wMin ? hfg * (wMin - w1) : 0.0;
-        r.RecoveredHeating = heat0 - r.Heating + (hum0 - r.Humidification);
-        r.RecoveredCooling = coolS0 - r.CoolingSensible + (lat0 - r.CoolingLatent);
-        r.Recovering = (eS > 0 && tx != t) || (eL > 0 && wx != w);
+        double heat = t1 < th ? cp * (th - t1) : 0.0;
+        double coolS = t1 > tc ? cp * (t1 - tc) : 0.0;
+        double lat = w1 > wMax ? hfg * (w1 - wMax) : 0.0;
+        double hum = hasMin && w1 < wMin ? hfg * (wMin - w1) : 0.0;
+        r.Add(LoadFigure.Heating, heat);
+        r.Add(LoadFigure.CoolingSensible, coolS);
+        r.Add(LoadFigure.CoolingLatent, lat);
+        r.Add(LoadFigure.Humidification, hum);
+        r.Add(LoadFigure.RecoveredHeating, heat0 - heat + (hum0 - hum));
+        r.Add(LoadFigure.RecoveredCooling, coolS0 - coolS + (lat0 - lat));
+        recovering = (eS > 0 && tx != t) || (eL > 0 && wx != w);
+        return r;
     }
 }

@@ -9,4 +9,8 @@ public sealed record OutdoorAirPeaks(
     OutdoorAirPeak Heating,
     OutdoorAirPeak Cooling,
     OutdoorAirPeak Dehumidification,
-    string Method);
+    string Method)
+{
+    /// <summary>The conditions in the order outputs list them.</summary>
+    public IReadOnlyList<OutdoorAirPeak> All => [Heating, Cooling, Dehumidification];
+}

@@ -81,9 +81,9 @@ public sealed record OutdoorAirSettings
             problems.Add("no airflow: give a volume flow, or people and area rates");
         }
 
-        if (Airflow is VolumeFlow v && !(v.CubicMetresPerSecond > 0 && v.Cfm <= 1e7))
+        if (Airflow is VolumeFlow v && !(v.CubicMetresPerSecond >= 0 && v.Cfm <= 1e7))
         {
-            problems.Add(FormattableString.Invariant($"airflow {v.Cfm:0.#} cfm ({v.LitresPerSecond:0.#} L/s) must be above zero and at most 10,000,000 cfm"));
+            problems.Add(FormattableString.Invariant($"airflow {v.Cfm:0.#} cfm ({v.LitresPerSecond:0.#} L/s) must be zero or more and at most 10,000,000 cfm"));
         }
 
         if (Ventilation is not null)

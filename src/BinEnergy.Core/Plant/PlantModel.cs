@@ -13,6 +13,36 @@ public sealed class PlantModel(PlantSettings settings)
     /// <summary>The settings this model applies.</summary>
     public PlantSettings Settings { get; } = settings;
 
+    /// <summary>
+    /// The energy bought for a set of loads at one outdoor dry-bulb: heating by the heating
+    /// source, sensible plus latent cooling through the cooling COP, humidification by the
+    /// humidifier, fan energy as electricity.
+    /// </summary>
+    /// <param name="loads">The loads (an hour's, or a bin's over its hours).</param>
+    /// <param name="outdoorC">Outdoor dry-bulb for the COP curves, C.</param>
+    /// <param name="clamps">Where evaluations outside a COP curve's points are counted (in the loads' hours).</param>
+    public PlantEnergy Buy(in Loads.LoadVector loads, double outdoorC, CurveClampCounter clamps)
+    {
+        var bought = PlantEnergy.Zero;
+        double hours = loads.HoursVentilated;
+        bought.Add(EndUse.Heating, Heating(loads.Heating.Joules, outdoorC, hours, clamps));
+        bought.Add(EndUse.Cooling, Cooling(loads.Cooling.Joules, outdoorC, hours, clamps));
+        bought.Add(EndUse.Fans, Electricity(loads.FanEnergy.Joules));
+        bought.Add(EndUse.Humidification, Humidification(loads.Humidification.Joules));
+        return bought;
+    }
+
+    /// <summary>The cooling COP at an outdoor dry-bulb (held at the end value outside the points, and counted for <paramref name="hours"/>).</summary>
+    public double CoolingCop(double outdoorC, double hours, CurveClampCounter clamps)
+    {
+        if (Settings.CoolingCop.IsOutside(outdoorC))
+        {
+            clamps.CoolingHours += hours;
+        }
+
+        return Settings.CoolingCop.Evaluate(outdoorC);
+    }
+
     /// <summary>Energy bought to meet a heating load.</summary>
     /// <param name="heatingJ">Heating delivered to the air, J.</param>
     /// <param name="outdoorC">Outdoor dry-bulb, C (for a heat pump's COP).</param>
@@ -52,12 +82,7 @@ public sealed class PlantModel(PlantSettings settings)
             return SiteEnergy.Zero;
         }
 
-        if (Settings.CoolingCop.IsOutside(outdoorC))
-        {
-            clamps.CoolingHours += hours;
-        }
-
-        return Electricity(coilJ / Settings.CoolingCop.Evaluate(outdoorC));
+        return Electricity(coilJ / CoolingCop(outdoorC, hours, clamps));
     }
 
     /// <summary>Electricity bought for a humidification load, J.</summary>

@@ -31,6 +31,9 @@ public readonly record struct SiteEnergy(double ElectricityJ, double GasJ, doubl
         joules * tariff.PricePerJoule,
         joules * tariff.CarbonKgPerJoule);
 
+    /// <summary>Every amount multiplied by <paramref name="factor"/>.</summary>
+    public SiteEnergy Scaled(double factor) => new(ElectricityJ * factor, GasJ * factor, OilJ * factor, Cost * factor, CarbonKg * factor);
+
     public static SiteEnergy operator +(SiteEnergy a, SiteEnergy b) => new(
         a.ElectricityJ + b.ElectricityJ, a.GasJ + b.GasJ, a.OilJ + b.OilJ, a.Cost + b.Cost, a.CarbonKg + b.CarbonKg);
 

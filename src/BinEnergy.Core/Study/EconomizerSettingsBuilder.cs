@@ -18,7 +18,7 @@ internal static class EconomizerSettingsBuilder
         bool integrated = e.Bool("integrated") ?? true;
         var names = e.TextList("controls") ?? EconomizerControl.EconomizerKinds.Select(EconomizerControl.NameOf).ToList();
         var controls = new List<EconomizerControl>();
-        foreach (var n in names)
+        foreach (var n in names.Where(n => n != "none"))
         {
             if (!EconomizerControl.TryParse(n, integrated, out var c))
             {
@@ -26,6 +26,11 @@ internal static class EconomizerSettingsBuilder
             }
 
             controls.Add(c);
+        }
+
+        if (controls.Count == 0)
+        {
+            throw e.ErrorAt("controls", "name at least one economizer control to compare with the baseline (\"none\" is the baseline, always shown)");
         }
 
         var suggested = HighLimits.Suggested;

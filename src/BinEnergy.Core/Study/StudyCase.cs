@@ -12,14 +12,14 @@ namespace BinEnergy.Core.Study;
 /// <param name="Variant">The variant.</param>
 /// <param name="OutdoorAir">Outdoor-air settings.</param>
 /// <param name="BinScale">Dry-bulb bins in the study's display unit.</param>
-/// <param name="Plant">The plant.</param>
+/// <param name="Plant">The plant, or null when the study has no [plant] table (loads only).</param>
 /// <param name="Assumptions">Defaults taken for keys the study leaves out.</param>
 public sealed record StudyCase(
     StudyClimate Climate,
     StudyVariant Variant,
     OutdoorAirSettings OutdoorAir,
     DryBulbBinScale BinScale,
-    PlantSettings Plant,
+    PlantSettings? Plant,
     IReadOnlyList<string> Assumptions)
 {
     /// <summary>The economizer system, or null when the study (or this variant) has none.</summary>

@@ -27,13 +27,18 @@ public static class StudyCaseBuilder
         var schedule = Schedule(s["schedule"]);
         var outdoorAir = OutdoorAir(s["ventilation"], s["recovery"], s["plant"], schedule, assumptions) with
         {
-            BinPoint = s["study"].Text("bin_point") == "midpoint" ? BinEvaluationPoint.Midpoint : BinEvaluationPoint.MeanDryBulb,
+            BinPoint = s["study"].Text("bin_point") is "midpoint" or "mid" ? BinEvaluationPoint.Midpoint : BinEvaluationPoint.MeanDryBulb,
         };
         double? widthK = s["study"].Number("bin_width");
         var scale = widthK is double k
             ? new DryBulbBinScale(TemperatureDifference.FromKelvin(k), study.Units)
             : DryBulbBinScale.Default(study.Units);
-        var plant = PlantSettingsBuilder.Build(s["plant"], assumptions);
+        var plant = s["plant"].Present ? PlantSettingsBuilder.Build(s["plant"], assumptions) : null;
+        if (plant is null)
+        {
+            assumptions.Add("no [plant] table: loads only; no energy bought, cost or carbon");
+        }
+
         var economizer = EconomizerSettingsBuilder.Build(s["economizer"], outdoorAir, schedule, assumptions);
         return new StudyCase(study.Climates[0], variant, outdoorAir, scale, plant, assumptions) { Economizer = economizer };
     }
@@ -199,7 +204,8 @@ public static class StudyCaseBuilder
             FrostLimit = r.Number("frost_limit") is double f ? Temperature.FromCelsius(f) : null,
             FrostEffectiveness = frost,
             PressureDropPa = r.Number("pressure_drop") ?? 0.0,
-            FanEfficiency = plant.Number("fan_efficiency") ?? PlantSettingsBuilder.DefaultFanEfficiency,
+            FanEfficiency = r.Number("fan_efficiency") ?? plant.Number("fan_efficiency") ?? PlantSettingsBuilder.DefaultFanEfficiency,
+            BypassWhenIdle = r.Bool("bypass_when_idle") ?? false,
         };
         var problems = settings.Problems().ToList();
         if (problems.Count > 0)

@@ -17,4 +17,8 @@ public sealed record StudyDefinition(
     string Currency,
     string Hash,
     IReadOnlyList<StudyClimate> Climates,
-    IReadOnlyList<StudyVariant> Variants);
+    IReadOnlyList<StudyVariant> Variants)
+{
+    /// <summary>The method of the headline figures (<c>[study] headline_method</c>, default hourly).</summary>
+    public Loads.IntegrationMethod HeadlineMethod { get; init; } = Loads.IntegrationMethod.Hourly;
+}

@@ -27,6 +27,19 @@ public static class StudyFileReader
         return Parse(text, path, Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".");
     }
 
+    /// <summary>
+    /// Reads a study that a command line describes (<see cref="StudyInput"/>); relative paths
+    /// resolve against <paramref name="baseFolder"/>. Errors name <paramref name="source"/> and the
+    /// line the input gave the value (<see cref="StudyInput.OriginOf"/> turns it back into the option).
+    /// </summary>
+    /// <exception cref="StudyFileException">A value is not valid.</exception>
+    public static StudyDefinition FromInput(StudyInput input, string source, string baseFolder)
+    {
+        ArgumentNullException.ThrowIfNull(input);
+        var reader = new Reader(source, baseFolder);
+        return reader.Build(input.Entries(), input.Hash());
+    }
+
     /// <summary>Reads a study from its text; relative paths resolve against <paramref name="baseFolder"/>.</summary>
     public static StudyDefinition Parse(string text, string file, string baseFolder)
     {
@@ -74,7 +87,8 @@ public static class StudyFileReader
                 throw study.ErrorAt("currency", $"currency \"{currency}\" must be a short lower-case code such as \"usd\" or \"eur\" (it becomes part of column names)");
             }
 
-            return new StudyDefinition(file, name, units, currency, hash, climates, variants);
+            Loads.IntegrationMethods.TryParse(study.Text("headline_method") ?? "hourly", out var headline);
+            return new StudyDefinition(file, name, units, currency, hash, climates, variants) { HeadlineMethod = headline };
         }
 
         private void CheckTables(List<TomlEntry> entries)
@@ -372,7 +386,11 @@ public static class StudyFileReader
                     throw s.ErrorAt("name", $"climate \"{name}\" is already defined on line {dup.Line}; climate names must be unique");
                 }
 
-                list.Add(new StudyClimate(name, full, map, s.Number("elevation"), s.Get("name")!.Line));
+                list.Add(new StudyClimate(name, full, map, s.Number("elevation"), s.Get("name")!.Line)
+                {
+                    DropLongGaps = s.Bool("drop_long_gaps") ?? false,
+                    CalendarYear = s.Number("calendar_year") is double y ? (int)Math.Round(y) : null,
+                });
             }
 
             if (list.Count == 0)

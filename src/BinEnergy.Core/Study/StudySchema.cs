@@ -27,8 +27,10 @@ internal static class StudySchema
             Choice("units", ["ip", "si"], "ip", "Units of the tables, charts and report."),
             new KeyDefinition("bin_width", ValueKind.Number, TemperatureDifference("bin_width"), "Width of the dry-bulb bins.")
             { Min = 0.1 / 1.8, Max = 20.0, DefaultText = "5 F (ip) or 2 C (si)", RangeHint = "bins between 0.1 F and 20 K wide" },
-            Choice("bin_point", ["mean", "midpoint"], "mean",
-                "Where the bin method evaluates each bin: the mean dry-bulb of its ventilated hours, or its midpoint (the classic method)."),
+            Choice("bin_point", ["mean", "midpoint", "mid"], "mean",
+                "Where the bin method evaluates each bin: the mean dry-bulb of its ventilated hours, or its midpoint (midpoint or mid: the classic method)."),
+            Choice("headline_method", ["hourly", "joint-bin", "bin"], "hourly",
+                "The method of the headline figures (summary, report, cost and carbon, comparison charts); the others are shown beside it."),
             Text("currency", "Currency code of the prices, used in the cost column names (cost_usd).", "usd"),
         ], false, "The study's name, display units, bin width and bin evaluation point."),
 
@@ -39,6 +41,9 @@ internal static class StudySchema
             Text("map", "Column map for other layouts: a shipped map name or a path relative to the study file."),
             new KeyDefinition("elevation", ValueKind.Number, Length("elevation"), "Site elevation; overrides the file's metadata.")
             { Min = -500, Max = 6000, RangeHint = "elevations between -500 m and 6,000 m" },
+            Bool("drop_long_gaps", "Leave hours in gaps longer than 6 h out (counted and reported) instead of stopping with an error.", "false"),
+            new KeyDefinition("calendar_year", ValueKind.Number, Unitless("calendar_year"), "Year whose weekdays a typical-year file uses.")
+            { Min = 1900, Max = 2200, DefaultText = "2018 (a non-leap year starting on a Monday)", RangeHint = "a year from 1900 to 2200" },
         ], false, "One climate (weather file); repeat [[climate]] for several."),
 
         new("schedule", false,
@@ -49,7 +54,7 @@ internal static class StudySchema
 
         new("ventilation", false,
         [
-            new KeyDefinition("airflow", ValueKind.Number, Flow("airflow"), "Outdoor airflow.") { Min = 0, MinExclusive = true, Max = 1000, RangeHint = "a positive airflow (up to 1,000 m3/s)" },
+            new KeyDefinition("airflow", ValueKind.Number, Flow("airflow"), "Outdoor airflow.") { Min = 0, Max = 1000, RangeHint = "an airflow of zero or more (up to 1,000 m3/s)" },
             new KeyDefinition("people", ValueKind.Number, Unitless("people"), "Number of people (ventilation rate procedure).") { Min = 0, Max = 1e6 },
             new KeyDefinition("area", ValueKind.Number, Area("area"), "Floor area (ventilation rate procedure).") { Min = 0, Max = 1e7 },
             new KeyDefinition("per_person", ValueKind.Number, Flow("per_person"), "Outdoor air per person.") { Min = 0, Max = 0.1 },
@@ -77,6 +82,9 @@ internal static class StudySchema
             new KeyDefinition("frost_effectiveness", ValueKind.Number, Unitless("frost_effectiveness"), "Effectiveness below the frost limit.") { Min = 0, Max = 1 },
             new KeyDefinition("pressure_drop", ValueKind.Number, PressureDrop("pressure_drop"), "Added pressure drop on each air stream.")
             { Min = 0, Max = 2500, DefaultText = "0", RangeHint = "0 to 2,500 Pa (10 in. w.g.)" },
+            Bool("bypass_when_idle", "The air bypasses the device when it does not recover (no fan penalty in those hours).", "false"),
+            new KeyDefinition("fan_efficiency", ValueKind.Number, Unitless("fan_efficiency"), "Fan efficiency for the device's pressure drop (overrides plant.fan_efficiency).")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "plant.fan_efficiency, else 0.6" },
         ], true, "Energy recovery between exhaust and outdoor air; leave the table out for none."),
 
         new("economizer", false,
@@ -94,7 +102,7 @@ internal static class StudySchema
             new KeyDefinition("balance_point", ValueKind.Number, Temperature("balance_point"), "Outdoor temperature at which the cooling load is zero.") { Min = -20, Max = 40 },
             new KeyDefinition("controls", ValueKind.TextList, Unitless("controls"), "High-limit controls compared with the baseline.")
             {
-                Choices = ["fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"],
+                Choices = ["none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"],
                 DefaultText = "all five",
             },
             Bool("integrated", "true: the economizer keeps running while the coil trims; false: it locks out.", "true"),

@@ -3,6 +3,7 @@ using System.Net;
 using System.Text;
 using System.Text.RegularExpressions;
 using BinEnergy.Reporting.Charts;
+using BinEnergy.Reporting.Text;
 
 namespace BinEnergy.Reporting.Html;
 
@@ -36,7 +37,7 @@ public static partial class HtmlReport
             .Append("<p class=\"meta\">Run ").Append(E(FormatTime(model.Run.RunAt)))
             .Append(" · BinEnergy ").Append(E(model.Run.EngineVersion))
             .Append(" · study hash <code>").Append(E(model.Run.StudyHash)).Append("</code></p>\n")
-            .Append("<p class=\"banner\" role=\"note\"><strong>Caution.</strong> ").Append(E(ReportCautions.Banner)).Append("</p>\n")
+            .Append("<p class=\"banner\" role=\"note\"><strong>Caution.</strong> ").Append(E(Cautions.Banner)).Append("</p>\n")
             .Append("<nav aria-label=\"Contents\"><ol>");
         for (int i = 0; i < SectionIds.Count; i++)
         {
@@ -99,7 +100,7 @@ public static partial class HtmlReport
         Close(page);
 
         Open(page, 4);
-        Items(page, ReportCautions.Standard.Concat(model.ExtraCautions).ToArray(), "cautions");
+        Items(page, Cautions.Report.Concat(model.ExtraCautions).ToArray(), "cautions");
         Close(page);
 
         page.Append("</main>\n<footer><p>Made by BinEnergy ").Append(E(model.Run.EngineVersion))

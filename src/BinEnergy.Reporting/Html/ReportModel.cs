@@ -2,7 +2,7 @@ namespace BinEnergy.Reporting.Html;
 
 /// <summary>
 /// Everything a report page shows. The page always has, in this order: what was run,
-/// assumptions, results, warnings and cautions (<see cref="ReportCautions.Standard"/> plus
+/// assumptions, results, warnings and cautions (<see cref="Text.Cautions.Report"/> plus
 /// <see cref="ExtraCautions"/>). All text is plain; <see cref="HtmlReport"/> escapes it.
 /// </summary>
 public sealed record ReportModel

@@ -1,12 +1,13 @@
-using System.Globalization;
 using BinEnergy.Core.Loads;
-using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Study;
 using BinEnergy.Core.Units;
 using BinEnergy.Reporting.Charts;
 using BinEnergy.Reporting.Charts.Data;
 using BinEnergy.Reporting.Html;
+using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Tables;
+using BinEnergy.Reporting.Text;
+using BinEnergy.Reporting.Units;
 
 namespace BinEnergy.Reporting.Study;
 
@@ -14,19 +15,21 @@ namespace BinEnergy.Reporting.Study;
 /// Maps a finished study run onto the chart inputs and the HTML report model, and writes
 /// <c>charts/*.png|svg</c> and <c>report.html</c> into the run's output folder. It only
 /// reformats and converts results the engine computed; no physics here (the psychrometric
-/// chart's curves come from Core's <see cref="ChartCurves"/>).
+/// chart's curves come from Core's <see cref="Core.Psychrometrics.ChartCurves"/>).
 /// </summary>
 public static class StudyReport
 {
-    /// <summary>Renders every chart of the run (per climate: for the first variant; across climates: all cases).</summary>
+    /// <summary>Renders every chart of the run (per climate: for the first variant; across climates: all cases), by the study's headline method.</summary>
     public static IReadOnlyList<(string Name, RenderedChart Chart)> Charts(StudyRunResult run)
     {
+        var u = StudyTables.Units(run);
         var units = run.Study.Units;
-        bool ip = units == UnitSystem.IP;
-        string tUnit = ip ? "F" : "C";
-        string eUnit = ip ? "kBtu" : "kWh";
-        double T(double c) => Temperature.FromCelsius(c).In(units);
-        double E(double j) => Energy.FromJoules(j).In(units);
+        var headline = run.Study.HeadlineMethod;
+        string method = IntegrationMethods.Label(headline);
+        string tUnit = u.Temperature.Symbol;
+        string eUnit = u.Energy.Symbol;
+        double T(Temperature t) => u.Temperature.FromSi(t.Celsius);
+        double E(Energy e) => u.Energy.FromSi(e.Joules);
         var charts = new List<(string, RenderedChart)>();
 
         foreach (var climateCases in run.Cases.GroupBy(c => c.Case.Climate.Name))
@@ -35,86 +38,84 @@ public static class StudyReport
             string climate = climateCases.Key;
             string slug = Slug(climate);
             string subject = $"{climate}, {first.Case.Variant.Name}";
+            var bins = first.OutdoorAir.Bins;
 
             charts.Add(($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
             {
                 Subject = climate,
                 TemperatureUnit = tUnit,
-                Bins = first.Bins.Select(b => new BinHoursRow(T(b.LowC), T(b.HighC), b.HoursOccupied, b.Hours - b.HoursOccupied,
-                    b.Hours > 0 ? T(b.MeanCoincidentWetBulbC) : null)).ToList(),
+                Bins = bins.Select(b => new BinHoursRow(T(b.Bin.Low), T(b.Bin.High), b.Bin.Occupied.Hours, b.Bin.Unoccupied.Hours,
+                    b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
             })));
 
             charts.Add(($"load-by-bin-{slug}", LoadByBinChart.Render(new LoadByBinData
             {
-                Subject = subject,
+                Subject = $"{subject} ({method})",
                 TemperatureUnit = tUnit,
                 EnergyUnit = eUnit,
-                Bins = first.Bins.Select(b => new LoadByBinRow(T(b.LowC), T(b.HighC), E(b.Loads.HeatingJ), E(b.Loads.CoolingSensibleJ),
-                    E(b.Loads.CoolingLatentJ), E(b.Loads.HumidificationJ))).ToList(),
+                Bins = bins.Select(b =>
+                {
+                    var l = b.Figures[headline].Loads;
+                    return new LoadByBinRow(T(b.Bin.Low), T(b.Bin.High), E(l.Heating), E(l.CoolingSensible), E(l.CoolingLatent), E(l.Humidification));
+                }).ToList(),
             })));
 
-            var eco = first.EconomizerEvaluation;
+            var eco = first.Economizer;
             EconomizerRegionLimits? region = eco is null ? null : new EconomizerRegionLimits(
                 "differential enthalpy region (return air)",
                 Math.Min(eco.Settings.ReturnTemperature.Celsius, eco.Settings.Limits.DryBulb.Celsius),
-                MoistAir.Enthalpy(eco.Settings.ReturnTemperature.Celsius,
-                    MoistAir.HumidityRatioFromRelativeHumidity(eco.Settings.ReturnTemperature.Celsius, eco.Settings.ReturnRelativeHumidity, first.Weather.Site.SitePressurePa)));
+                eco.Model.ReturnEnthalpyJPerKg);
             charts.Add(($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
                 climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region))));
 
             if (eco is not null)
             {
-                var best = eco.Best;
+                var best = eco.Best(headline);
                 charts.Add(($"economizer-modes-{slug}", EconomizerModesChart.Render(new EconomizerModesData
                 {
                     Subject = subject,
                     ControlName = best.Control.Describe(),
                     TemperatureUnit = tUnit,
-                    Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(b.Low.In(units), b.High.In(units),
-                        best.ByBin[i].HoursNoCooling, best.ByBin[i].HoursFree, best.ByBin[i].HoursIntegrated, best.ByBin[i].HoursMinimum)).ToList(),
+                    Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
+                        best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
                 })));
                 charts.Add(($"economizer-savings-{slug}", EconomizerSavingsChart.Render(new SavingsByControlData
                 {
-                    Subject = subject + " (hourly method)",
+                    Subject = $"{subject} ({method})",
                     EnergyUnit = eUnit + " coil",
-                    Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), c.HourlySavings.In(units))).ToList(),
+                    Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), E(c.Savings(headline)))).ToList(),
                 })));
             }
 
             charts.Add(($"monthly-{slug}", MonthlyEnergyChart.Render(new MonthlyEnergyData
             {
-                Subject = subject,
+                Subject = $"{subject} ({method})",
                 EnergyUnit = eUnit,
                 Series =
                 [
-                    new MonthlyEnergySeries("heating", Months(first, f => E(f.HeatingJ)), ChartPalette.Heating),
-                    new MonthlyEnergySeries("sensible cooling", Months(first, f => E(f.CoolingSensibleJ)), ChartPalette.SensibleCooling),
-                    new MonthlyEnergySeries("latent cooling", Months(first, f => E(f.CoolingLatentJ)), ChartPalette.LatentCooling),
+                    new MonthlyEnergySeries("heating", Months(first, headline, l => E(l.Heating)), ChartPalette.Heating),
+                    new MonthlyEnergySeries("sensible cooling", Months(first, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
+                    new MonthlyEnergySeries("latent cooling", Months(first, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
                 ],
             })));
 
-            charts.Add(($"bin-vs-hourly-{slug}", BinVsHourlyChart.Render(new BinVsHourlyData
+            var annual = first.OutdoorAir.Annual;
+            charts.Add(($"method-check-{slug}", MethodCheckChart.Render(new MethodCheckData
             {
                 Subject = subject,
                 EnergyUnit = eUnit,
-                Rows =
-                [
-                    new BinVsHourlyRow("heating", E(first.AnnualBin.HeatingJ), E(first.AnnualHourly.HeatingJ)),
-                    new BinVsHourlyRow("sensible cooling", E(first.AnnualBin.CoolingSensibleJ), E(first.AnnualHourly.CoolingSensibleJ)),
-                    new BinVsHourlyRow("latent cooling", E(first.AnnualBin.CoolingLatentJ), E(first.AnnualHourly.CoolingLatentJ)),
-                    new BinVsHourlyRow("humidification", E(first.AnnualBin.HumidificationJ), E(first.AnnualHourly.HumidificationJ)),
-                ],
+                Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
+                    .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
             })));
         }
 
         var comparison = new ComparisonData
         {
-            Subject = run.Study.Name,
+            Subject = $"{run.Study.Name} ({method})",
             EnergyUnit = eUnit + " outdoor-air load",
-            CostUnit = run.Study.Currency.ToUpperInvariant(),
+            CostUnit = u.Cost.Symbol,
             Cells = run.Cases.Select(c => new ComparisonCell(c.Case.Climate.Name, c.Case.Variant.Name,
-                E(c.AnnualBin.HeatingJ + c.AnnualBin.CoolingSensibleJ + c.AnnualBin.CoolingLatentJ + c.AnnualBin.HumidificationJ),
-                c.AnnualBin.Total.Cost)).ToList(),
+                E(c.OutdoorAir.Annual[headline].Loads.ThermalTotal), c.OutdoorAir.Annual[headline].Bought.Total.Cost)).ToList(),
         };
         charts.Add(("comparison-energy", ComparisonChart.RenderEnergy(comparison)));
         charts.Add(("comparison-cost", ComparisonChart.RenderCost(comparison)));
@@ -124,15 +125,11 @@ public static class StudyReport
     /// <summary>The report model of a run, with its charts.</summary>
     public static ReportModel Model(StudyRunResult run, IReadOnlyList<(string Name, RenderedChart Chart)> charts, DateTimeOffset runAt)
     {
-        var units = run.Study.Units;
-        bool ip = units == UnitSystem.IP;
-        string eUnit = ip ? "kBtu" : "kWh";
-        double E(double j) => Energy.FromJoules(j).In(units);
+        var u = StudyTables.Units(run);
+        var headline = run.Study.HeadlineMethod;
         var first = run.Cases[0];
         var a = first.OutdoorAir.Assumptions;
-        string densityText = ip
-            ? F(a.DryAirDensity / Conversions.KilogramsPerPound * Conversions.CubicMetresPerCubicFoot, 4) + " lb/ft3 of dry air"
-            : F(a.DryAirDensity, 4) + " kg/m3 of dry air";
+        var summary = StudySummary.Build(run);
         var repairs = run.Cases.GroupBy(c => c.Case.Climate.Name).Select(g =>
         {
             var q = g.First().Weather.Quality;
@@ -145,24 +142,19 @@ public static class StudyReport
             return $"{g.Key} ({g.First().Weather.Count} hours): {counts}";
         }).ToList();
 
-        var annualRows = run.Cases.Select(c => (IReadOnlyList<string>)
-        [
-            c.Case.Climate.Name, c.Case.Variant.Name,
-            F(c.Case.OutdoorAir.EffectiveAirflow.In(units), 0),
-            F(E(c.AnnualBin.HeatingJ), 0), F(E(c.AnnualBin.CoolingSensibleJ), 0), F(E(c.AnnualBin.CoolingLatentJ), 0),
-            F(E(c.AnnualBin.RecoveredHeatingJ + c.AnnualBin.RecoveredCoolingJ), 0),
-            Pct(c.AnnualBin.HeatingJ, c.AnnualHourly.HeatingJ), Pct(c.AnnualBin.CoolingLatentJ, c.AnnualHourly.CoolingLatentJ),
-            F(c.AnnualBin.Total.Cost, 0), F(c.AnnualBin.Total.CarbonKg, 0),
-        ]).ToList();
         var sections = new List<ReportSection>
         {
-            new("Annual outdoor-air loads, cost and carbon",
+            new($"Annual outdoor-air loads, cost and carbon ({IntegrationMethods.Label(headline)})",
             [
-                new ReportTable($"Bin method per climate and variant ({eUnit}); the difference columns compare it with the hourly check",
-                    ["climate", "variant", ip ? "airflow cfm" : "airflow L/s", "heating", "sensible cooling", "latent cooling", "recovered",
-                        "heating bin vs hourly", "latent bin vs hourly", "cost " + run.Study.Currency.ToUpperInvariant(), "carbon kg"],
-                    annualRows),
-                new ReportParagraph("Latent loads are where one-dimensional dry-bulb bins err most: the loads are evaluated at each bin's mean coincident humidity ratio, and a latent load is not linear in humidity. The tables in tables/ hold the hourly method beside the bin method for every figure."),
+                Table(summary.Table("headline"), $"Per climate and variant, {IntegrationMethods.Label(headline)} (the headline method)"),
+            ]),
+            new("Method check",
+            [
+                Table(summary.Table("method_check"), "Each annual figure by the hourly sum, joint bins and the bin method, with each bin method's difference from hourly"),
+                new ReportParagraph("When to use which: the hourly sum is the reference wherever an hourly record exists. "
+                    + "The bin method is the right tool when only bin data are at hand, and to explain where in the year the load falls; "
+                    + "it misses latent loads because a bin's mean humidity ratio hides its humid hours. Joint dry-bulb x humidity bins close most of that error. "
+                    + AssumptionText.LatentError),
             ]),
         };
         foreach (var (name, chart) in charts)
@@ -180,7 +172,8 @@ public static class StudyReport
                     new ReportKeyValue("study file", Path.GetFileName(run.Study.File)),
                     new ReportKeyValue("climates", string.Join(", ", run.Study.Climates.Select(c => c.Name))),
                     new ReportKeyValue("variants", string.Join(", ", run.Study.Variants.Select(v => v.Name))),
-                    new ReportKeyValue("units", ip ? "IP (F, kBtu, cfm)" : "SI (C, kWh, L/s)"),
+                    new ReportKeyValue("units", u.Description),
+                    new ReportKeyValue("headline method", IntegrationMethods.Name(headline)),
                 ],
                 StudyHash = run.Study.Hash,
                 EngineVersion = run.EngineVersion,
@@ -189,11 +182,9 @@ public static class StudyReport
             Assumptions = new ReportAssumptions
             {
                 FlowBasis = a.FlowBasis.ToString().ToLowerInvariant(),
-                AirDensity = densityText + " (first climate)",
-                SiteSensibleFactor = F(a.Factors.SensibleIp, 3) + " Btu/(h cfm F) = " + F(a.Factors.SensibleSi, 3) + " W/(L/s K) at the first climate",
-                BinWidth = F(a.BinScale.Width, 1) + (ip ? " F" : " C") + ", aligned to multiples of the width, lower edge inclusive; loads evaluated at "
-                    + (a.BinPoint == BinEvaluationPoint.Midpoint ? "each bin's midpoint (the classic method)" : "the mean dry-bulb of each bin's ventilated hours")
-                    + " with its mean coincident humidity ratio",
+                AirDensity = DisplayUnits.Text(u.Density, a.DryAirDensity) + " of dry air (first climate)",
+                SiteSensibleFactor = DisplayUnits.Text(u.SensibleFactor, a.Factors.SensibleSi) + " at the first climate",
+                BinWidth = AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol),
                 Calendar = a.Calendar,
                 Schedule = a.Schedule,
                 DataRepairs = repairs,
@@ -201,6 +192,13 @@ public static class StudyReport
             Results = sections,
             Warnings = run.Warnings,
         };
+    }
+
+    /// <summary>A result table as a report table: the cells the terminal shows (<see cref="TextRenderer.Grid"/>).</summary>
+    public static ReportTable Table(ResultTable table, string caption)
+    {
+        var (headings, rows, _) = TextRenderer.Grid(table);
+        return new ReportTable(caption, headings, rows);
     }
 
     /// <summary>Writes the charts into <c>charts/</c> and the report into <c>report.html</c> of the folder being written.</summary>
@@ -216,12 +214,12 @@ public static class StudyReport
         File.WriteAllText(output.PathFor("report.html"), HtmlReport.Build(Model(run, charts, runAt)));
     }
 
-    private static IReadOnlyList<double> Months(StudyCaseResult c, Func<Core.Study.Results.LoadFigures, double> pick)
+    private static IReadOnlyList<double> Months(StudyCaseResult c, IntegrationMethod method, Func<LoadVector, double> pick)
     {
         var values = new double[12];
-        foreach (var (month, figures) in c.Months)
+        foreach (var month in c.OutdoorAir.Months)
         {
-            values[month - 1] += pick(figures);
+            values[month.Month - 1] += pick(month.Figures[method].Loads);
         }
 
         return values;
@@ -235,8 +233,4 @@ public static class StudyReport
         return s.Length == 0 ? fallback : s;
     }
 
-    private static string Pct(double bin, double hourly) =>
-        hourly == 0 ? (bin == 0 ? "0 %" : "n/a") : ((bin - hourly) / Math.Abs(hourly) * 100).ToString("+0.0;-0.0;0.0", CultureInfo.InvariantCulture) + " %";
-
-    private static string F(double v, int digits) => v.ToString("N" + digits, CultureInfo.InvariantCulture);
 }

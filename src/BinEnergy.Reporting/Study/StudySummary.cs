@@ -1,98 +1,89 @@
-using System.Text.Json;
-using System.Text.Json.Nodes;
+using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Study;
+using BinEnergy.Reporting.Output;
+using BinEnergy.Reporting.Tables;
+using BinEnergy.Reporting.Text;
+using BinEnergy.Reporting.Units;
 
 namespace BinEnergy.Reporting.Study;
 
 /// <summary>
-/// The <c>summary.json</c> of a run: study name, file, hash and units, the engine version, and
-/// per climate x variant the headline numbers (bin method, with the hourly check beside them),
-/// the assumptions and the warnings, plus the cautions every output carries.
+/// The summary of a run, one document for <c>summary.json</c>, <c>run --json</c> and the terminal:
+/// the study, its hash and the engine version; per climate x variant the headline figures (by the
+/// study's headline method), the method check, the economizer savings, the assumptions; the
+/// warnings and cautions.
 /// </summary>
 public static class StudySummary
 {
-    /// <summary>The caution every output carries (DESIGN 13).</summary>
-    public const string Caution =
-        "Results are estimates for comparing options. Ventilation rates must meet the code adopted locally and the judgement of the responsible licensed engineer; reducing outdoor air below the required minimum harms occupants.";
-
-    /// <summary>The summary as a JSON object.</summary>
-    public static JsonObject Build(StudyRunResult run)
+    /// <summary>The summary document of a run.</summary>
+    public static ResultDocument Build(StudyRunResult run)
     {
         var u = StudyTables.Units(run);
-        var cases = new JsonArray();
-        foreach (var c in run.Cases)
-        {
-            JsonObject Headline(Core.Study.Results.LoadFigures f)
-            {
-                var total = f.Total;
-                return new JsonObject
-                {
-                    ["hours_ventilated"] = (int)Math.Round(f.HoursVentilated),
-                    [$"heating_{u.Energy}"] = u.E(f.HeatingJ),
-                    [$"cooling_sensible_{u.Energy}"] = u.E(f.CoolingSensibleJ),
-                    [$"cooling_latent_{u.Energy}"] = u.E(f.CoolingLatentJ),
-                    [$"humidification_{u.Energy}"] = u.E(f.HumidificationJ),
-                    [$"recovered_heating_{u.Energy}"] = u.E(f.RecoveredHeatingJ),
-                    [$"recovered_cooling_{u.Energy}"] = u.E(f.RecoveredCoolingJ),
-                    ["fan_kwh"] = DisplayUnits.Kwh(f.FanJ),
-                    ["electricity_kwh"] = DisplayUnits.Kwh(total.ElectricityJ),
-                    [$"gas_{u.Gas}"] = u.GasUnits(total.GasJ),
-                    [$"oil_{u.Oil}"] = u.OilUnits(total.OilJ),
-                    [u.Cost] = total.Cost,
-                    ["carbon_kg"] = total.CarbonKg,
-                };
-            }
+        var show = StudyTables.Show(run);
+        var headline = run.Study.HeadlineMethod;
+        var doc = new ResultDocument($"{run.Study.Name} ({IntegrationMethods.Label(headline)}; the other methods are in the tables and the report)");
+        doc.Add(new ColumnSet<StudyRunResult>()
+            .Text("study", "Study", r => r.Study.Name)
+            .Text("study_file", "Study file", r => r.Study.File)
+            .Text("study_sha256", "Study SHA-256", r => r.Study.Hash)
+            .Text("engine_version", "Engine version", r => r.EngineVersion)
+            .Text("units", "Units", _ => u.Name)
+            .Text("currency", "Currency", r => r.Study.Currency)
+            .Text("headline_method", "Headline method", _ => IntegrationMethods.Name(headline))
+            .Integer("climates", "Climates", r => r.Study.Climates.Count)
+            .Integer("variants", "Variants", r => r.Study.Variants.Count)
+            .Fill(new ResultTable(JsonRenderer.FactsTable) { Layout = TableLayout.Record, ShowInTerminal = false }, [run]));
 
-            var economizer = new JsonObject();
-            foreach (var x in c.Economizer.Where(x => x.Method == "bin"))
-            {
-                economizer[x.Control] = new JsonObject
-                {
-                    [$"coil_total_{u.Energy}"] = u.E(x.CoilTotalJ),
-                    [$"savings_{u.Energy}"] = u.E(x.SavingsJ),
-                    ["savings_compressor_kwh"] = DisplayUnits.Kwh(x.CompressorSavings.ElectricityJ),
-                    [$"savings_{u.Cost}"] = x.CompressorSavings.Cost,
-                };
-            }
+        doc.Add(new ColumnSet<StudyCaseResult>()
+            .Add(StudyTables.CaseColumns, c => c)
+            .Text("weather", "Weather file", c => c.Case.Climate.WeatherPath, detail: true)
+            .Integer("hours_in_record", "Hours in the record", c => c.Weather.Count, detail: true)
+            .Number("airflow", u.Airflow, "Airflow", c => c.Case.OutdoorAir.EffectiveAirflow.CubicMetresPerSecond)
+            .Add(FigureColumns.Loads(u, show), c => c.OutdoorAir.Annual[headline])
+            .Fill(new ResultTable("headline") { Title = $"Annual outdoor-air figures, {IntegrationMethods.Label(headline)}" }, run.Cases));
 
-            cases.Add(new JsonObject
-            {
-                ["climate"] = c.Case.Climate.Name,
-                ["variant"] = c.Case.Variant.Name,
-                ["weather"] = c.Case.Climate.WeatherPath,
-                ["hours_in_record"] = c.Weather.Count,
-                ["airflow_" + (u.Ip ? "cfm" : "ls")] = u.Ip ? c.Case.OutdoorAir.EffectiveAirflow.Cfm : c.Case.OutdoorAir.EffectiveAirflow.LitresPerSecond,
-                ["bin"] = Headline(c.AnnualBin),
-                ["hourly"] = Headline(c.AnnualHourly),
-                ["economizer"] = economizer,
-                ["assumptions"] = new JsonArray([.. c.Case.Assumptions.Select(a => (JsonNode)a!),
-                    (JsonNode)$"flow basis {c.OutdoorAir.Assumptions.FlowBasis.ToString().ToLowerInvariant()}, dry-air density {c.OutdoorAir.Assumptions.DryAirDensity:0.0000} kg/m3"!,
-                    (JsonNode)$"schedule: {c.OutdoorAir.Assumptions.Schedule}"!,
-                    (JsonNode)$"calendar: {c.OutdoorAir.Assumptions.Calendar}"!,
-                    (JsonNode)$"bin method: loads and COP at each bin's {(c.OutdoorAir.Assumptions.BinPoint == BinEvaluationPoint.Midpoint ? "midpoint" : "mean dry-bulb of its ventilated hours")} and mean coincident humidity ratio; hourly plant energy uses each hour's outdoor temperature for the COP"!,
-                    (JsonNode)"humidification is met by an electric humidifier"!]),
-                ["warnings"] = new JsonArray([.. c.Warnings.Select(w => (JsonNode)w!)]),
-            });
-        }
+        doc.Add(new ColumnSet<(StudyCaseResult Case, MethodCheck.Row Row)>()
+            .Add(StudyTables.CaseColumns, x => x.Case)
+            .Add(MethodCheck.Columns(u), x => x.Row)
+            .Fill(new ResultTable("method_check") { Title = "Each annual figure by the three methods", ShowInTerminal = false },
+                run.Cases.SelectMany(c => MethodCheck.Rows(c.OutdoorAir, c.Economizer, u).Select(r => (c, r)))));
 
-        return new JsonObject
-        {
-            ["study"] = run.Study.Name,
-            ["study_file"] = run.Study.File,
-            ["study_sha256"] = run.Study.Hash,
-            ["engine_version"] = run.EngineVersion,
-            ["units"] = u.Ip ? "ip" : "si",
-            ["currency"] = run.Study.Currency,
-            ["climates"] = new JsonArray([.. run.Study.Climates.Select(c => (JsonNode)c.Name!)]),
-            ["variants"] = new JsonArray([.. run.Study.Variants.Select(v => (JsonNode)v.Name!)]),
-            ["cases"] = cases,
-            ["warnings"] = new JsonArray([.. run.Warnings.Select(w => (JsonNode)w!)]),
-            ["caution"] = Caution,
-        };
+        doc.Add(new ColumnSet<(StudyCaseResult Case, EconomizerControlResult Control)>()
+            .Add(StudyTables.CaseColumns, x => x.Case)
+            .Text("control", "Control", x => FigureColumns.ControlName(x.Control))
+            .Text("integration", "Integration", x => FigureColumns.Integration(x.Control))
+            .Add(FigureColumns.Economizer(u, show.Plant), x => (x.Control, headline))
+            .Fill(new ResultTable("economizer") { Title = $"Economizer controls against the baseline, {IntegrationMethods.Label(headline)}", ShowInTerminal = false },
+                run.Cases.Where(c => c.Economizer is not null).SelectMany(c => c.Economizer!.Controls.Select(x => (c, x)))));
+
+        doc.Add(new ColumnSet<(StudyCaseResult Case, string Text)>()
+            .Add(StudyTables.CaseColumns, x => x.Case)
+            .Text("assumption", "Assumption", x => x.Text)
+            .Fill(new ResultTable("case_assumptions") { ShowInTerminal = false },
+                run.Cases.SelectMany(c => CaseAssumptions(c, u).Select(a => (c, a)))));
+
+        doc.NoteAll(NoteKind.Warning, run.Warnings);
+        doc.NoteAll(NoteKind.Caution, Cautions.OutdoorAir);
+        return doc;
     }
 
-    /// <summary>The summary as indented JSON text.</summary>
-    public static string ToJson(StudyRunResult run) =>
-        Build(run).ToJsonString(new JsonSerializerOptions { WriteIndented = true, NumberHandling = System.Text.Json.Serialization.JsonNumberHandling.AllowNamedFloatingPointLiterals });
+    /// <summary>The assumptions of one case: the defaults the study left to the engine, then how the figures were made.</summary>
+    public static IEnumerable<string> CaseAssumptions(StudyCaseResult c, DisplayUnits u)
+    {
+        var a = c.OutdoorAir.Assumptions;
+        return
+        [
+            .. c.Case.Assumptions,
+            AssumptionText.SiteFactor(a, u),
+            "schedule: " + a.Schedule,
+            "calendar: " + a.Calendar,
+            AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol),
+            "plant energy of the hourly method uses each hour's outdoor dry-bulb for the COP curves; the bin methods use each bin's or cell's evaluation dry-bulb",
+            "humidification is met by an electric humidifier",
+        ];
+    }
+
+    /// <summary>The summary as indented JSON text (<c>summary.json</c>).</summary>
+    public static string ToJson(StudyRunResult run) => JsonRenderer.Render(Build(run));
 }

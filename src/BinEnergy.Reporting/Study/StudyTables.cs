@@ -1,15 +1,18 @@
-using BinEnergy.Core.Plant;
+using System.Globalization;
+using BinEnergy.Core.Economizer;
+using BinEnergy.Core.Loads;
 using BinEnergy.Core.Study;
-using BinEnergy.Core.Study.Results;
 using BinEnergy.Reporting.Tables;
+using BinEnergy.Reporting.Units;
 
 namespace BinEnergy.Reporting.Study;
 
 /// <summary>
 /// Lays a study run out as long-format result tables (DESIGN 11): <c>annual</c>, <c>bins</c>,
 /// <c>monthly</c>, <c>economizer</c>, <c>peaks</c> and optionally <c>hourly</c>, one row per
-/// climate x variant x (method | bin | month | control | condition | hour), with a unit
-/// suffix on every numeric column in the study's display units.
+/// climate x variant x (method | bin | month | control | condition | hour), with a unit suffix on
+/// every numeric column in the study's display units. The figure columns are those of every other
+/// output (<see cref="FigureColumns"/>); <c>method</c> is <c>hourly</c>, <c>joint-bin</c> or <c>bin</c>.
 /// </summary>
 public static class StudyTables
 {
@@ -20,148 +23,100 @@ public static class StudyTables
     public static IReadOnlyList<ResultTable> Build(StudyRunResult run, bool hourly)
     {
         var u = Units(run);
-        var tables = new List<ResultTable> { Annual(run, u), Bins(run, u), Monthly(run, u), Economizer(run, u), Peaks(run, u) };
+        var show = Show(run);
+        var tables = new List<ResultTable> { Annual(run.Cases, u, show), Bins(run.Cases, u, show), Monthly(run.Cases, u, show), Economizer(run.Cases, u, show), Peaks(run.Cases, u, show) };
         if (hourly)
         {
-            tables.Add(Hourly(run, u));
+            tables.Add(Hourly(run.Cases, u, show));
         }
 
         return tables;
     }
 
-    internal static DisplayUnits Units(StudyRunResult run)
-    {
-        double oil = run.Cases.Count > 0 ? run.Cases[0].Case.Plant.OilJoulesPerGallon : FuelUnits.DefaultOilBtuPerGallon * Core.Units.Conversions.JoulesPerBtu;
-        return new DisplayUnits(run.Study.Units, run.Study.Currency, oil);
-    }
+    /// <summary>The display units of a run: the study's system, currency and oil heat content.</summary>
+    public static DisplayUnits Units(StudyRunResult run) =>
+        new(run.Study.Units, run.Study.Currency, run.Cases.Select(c => c.Case.Plant?.OilJoulesPerGallon).FirstOrDefault(o => o is not null));
 
-    private static ResultTable LoadColumns(ResultTable t, DisplayUnits u)
-    {
-        string e = u.Energy;
-        return t.Number($"heating_{e}").Number($"cooling_sensible_{e}").Number($"cooling_latent_{e}").Number($"humidification_{e}")
-            .Number($"recovered_heating_{e}").Number($"recovered_cooling_{e}").Number("fan_kwh")
-            .Number("electricity_kwh").Number($"gas_{u.Gas}").Number($"oil_{u.Oil}")
-            .Number($"heating_{u.Cost}").Number($"cooling_{u.Cost}").Number($"other_{u.Cost}").Number(u.Cost).Number("carbon_kg");
-    }
+    /// <summary>The figures any case of the run has.</summary>
+    public static FigureSet Show(StudyRunResult run) => FigureSet.Any(run.Cases.Select(c => FigureSet.Of(c.OutdoorAir)));
 
-    private static object[] LoadValues(LoadFigures f, DisplayUnits u)
-    {
-        var total = f.Total;
-        return
-        [
-            u.E(f.HeatingJ), u.E(f.CoolingSensibleJ), u.E(f.CoolingLatentJ), u.E(f.HumidificationJ),
-            u.E(f.RecoveredHeatingJ), u.E(f.RecoveredCoolingJ), DisplayUnits.Kwh(f.FanJ),
-            DisplayUnits.Kwh(total.ElectricityJ), u.GasUnits(total.GasJ), u.OilUnits(total.OilJ),
-            f.HeatingSite.Cost, f.CoolingSite.Cost, f.OtherSite.Cost, total.Cost, total.CarbonKg,
-        ];
-    }
+    /// <summary>The climate and variant columns every study table starts with.</summary>
+    public static ColumnSet<StudyCaseResult> CaseColumns { get; } = new ColumnSet<StudyCaseResult>()
+        .Text("climate", "Climate", c => c.Case.Climate.Name)
+        .Text("variant", "Variant", c => c.Case.Variant.Name);
 
-    private static ResultTable Annual(StudyRunResult run, DisplayUnits u)
-    {
-        var t = LoadColumns(new ResultTable("annual").Text("climate").Text("variant").Text("method").Integer("hours_ventilated"), u);
-        foreach (var c in run.Cases)
-        {
-            foreach (var (method, f) in new[] { ("bin", c.AnnualBin), ("hourly", c.AnnualHourly) })
-            {
-                t.AddRow([c.Case.Climate.Name, c.Case.Variant.Name, method, (int)Math.Round(f.HoursVentilated), .. LoadValues(f, u)]);
-            }
-        }
+    /// <summary>One row per climate x variant x method.</summary>
+    public static ResultTable Annual(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+        new ColumnSet<(StudyCaseResult Case, IntegrationMethod Method)>()
+            .Add(CaseColumns, x => x.Case)
+            .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
+            .Add(FigureColumns.Loads(u, show), x => x.Case.OutdoorAir.Annual[x.Method])
+            .Fill(new ResultTable("annual") { Title = "Annual outdoor-air loads by method" },
+                cases.SelectMany(c => IntegrationMethods.All.Select(m => (c, m))));
 
-        return t;
-    }
+    /// <summary>The columns of one dry-bulb bin: edges, hours and means, the method's figures and the exact figures of its own hours.</summary>
+    public static ColumnSet<(OutdoorAirBinRow Bin, IntegrationMethod Method)> BinColumns(DisplayUnits u, FigureSet show) =>
+        new ColumnSet<(OutdoorAirBinRow Bin, IntegrationMethod Method)>()
+            .Number("bin_low", u.Temperature, "Bin from", x => x.Bin.Bin.Low.Celsius)
+            .Number("bin_high", u.Temperature, "Bin to", x => x.Bin.Bin.High.Celsius)
+            .Number("bin_mid", u.Temperature, "Bin midpoint", x => x.Bin.Bin.Mid.Celsius, detail: true)
+            .Number("evaluated_drybulb", u.Temperature, "Evaluated at", x => x.Bin.EvaluatedAt.Celsius)
+            .Integer("hours", "Hours", x => x.Bin.Bin.All.Hours, detail: true)
+            .Integer("hours_occupied", "Hours occupied", x => x.Bin.Bin.Occupied.Hours, detail: true)
+            .Number("mean_humidity_ratio", u.Moisture, "Mean coincident humidity ratio", x => x.Bin.MeanHumidityRatio.KilogramsPerKilogram)
+            .Number("mean_coincident_wetbulb", u.Temperature, "Mean coincident wet-bulb", x => x.Bin.Bin.All.MeanWetBulb.Celsius, detail: true)
+            .Add(FigureColumns.Loads(u, show), x => x.Bin.Figures[x.Method])
+            .Add(FigureColumns.Loads(u, show with { Plant = false }, hours: false).Prefixed("hourly_", "Hourly ", detail: true), x => x.Bin.Figures.Hourly);
 
-    private static ResultTable Bins(StudyRunResult run, DisplayUnits u)
-    {
-        string tu = u.Temp;
-        var t = LoadColumns(new ResultTable("bins").Text("climate").Text("variant").Text("method")
-            .Number($"bin_low_{tu}").Number($"bin_high_{tu}").Number($"bin_mid_{tu}").Number($"evaluated_drybulb_{tu}")
-            .Integer("hours").Integer("hours_occupied").Integer("hours_ventilated")
-            .Number($"mean_humidity_ratio_{u.Ratio}").Number($"mean_coincident_wetbulb_{tu}"), u);
-        foreach (var c in run.Cases)
-        {
-            foreach (var b in c.Bins)
-            {
-                t.AddRow([c.Case.Climate.Name, c.Case.Variant.Name, "bin", u.T(b.LowC), u.T(b.HighC), u.T(b.MidC), u.T(b.EvaluatedAtC),
-                    b.Hours, b.HoursOccupied, (int)Math.Round(b.Loads.HoursVentilated), b.MeanHumidityRatio, u.T(b.MeanCoincidentWetBulbC),
-                    .. LoadValues(b.Loads, u)]);
-            }
-        }
+    private static ResultTable Bins(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+        new ColumnSet<(StudyCaseResult Case, OutdoorAirBinRow Bin, IntegrationMethod Method)>()
+            .Add(CaseColumns, x => x.Case)
+            .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
+            .Add(BinColumns(u, show), x => (x.Bin, x.Method))
+            .Fill(new ResultTable("bins") { Title = "Outdoor-air loads by dry-bulb bin and method" },
+                cases.SelectMany(c => IntegrationMethods.All.SelectMany(m => c.OutdoorAir.Bins.Select(b => (c, b, m)))));
 
-        return t;
-    }
+    private static ResultTable Monthly(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+        new ColumnSet<(StudyCaseResult Case, OutdoorAirMonth Month, IntegrationMethod Method)>()
+            .Add(CaseColumns, x => x.Case)
+            .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
+            .Integer("month", "Month", x => x.Month.Month)
+            .Add(FigureColumns.Loads(u, show), x => x.Month.Figures[x.Method])
+            .Fill(new ResultTable("monthly") { Title = "Outdoor-air loads by month and method" },
+                cases.SelectMany(c => IntegrationMethods.All.SelectMany(m => c.OutdoorAir.Months.Select(mo => (c, mo, m)))));
 
-    private static ResultTable Monthly(StudyRunResult run, DisplayUnits u)
-    {
-        var t = LoadColumns(new ResultTable("monthly").Text("climate").Text("variant").Text("method").Integer("month").Integer("hours_ventilated"), u);
-        foreach (var c in run.Cases)
-        {
-            foreach (var (month, f) in c.Months)
-            {
-                t.AddRow([c.Case.Climate.Name, c.Case.Variant.Name, "hourly", month, (int)Math.Round(f.HoursVentilated), .. LoadValues(f, u)]);
-            }
-        }
+    private static ResultTable Economizer(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+        new ColumnSet<(StudyCaseResult Case, EconomizerControlResult Control, IntegrationMethod Method)>()
+            .Add(CaseColumns, x => x.Case)
+            .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
+            .Text("control", "Control", x => FigureColumns.ControlName(x.Control))
+            .Text("integration", "Integration", x => FigureColumns.Integration(x.Control))
+            .Add(FigureColumns.Economizer(u, show.Plant), x => (x.Control, x.Method))
+            .Fill(new ResultTable("economizer") { Title = "Economizer controls against the baseline, by method" },
+                cases.Where(c => c.Economizer is not null)
+                    .SelectMany(c => IntegrationMethods.All.SelectMany(m => c.Economizer!.BaselineAndControls.Select(x => (c, x, m)))));
 
-        return t;
-    }
+    private static ResultTable Peaks(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+        new ColumnSet<(StudyCaseResult Case, OutdoorAirPeak Peak)>()
+            .Add(CaseColumns, x => x.Case)
+            .Text("condition", "Condition", x => x.Peak.Key)
+            .Add(FigureColumns.Peaks(u, show.Recovery), x => x.Peak)
+            .Fill(new ResultTable("peaks") { Title = "Peak outdoor-air loads at the design conditions" },
+                cases.SelectMany(c => c.OutdoorAir.Peaks?.All.Select(p => (c, p)) ?? []));
 
-    private static ResultTable Economizer(StudyRunResult run, DisplayUnits u)
-    {
-        string e = u.Energy;
-        var t = new ResultTable("economizer").Text("climate").Text("variant").Text("method").Text("control").Text("integration")
-            .Number("hours_no_cooling").Number("hours_free").Number("hours_integrated").Number("hours_minimum")
-            .Number($"coil_sensible_{e}").Number($"coil_latent_{e}").Number($"coil_total_{e}").Number($"savings_{e}")
-            .Number("compressor_kwh").Number($"compressor_{u.Cost}").Number("compressor_carbon_kg")
-            .Number("savings_compressor_kwh").Number($"savings_{u.Cost}").Number("savings_carbon_kg");
-        foreach (var c in run.Cases)
-        {
-            foreach (var x in c.Economizer)
-            {
-                t.AddRow(c.Case.Climate.Name, c.Case.Variant.Name, x.Method, x.Control, x.Control == "none" ? "none" : x.Integrated ? "integrated" : "non-integrated",
-                    x.HoursNoCooling, x.HoursFree, x.HoursIntegrated, x.HoursMinimum,
-                    u.E(x.CoilSensibleJ), u.E(x.CoilLatentJ), u.E(x.CoilTotalJ), u.E(x.SavingsJ),
-                    DisplayUnits.Kwh(x.Compressor.ElectricityJ), x.Compressor.Cost, x.Compressor.CarbonKg,
-                    DisplayUnits.Kwh(x.CompressorSavings.ElectricityJ), x.CompressorSavings.Cost, x.CompressorSavings.CarbonKg);
-            }
-        }
-
-        return t;
-    }
-
-    private static ResultTable Peaks(StudyRunResult run, DisplayUnits u)
-    {
-        string tu = u.Temp;
-        var t = new ResultTable("peaks").Text("climate").Text("variant").Text("condition")
-            .Number($"drybulb_{tu}").Number($"wetbulb_{tu}").Number($"dewpoint_{tu}").Number($"humidity_ratio_{u.Ratio}")
-            .Number($"sensible_{u.Power}").Number($"latent_{u.Power}").Number($"total_{u.Power}").Number($"total_without_recovery_{u.Power}");
-        foreach (var c in run.Cases)
-        {
-            foreach (var p in c.Peaks)
-            {
-                t.AddRow(c.Case.Climate.Name, c.Case.Variant.Name, p.Condition, u.T(p.DryBulbC), u.T(p.WetBulbC), u.T(p.DewPointC), p.HumidityRatio,
-                    u.P(p.SensibleW), u.P(p.LatentW), u.P(p.TotalW), u.P(p.TotalWithoutRecoveryW));
-            }
-        }
-
-        return t;
-    }
-
-    private static ResultTable Hourly(StudyRunResult run, DisplayUnits u)
-    {
-        string tu = u.Temp;
-        var t = LoadColumns(new ResultTable("hourly").Text("climate").Text("variant").Text("method").Text("time").Integer("month").Integer("hour")
-            .Integer("occupied").Number($"drybulb_{tu}").Number($"humidity_ratio_{u.Ratio}"), u);
-        foreach (var c in run.Cases)
-        {
-            var hours = c.Hours ?? throw new InvalidOperationException("the run did not keep its hours; run with --hourly");
-            var w = c.Weather;
-            for (int i = 0; i < hours.Count; i++)
-            {
-                var time = w.Times[i];
-                t.AddRow([c.Case.Climate.Name, c.Case.Variant.Name, "hourly", time.ToString("yyyy-MM-dd'T'HH:mm", System.Globalization.CultureInfo.InvariantCulture),
-                    time.Month, time.Hour, c.Occupied[i] ? 1 : 0, u.T(w.DryBulbC[i]), w.HumidityRatio[i], .. LoadValues(hours[i], u)]);
-            }
-        }
-
-        return t;
-    }
+    private static ResultTable Hourly(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+        new ColumnSet<(StudyCaseResult Case, int Hour)>()
+            .Add(CaseColumns, x => x.Case)
+            .Text("method", "Method", _ => IntegrationMethods.Name(IntegrationMethod.Hourly))
+            .Text("time", "Time", x => x.Case.Weather.Times[x.Hour].ToString("yyyy-MM-dd'T'HH:mm", CultureInfo.InvariantCulture))
+            .Integer("month", "Month", x => x.Case.Weather.Times[x.Hour].Month)
+            .Integer("hour", "Hour", x => x.Case.Weather.Times[x.Hour].Hour)
+            .Integer("occupied", "Occupied", x => x.Case.Occupied[x.Hour] ? 1 : 0)
+            .Number("drybulb", u.Temperature, "Dry-bulb", x => x.Case.Weather.DryBulbC[x.Hour])
+            .Number("humidity_ratio", u.Moisture, "Humidity ratio", x => x.Case.Weather.HumidityRatio[x.Hour])
+            .Add(FigureColumns.Loads(u, show), x => x.Case.OutdoorAir.Hours![x.Hour])
+            .Fill(new ResultTable("hourly") { Title = "Outdoor-air loads hour by hour" },
+                cases.SelectMany(c => c.OutdoorAir.Hours is null
+                    ? throw new InvalidOperationException("the run did not keep its hours; run with --hourly")
+                    : Enumerable.Range(0, c.Weather.Count).Select(i => (c, i))));
 }

@@ -13,8 +13,15 @@ public static class CsvTableWriter
     /// <summary>Writes <paramref name="table"/> to <paramref name="path"/>, replacing any file there.</summary>
     public static void Write(ResultTable table, string path)
     {
-        var options = new CsvWriterOptions { FormatProvider = CultureInfo.InvariantCulture };
-        using var csv = CsvWriter.ToFile(path, options);
+        using var writer = new StreamWriter(path);
+        Write(table, writer);
+    }
+
+    /// <summary>Writes <paramref name="table"/> as CSV to <paramref name="writer"/> (left open).</summary>
+    public static void Write(ResultTable table, TextWriter writer)
+    {
+        var options = new CsvWriterOptions { FormatProvider = CultureInfo.InvariantCulture, NewLine = "\n" };
+        using var csv = CsvWriter.Create(writer, options, leaveOpen: true);
         csv.WriteHeader(table.Columns.Select(c => c.Name).ToArray());
         var fields = new string[table.Columns.Count];
         for (int row = 0; row < table.RowCount; row++)
@@ -25,7 +32,7 @@ public static class CsvTableWriter
                 fields[i] = column.Kind switch
                 {
                     ColumnKind.Text => column.Texts[row],
-                    ColumnKind.Number => column.Numbers[row].ToString("R", CultureInfo.InvariantCulture),
+                    ColumnKind.Number => double.IsFinite(column.Numbers[row]) ? column.Numbers[row].ToString("R", CultureInfo.InvariantCulture) : string.Empty,
                     _ => column.Integers[row].ToString(CultureInfo.InvariantCulture),
                 };
             }

@@ -1,3 +1,5 @@
+using BinEnergy.Reporting.Units;
+
 namespace BinEnergy.Reporting.Tables;
 
 /// <summary>
@@ -10,11 +12,34 @@ public sealed class ResultColumn
     private readonly List<double> numbers = [];
     private readonly List<int> integers = [];
 
-    internal ResultColumn(string name, ColumnKind kind)
+    internal ResultColumn(string name, ColumnKind kind, DisplayUnit? unit = null, string? label = null, bool detail = false)
     {
         Name = name;
         Kind = kind;
+        Unit = unit;
+        Label = label ?? name;
+        Detail = detail;
     }
+
+    /// <summary>The display unit of a number column (its values are already converted to it); null for text and plain counts.</summary>
+    public DisplayUnit? Unit { get; }
+
+    /// <summary>The heading people read, without the unit (e.g. "Heating").</summary>
+    public string Label { get; }
+
+    /// <summary>True for a column kept in JSON, CSV and Parquet but left out of terminal and report tables.</summary>
+    public bool Detail { get; }
+
+    /// <summary>The heading with its unit symbol, e.g. "Heating, kBtu".</summary>
+    public string Heading => Unit is { Symbol.Length: > 0 } u ? Label + ", " + u.Symbol : Label;
+
+    /// <summary>The value of row <paramref name="row"/> as an object: string, double or int.</summary>
+    public object ValueAt(int row) => Kind switch
+    {
+        ColumnKind.Text => texts[row],
+        ColumnKind.Number => numbers[row],
+        _ => integers[row],
+    };
 
     /// <summary>Column name, lower snake case, unit-suffixed for quantities.</summary>
     public string Name { get; }

@@ -1,4 +1,5 @@
 using System.Text.RegularExpressions;
+using BinEnergy.Reporting.Units;
 
 namespace BinEnergy.Reporting.Tables;
 
@@ -28,6 +29,30 @@ public sealed partial class ResultTable
     /// <summary>Table name.</summary>
     public string Name { get; }
 
+    /// <summary>The heading of the table in the terminal and the report.</summary>
+    public string? Title { get; init; }
+
+    /// <summary>How the table is laid out in text outputs and JSON.</summary>
+    public TableLayout Layout { get; init; } = TableLayout.Rows;
+
+    /// <summary>
+    /// For <see cref="TableLayout.Keyed"/>: the text column whose values key the JSON object
+    /// (and head the columns of the terminal's transposed view).
+    /// </summary>
+    public string? KeyColumn { get; init; }
+
+    /// <summary>In terminal text, show the table transposed: one line per column, one column per row (keyed tables of figures).</summary>
+    public bool Transpose { get; init; }
+
+    /// <summary>False for a table kept in JSON and files but left out of terminal text (a long form of a table shown compactly).</summary>
+    public bool ShowInTerminal { get; init; } = true;
+
+    /// <summary>In terminal text, show every n-th row only (a long curve); JSON and files keep every row.</summary>
+    public int TerminalEvery { get; init; } = 1;
+
+    /// <summary>Lines said under the table (what it shows, how to read it).</summary>
+    public List<string> Notes { get; } = [];
+
     /// <summary>The columns in order.</summary>
     public IReadOnlyList<ResultColumn> Columns => columns;
 
@@ -42,13 +67,14 @@ public sealed partial class ResultTable
     public bool HasColumn(string name) => index.ContainsKey(name);
 
     /// <summary>Declares a text column.</summary>
-    public ResultTable Text(string name) => Declare(name, ColumnKind.Text);
+    public ResultTable Text(string name, string? label = null, bool detail = false) => Declare(new ResultColumn(name, ColumnKind.Text, null, label, detail));
 
     /// <summary>Declares a floating-point column; the name must end with its unit (e.g. <c>_kbtu</c>).</summary>
-    public ResultTable Number(string name) => Declare(name, ColumnKind.Number);
+    public ResultTable Number(string name, DisplayUnit? unit = null, string? label = null, bool detail = false) =>
+        Declare(new ResultColumn(name, ColumnKind.Number, unit, label, detail));
 
     /// <summary>Declares an integer column (whole hours, months).</summary>
-    public ResultTable Integer(string name) => Declare(name, ColumnKind.Integer);
+    public ResultTable Integer(string name, string? label = null, bool detail = false) => Declare(new ResultColumn(name, ColumnKind.Integer, null, label, detail));
 
     /// <summary>Adds one row, values in column order (string, double or int as declared).</summary>
     public void AddRow(params object[] values)
@@ -88,8 +114,9 @@ public sealed partial class ResultTable
         }
     }
 
-    private ResultTable Declare(string name, ColumnKind kind)
+    private ResultTable Declare(ResultColumn column)
     {
+        string name = column.Name;
         if (RowCount > 0)
         {
             throw new InvalidOperationException($"declare the columns of '{Name}' before adding rows");
@@ -105,7 +132,7 @@ public sealed partial class ResultTable
             throw new ArgumentException($"table '{Name}' already has a column '{name}'");
         }
 
-        columns.Add(new ResultColumn(name, kind));
+        columns.Add(column);
         return this;
     }
 

@@ -22,34 +22,41 @@ public class AirCommandTests
         Assert.Equal("", err);
         Assert.Contains("Humidity ratio", output);
         Assert.Contains("12.228", output); // psia at 5,000 ft, Handbook ch. 1 Table 1 (recalled from memory)
-        Assert.Contains("below 1.08", output);
+        Assert.Contains("below the trade's 1.08", output);
         Assert.Contains("pressure -16.8 %", output);
     }
 
     [Fact]
-    public void Json_HasEveryFieldWithUnits()
+    public void Json_HasEveryFieldWithTheUnitInItsName()
     {
         var (code, output, _) = Run("air", "--drybulb", "95", "--wetbulb", "75", "--elevation", "5000", "--json");
         Assert.Equal(0, code);
         using var doc = JsonDocument.Parse(output);
         var root = doc.RootElement;
-        string[] fields = ["drybulb", "wetbulb", "dewpoint", "rh_pct", "humidity_ratio", "enthalpy", "specific_volume", "density", "pressure", "sensible_factor", "latent_factor", "total_factor"];
+        string[] fields = ["drybulb_f", "wetbulb_f", "dewpoint_f", "rh_pct", "humidity_ratio_lb_lb", "humidity_ratio_gr_lb", "enthalpy_btu_lb", "specific_volume_ft3_lb", "density_lb_ft3", "pressure_psia"];
         foreach (var f in fields)
         {
             Assert.Equal(JsonValueKind.Number, root.GetProperty(f).ValueKind);
-            Assert.True(root.GetProperty("units").TryGetProperty(f, out _), f);
         }
 
-        Assert.Equal(95.0, root.GetProperty("drybulb").GetDouble(), 9);
-        Assert.Equal(75.0, root.GetProperty("wetbulb").GetDouble(), 4);
-        Assert.Equal("Btu/(h cfm F)", root.GetProperty("units").GetProperty("sensible_factor").GetString());
+        Assert.Equal(95.0, root.GetProperty("drybulb_f").GetDouble(), 9);
+        Assert.Equal(75.0, root.GetProperty("wetbulb_f").GetDouble(), 4);
+        Assert.Contains("over ice below 0 C", root.GetProperty("humidity_definition").GetString());
 
         // The factor uses this state's dry-air density: 60 / v x (0.240 + 0.444 W) in IP terms.
-        double v = root.GetProperty("specific_volume").GetDouble();
-        double w = root.GetProperty("humidity_ratio").GetDouble();
+        var factors = root.GetProperty("factors").GetProperty("this_state");
+        double v = root.GetProperty("specific_volume_ft3_lb").GetDouble();
+        double w = root.GetProperty("humidity_ratio_lb_lb").GetDouble();
         double expected = 60.0 / v * (1.006 + 1.86 * w) / 2.326 / 1.8;
-        Assert.Equal(expected, root.GetProperty("sensible_factor").GetDouble(), 3);
-        Assert.Equal(60.0 / v, root.GetProperty("total_factor").GetDouble(), 2);
+        Assert.Equal(expected, factors.GetProperty("sensible_factor_btuh_cfm_f").GetDouble(), 3);
+        Assert.Equal(60.0 / v, factors.GetProperty("total_factor_btuh_cfm_per_btu_lb").GetDouble(), 2);
+
+        // Standard air: the trade's 1.08, 4,840 and 4.5 (common practice), 0.69 per grain.
+        var standard = root.GetProperty("factors").GetProperty("standard_air");
+        Assert.Equal(1.08, standard.GetProperty("sensible_factor_btuh_cfm_f").GetDouble(), 2);
+        Assert.Equal(4840, standard.GetProperty("latent_factor_btuh_cfm").GetDouble(), 5.0);
+        Assert.Equal(0.69, standard.GetProperty("latent_factor_btuh_cfm_per_gr_lb").GetDouble(), 2);
+        Assert.Equal(4.5, standard.GetProperty("total_factor_btuh_cfm_per_btu_lb").GetDouble(), 2);
     }
 
     [Fact]
@@ -59,10 +66,10 @@ public class AirCommandTests
         Assert.Equal(0, code);
         using var doc = JsonDocument.Parse(output);
         var root = doc.RootElement;
-        Assert.Equal("kJ/kg (0 C datum)".Split(' ')[0], root.GetProperty("units").GetProperty("enthalpy").GetString()!.Split(' ')[0]);
-        Assert.Equal(101.325, root.GetProperty("pressure").GetDouble(), 3);
-        Assert.InRange(root.GetProperty("sensible_factor").GetDouble(), 1.15, 1.2); // W/(L/s K) at 30 C: below 1.21 of 20 C air
-        Assert.InRange(root.GetProperty("humidity_ratio").GetDouble(), 0.0105, 0.0107); // psychrometric chart, 30 C 40 % (recalled from memory)
+        Assert.True(root.TryGetProperty("enthalpy_kj_kg", out _));
+        Assert.Equal(101.325, root.GetProperty("pressure_kpa").GetDouble(), 3);
+        Assert.InRange(root.GetProperty("factors").GetProperty("this_state").GetProperty("sensible_factor_w_ls_k").GetDouble(), 1.15, 1.2); // W/(L/s K) at 30 C: below 1.21 of 20 C air
+        Assert.InRange(root.GetProperty("humidity_ratio_kg_kg").GetDouble(), 0.0105, 0.0107); // psychrometric chart, 30 C 40 % (recalled from memory)
     }
 
     [Theory]

@@ -38,7 +38,8 @@ public class BinsCommandTests
         var (code, output, err) = AirCommandTests.Run("bins", InventedFile(), "--occupied", "Mon-Fri 07:00-19:00", "--csv");
         Assert.True(code == 0, err);
         var lines = output.TrimEnd('\n').Split('\n');
-        Assert.Equal("bin_low,bin_high,bin_mid,hours,hours_occupied,hours_unoccupied,mean_drybulb,mean_humidity_ratio,mean_coincident_wetbulb,mean_enthalpy", lines[0]);
+        // The study tables' names and units (the same columns the terminal shows, gr/lb included).
+        Assert.StartsWith("bin_low_f,bin_high_f,bin_mid_f,hours,hours_occupied,hours_unoccupied,mean_drybulb_f,mean_humidity_ratio_gr_lb,mean_coincident_wetbulb_f,mean_enthalpy_btu_lb,occupied_mean_drybulb_f,", lines[0]);
         var rows = lines.Skip(1).Select(l => l.Split(',')).ToList();
         double D(string s) => double.Parse(s, CultureInfo.InvariantCulture);
         Assert.Equal(8760, rows.Sum(r => int.Parse(r[3], CultureInfo.InvariantCulture)));
@@ -53,7 +54,7 @@ public class BinsCommandTests
         var fifty = rows.Single(r => r[0] == "50");
         Assert.True(int.Parse(fifty[3], CultureInfo.InvariantCulture) >= 1); // the 10.0 C hour is exactly 50 F: lower edge inclusive
         Assert.InRange(D(fifty[6]), 50.0, 55.0);
-        Assert.InRange(D(fifty[7]), 0.001, 0.02); // lb/lb
+        Assert.InRange(D(fifty[7]), 7.0, 140.0); // gr/lb (0.001 to 0.02 lb/lb)
     }
 
     [Fact]
@@ -64,11 +65,12 @@ public class BinsCommandTests
         using var doc = JsonDocument.Parse(output);
         var root = doc.RootElement;
         Assert.Equal(8760, root.GetProperty("hours").GetInt32());
-        Assert.Equal(2.0, root.GetProperty("bin_width").GetDouble());
-        Assert.Equal("C", root.GetProperty("units").GetProperty("temperature").GetString());
+        Assert.Equal(2.0, root.GetProperty("bin_width_c").GetDouble());
         var groups = root.GetProperty("groups").EnumerateArray().ToList();
-        Assert.Equal(12, groups.Count);
+        Assert.Equal(12, groups.Select(g => g.GetProperty("month").GetString()).Distinct().Count());
         Assert.Equal(8760, groups.Sum(g => g.GetProperty("hours").GetInt32()));
+        Assert.True(groups[0].TryGetProperty("bin_low_c", out _));
+        Assert.Equal(8760, root.GetProperty("hours_by_month").EnumerateArray().Sum(r => r.GetProperty("all").GetInt32()));
 
         var (code2, joint, _) = AirCommandTests.Run("bins", InventedFile(), "--joint", "--json");
         Assert.Equal(0, code2);
@@ -88,7 +90,7 @@ public class BinsCommandTests
 
     [Theory]
     [InlineData(new[] { "--occupied", "Mon-Fry 07:00-19:00" }, 2, "character 5")]
-    [InlineData(new[] { "--by", "week" }, 2, "--by must be month or block")]
+    [InlineData(new[] { "--by", "week" }, 2, "--by week: 'week' is not a split; write month or block")]
     [InlineData(new[] { "--csv", "--json" }, 2, "not both")]
     [InlineData(new[] { "--width", "0" }, 2, "--width 0")]
     [InlineData(new[] { "--holidays", "25/12/2018" }, 2, "YYYY-MM-DD")]

@@ -27,47 +27,54 @@ public class EconomizerCommandTests
         Assert.Equal("", err);
         using var doc = JsonDocument.Parse(output);
         var root = doc.RootElement;
-        string[] fields = ["hours_no_cooling", "hours_free", "hours_integrated", "hours_minimum", "coil_sensible", "coil_latent", "coil_total", "savings", "savings_pct"];
-        var controls = root.GetProperty("controls");
-        foreach (var name in new[] { "none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint" })
+        string[] fields = ["hours_no_cooling", "hours_free", "hours_integrated", "hours_minimum", "coil_sensible_kbtu", "coil_latent_kbtu", "coil_total_kbtu", "savings_kbtu", "savings_pct"];
+        var rows = root.GetProperty("by_method").EnumerateArray().ToList();
+        string[] names = ["none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"];
+        foreach (var name in names)
         {
-            foreach (var method in new[] { "bin", "hourly" })
+            foreach (var method in new[] { "hourly", "joint-bin", "bin" })
             {
-                var m = controls.GetProperty(name).GetProperty(method);
+                var m = rows.Single(r => r.GetProperty("control").GetString() == name && r.GetProperty("method").GetString() == method);
                 foreach (var f in fields)
                 {
-                    Assert.Equal(JsonValueKind.Number, m.GetProperty(f).ValueKind);
+                    Assert.True(m.GetProperty(f).ValueKind is JsonValueKind.Number || (f == "savings_pct" && name == "none"), f);
                 }
 
                 double hours = m.GetProperty("hours_no_cooling").GetDouble() + m.GetProperty("hours_free").GetDouble()
                     + m.GetProperty("hours_integrated").GetDouble() + m.GetProperty("hours_minimum").GetDouble();
                 Assert.Equal(root.GetProperty("hours_occupied").GetInt32(), hours, 9);
             }
-
-            Assert.Equal(12, controls.GetProperty(name).GetProperty("monthly").GetArrayLength());
         }
 
-        foreach (var f in fields)
+        // The headline (hourly) table is keyed by control; the baseline is "none".
+        var controls = root.GetProperty("controls");
+        Assert.Equal(names.Length, controls.EnumerateObject().Count());
+        foreach (var f in fields.SkipLast(1))
         {
-            Assert.Equal(JsonValueKind.Number, root.GetProperty("baseline").GetProperty("hourly").GetProperty(f).ValueKind);
+            Assert.Equal(JsonValueKind.Number, controls.GetProperty("none").GetProperty(f).ValueKind);
         }
 
         // Hot-humid site: the dry-bulb control's savings are negative and stay negative in the output.
-        Assert.True(controls.GetProperty("differential-drybulb").GetProperty("hourly").GetProperty("savings").GetDouble() < 0);
-        Assert.True(controls.GetProperty("differential-drybulb").GetProperty("hourly").GetProperty("savings_pct").GetDouble() < 0);
-        Assert.Equal(0.0, controls.GetProperty("none").GetProperty("hourly").GetProperty("savings").GetDouble());
+        Assert.True(controls.GetProperty("differential_drybulb").GetProperty("savings_kbtu").GetDouble() < 0);
+        Assert.True(controls.GetProperty("differential_drybulb").GetProperty("savings_pct").GetDouble() < 0);
+        Assert.Equal(0.0, controls.GetProperty("none").GetProperty("savings_kbtu").GetDouble());
+        var check = root.GetProperty("savings_by_method").EnumerateArray().ToList();
+        Assert.Equal(5, check.Count);
+        foreach (var f in new[] { "hourly_savings_kbtu", "joint_bin_savings_kbtu", "bin_savings_kbtu" })
+        {
+            Assert.All(check, r => Assert.Equal(JsonValueKind.Number, r.GetProperty(f).ValueKind));
+        }
+
         var bins = root.GetProperty("bins");
         Assert.True(bins.GetArrayLength() > 10);
         var bin = bins[bins.GetArrayLength() / 2];
-        foreach (var f in new[] { "bin_low", "bin_high", "bin_mid", "hours_occupied" })
+        foreach (var f in new[] { "bin_low_f", "bin_high_f", "hours_occupied", "hourly_coil_total_kbtu", "joint_bin_coil_total_kbtu", "bin_coil_total_kbtu", "hours_free" })
         {
             Assert.Equal(JsonValueKind.Number, bin.GetProperty(f).ValueKind);
         }
 
-        Assert.True(bin.GetProperty("controls").GetProperty("baseline").GetProperty("hourly").TryGetProperty("coil_total", out _));
-        Assert.True(bin.GetProperty("controls").GetProperty("fixed-dewpoint").GetProperty("bin").TryGetProperty("hours_free", out _));
+        Assert.Equal(12, root.GetProperty("months").GetArrayLength());
         Assert.Contains(root.GetProperty("assumptions").EnumerateArray(), a => a.GetString()!.Contains("recalled from memory"));
-        Assert.Equal("kBtu", root.GetProperty("units").GetProperty("energy").GetString());
     }
 
     [Fact]
@@ -77,7 +84,7 @@ public class EconomizerCommandTests
         Assert.Equal(0, code);
         Assert.Equal("", err);
         Assert.Contains("Controls against the baseline", output);
-        Assert.Contains("Bin method against the hourly sum", output);
+        Assert.Contains("Coil energy saved by each method", output);
         Assert.Contains("Modes by bin, best control: differential-enthalpy (integrated)", output);
         Assert.Contains("Negative savings", output);
         Assert.Contains("recalled from memory", output);
@@ -98,7 +105,7 @@ public class EconomizerCommandTests
             var (code, output, err) = Run([.. args, "--high-limit-enthalpy", limit]);
             Assert.True(code == 0, err);
             using var doc = JsonDocument.Parse(output);
-            return doc.RootElement.GetProperty("controls").GetProperty("fixed-enthalpy").GetProperty("hourly").GetProperty("hours_integrated").GetDouble();
+            return doc.RootElement.GetProperty("controls").GetProperty("fixed_enthalpy").GetProperty("hours_integrated").GetDouble();
         }
 
         double ip = Hours(Args("--json", "--controls", "fixed-enthalpy"), "28");
@@ -121,11 +128,11 @@ public class EconomizerCommandTests
     }
 
     [Theory]
-    [InlineData(new[] { "--controls", "enthalpy" }, "'enthalpy' is not a control")]
+    [InlineData(new[] { "--controls", "enthalpy" }, "--controls: \"enthalpy\" is not one of")]
     [InlineData(new[] { "--min-outdoor-airflow", "5000" }, "--min-outdoor-airflow: the minimum outdoor airflow is above the minimum supply airflow")]
     [InlineData(new[] { "--supply-temp", "80" }, "--supply-temp: the supply temperature must be below the return temperature")]
     [InlineData(new[] { "--occupied", "Mon-Fri 07:00-25:00" }, "--occupied")]
-    [InlineData(new[] { "--flow-basis", "metric" }, "--flow-basis must be site, standard or actual")]
+    [InlineData(new[] { "--flow-basis", "metric" }, "--flow-basis metric: 'metric' is not a flow basis; write site, standard or actual")]
     [InlineData(new[] { "--balance-point", "99" }, "--design-outdoor: the design outdoor temperature must be above the balance point")]
     public void BadOption_IsAUsageErrorNamingTheOption(string[] replace, string message)
     {

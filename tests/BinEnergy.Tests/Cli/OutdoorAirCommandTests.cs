@@ -6,7 +6,7 @@ namespace BinEnergy.Tests.Cli;
 /// <summary>The <c>outdoor-air</c> command end to end.</summary>
 public class OutdoorAirCommandTests
 {
-    private static readonly string[] Totals = ["heating", "cooling_sensible", "cooling_latent", "humidification", "recovered_heating", "recovered_cooling", "fan_energy", "hours_ventilated"];
+    private static readonly string[] Totals = ["heating_kbtu", "cooling_sensible_kbtu", "cooling_latent_kbtu", "humidification_kbtu", "recovered_heating_kbtu", "recovered_cooling_kbtu", "fan_kwh", "hours_ventilated"];
 
     private static JsonElement Json(params string[] args)
     {
@@ -20,37 +20,45 @@ public class OutdoorAirCommandTests
     {
         var root = Json(BinsCommandTests.InventedFile(), "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60",
             "--occupied", "Mon-Fri 07:00-19:00", "--recovery-sensible", "0.7", "--recovery-pressure", "0.5");
-        foreach (var method in new[] { "bin", "hourly" })
+        foreach (var method in new[] { "hourly", "joint_bin", "bin" })
         {
             foreach (var f in Totals)
             {
-                Assert.Equal(JsonValueKind.Number, root.GetProperty(method).GetProperty(f).ValueKind);
+                Assert.Equal(JsonValueKind.Number, root.GetProperty("annual").GetProperty(method).GetProperty(f).ValueKind);
             }
         }
 
-        Assert.Equal(52 * 60 + 12, root.GetProperty("hourly").GetProperty("hours_ventilated").GetInt32());
-        foreach (var f in Totals.SkipLast(1))
+        var hourly = root.GetProperty("annual").GetProperty("hourly");
+        Assert.Equal(52 * 60 + 12, hourly.GetProperty("hours_ventilated").GetInt32());
+        Assert.Equal("hourly", root.GetProperty("headline_method").GetString());
+        var check = root.GetProperty("method_check").EnumerateArray().ToList();
+        Assert.Contains(check, r => r.GetProperty("figure").GetString() == "Cooling, latent" && r.GetProperty("unit").GetString() == "kBtu");
+        foreach (var row in check)
         {
-            Assert.True(root.GetProperty("difference_pct").TryGetProperty(f, out _), f);
+            foreach (var column in new[] { "hourly", "joint_bin", "bin" })
+            {
+                Assert.Equal(JsonValueKind.Number, row.GetProperty(column).ValueKind);
+            }
         }
 
-        Assert.Equal("kBtu", root.GetProperty("units").GetProperty("energy").GetString());
-        Assert.Equal("site", root.GetProperty("assumptions").GetProperty("flow_basis").GetString());
-        Assert.Equal("Mon-Fri 07:00-19:00", root.GetProperty("assumptions").GetProperty("schedule").GetString());
-        Assert.True(root.GetProperty("assumptions").GetProperty("sensible_factor").GetDouble() is > 1.0 and < 1.08); // 300 m site
-        foreach (var p in new[] { "heating", "cooling", "dehumidification" })
+        var assumptions = root.GetProperty("assumptions_values");
+        Assert.Equal("site", assumptions.GetProperty("flow_basis").GetString());
+        Assert.Equal("Mon-Fri 07:00-19:00", assumptions.GetProperty("schedule").GetString());
+        Assert.True(assumptions.GetProperty("sensible_factor_btuh_cfm_f").GetDouble() is > 1.0 and < 1.08); // 300 m site
+        foreach (var p in new[] { "heating_99_6", "cooling_0_4", "dehumidification_0_4" })
         {
-            Assert.Equal(JsonValueKind.Number, root.GetProperty("peaks").GetProperty(p).GetProperty("drybulb").ValueKind);
+            Assert.Equal(JsonValueKind.Number, root.GetProperty("peaks").GetProperty(p).GetProperty("drybulb_f").ValueKind);
         }
 
         var bins = root.GetProperty("bins").EnumerateArray().ToList();
-        Assert.Equal(root.GetProperty("bin").GetProperty("heating").GetDouble(), bins.Sum(b => b.GetProperty("heating").GetDouble()), 1e-6);
-        Assert.Equal(root.GetProperty("hourly").GetProperty("heating").GetDouble(), bins.Sum(b => b.GetProperty("hourly").GetProperty("heating").GetDouble()), 1e-6);
+        Assert.Equal(root.GetProperty("annual").GetProperty("bin").GetProperty("heating_kbtu").GetDouble(), bins.Sum(b => b.GetProperty("bin_heating_kbtu").GetDouble()), 1e-6);
+        Assert.Equal(hourly.GetProperty("heating_kbtu").GetDouble(), bins.Sum(b => b.GetProperty("hourly_heating_kbtu").GetDouble()), 1e-6);
+        Assert.Equal(root.GetProperty("annual").GetProperty("joint_bin").GetProperty("cooling_latent_kbtu").GetDouble(), bins.Sum(b => b.GetProperty("joint_bin_cooling_latent_kbtu").GetDouble()), 1e-6);
         Assert.Equal(12, root.GetProperty("months").GetArrayLength());
         Assert.Contains("licensed engineer", root.GetProperty("cautions").EnumerateArray().Select(c => c.GetString()).Aggregate((a, b) => a + b));
 
         // The fan runs in every ventilated hour: 2 x 0.471947 m3/s x 124.42 Pa / 0.6 = 195.73 W (worked by hand), 3,132 h.
-        Assert.Equal(195.73 * 3.41214 / 1000 * 3132, root.GetProperty("hourly").GetProperty("fan_energy").GetDouble(), 0.5);
+        Assert.Equal(195.73 / 1000 * 3132, hourly.GetProperty("fan_kwh").GetDouble(), 0.2);
     }
 
     [Fact]
@@ -60,12 +68,11 @@ public class OutdoorAirCommandTests
         var ip = Json([.. common, "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60"]);
         // 1,000 cfm = 471.947 L/s; 70 F = 21.1111 C; 75 F = 23.8889 C (exact conversions, NIST SP 811).
         var si = Json([.. common, "--units", "si", "--width", "2.7777777778", "--airflow", "471.947443", "--heat-to", "21.1111111", "--cool-to", "23.8888889", "--max-rh", "60"]);
-        Assert.Equal("kWh", si.GetProperty("units").GetProperty("energy").GetString());
         double kbtuPerKwh = 3.41214163; // 1 kWh = 3412.14 Btu (DESIGN section 3)
         foreach (var f in new[] { "heating", "cooling_sensible", "cooling_latent" })
         {
-            double a = ip.GetProperty("hourly").GetProperty(f).GetDouble();
-            Assert.Equal(a, si.GetProperty("hourly").GetProperty(f).GetDouble() * kbtuPerKwh, 1e-5 * a + 1e-6);
+            double a = ip.GetProperty("annual").GetProperty("hourly").GetProperty(f + "_kbtu").GetDouble();
+            Assert.Equal(a, si.GetProperty("annual").GetProperty("hourly").GetProperty(f + "_kwh").GetDouble() * kbtuPerKwh, 1e-5 * a + 1e-6);
         }
     }
 
@@ -73,9 +80,9 @@ public class OutdoorAirCommandTests
     public void RealFile_TextShowsBothMethodsPeaksAndAssumptions()
     {
         var (code, output, err) = AirCommandTests.Run("outdoor-air", RawSiteColumns.PathOf("723650TYA.CSV.gz"), "--map", "tmy3",
-            "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--joint");
+            "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60");
         Assert.True(code == 0, err);
-        foreach (var s in new[] { "Bin method", "Hourly sum", "Joint bins", "Peak outdoor-air loads", "Assumptions", "Flow basis", "0.888", "Caution", "every hour counts as occupied" })
+        foreach (var s in new[] { "Bin method", "Hourly", "Joint bins", "Peak outdoor-air loads", "Assumptions", "flow basis", "0.888", "Caution", "every hour counts as occupied" })
         {
             Assert.Contains(s, output);
         }
@@ -105,7 +112,7 @@ public class OutdoorAirCommandTests
     [InlineData(new[] { "--airflow", "1000", "--heat-to", "80", "--cool-to", "75", "--max-rh", "60" }, "above the cooling setpoint")]
     [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--flow-basis", "metric" }, "--flow-basis")]
     [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--recovery-latent", "0.5" }, "--recovery-sensible")]
-    [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--recovery-sensible", "1.5" }, "sensible recovery effectiveness 1.5")]
+    [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--recovery-sensible", "1.5" }, "--recovery-sensible: 1.5 is out of range")]
     [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--occupied", "Mon-Fri 7:30-19:00" }, "whole hours")]
     public void BadOptions_AreUsageErrorsNamingTheProblem(string[] extra, string message)
     {

@@ -17,9 +17,8 @@ public sealed class WeatherCommandsTests
 
     private static readonly string[] ContractFields =
     [
-        "hours", "drybulb_min", "drybulb_mean", "drybulb_max", "heating_degree_days", "cooling_degree_days", "heating_99_6", "heating_99",
-        "cooling_0_4", "cooling_0_4_mcwb", "cooling_1", "cooling_1_mcwb", "cooling_2", "cooling_2_mcwb", "dehumidification_0_4_dewpoint",
-        "dehumidification_0_4_mcdb", "elevation", "pressure_mean", "repairs", "units",
+        "hours", "period_start", "period_end", "calendar", "typical_year", "elevation_ft", "site_pressure_psia", "site_pressure_source",
+        "hourly_pressure_source", "pressure_mean_psia", "climate", "degree_day_curve", "design", "repairs",
     ];
 
     [Fact]
@@ -34,11 +33,22 @@ public sealed class WeatherCommandsTests
             Assert.True(root.TryGetProperty(field, out _), "missing field " + field);
         }
 
+        var climate = root.GetProperty("climate");
+        foreach (var field in new[] { "drybulb_min_f", "drybulb_mean_f", "drybulb_max_f", "degree_day_base_f", "heating_degree_days_f_day", "cooling_degree_days_f_day" })
+        {
+            Assert.Equal(JsonValueKind.Number, climate.GetProperty(field).ValueKind);
+        }
+
         Assert.Equal(8760, root.GetProperty("hours").GetInt32());
-        Assert.Equal("F", root.GetProperty("units").GetProperty("temperature").GetString());
-        Assert.Equal(201 / 0.3048, root.GetProperty("elevation").GetDouble(), 6); // header elevation 201 m in ft
-        Assert.InRange(root.GetProperty("heating_degree_days").GetDouble(), 5_800, 7_200); // about 6,500 F-day (recalled from memory)
-        Assert.True(root.GetProperty("cooling_0_4").GetDouble() > root.GetProperty("cooling_0_4_mcwb").GetDouble());
+        Assert.Equal(201 / 0.3048, root.GetProperty("elevation_ft").GetDouble(), 6); // header elevation 201 m in ft
+        Assert.InRange(climate.GetProperty("heating_degree_days_f_day").GetDouble(), 5_800, 7_200); // about 6,500 F-day (recalled from memory)
+        var design = root.GetProperty("design");
+        foreach (var key in new[] { "heating_99_6", "heating_99", "cooling_0_4", "cooling_1", "cooling_2", "dehumidification_0_4", "dehumidification_1" })
+        {
+            Assert.True(design.TryGetProperty(key, out _), key);
+        }
+
+        Assert.True(design.GetProperty("cooling_0_4").GetProperty("drybulb_f").GetDouble() > design.GetProperty("cooling_0_4").GetProperty("mean_coincident_wetbulb_f").GetDouble());
         Assert.Equal(JsonValueKind.Object, root.GetProperty("repairs").ValueKind);
         Assert.Equal(41, root.GetProperty("degree_day_curve").GetArrayLength());
     }
@@ -49,10 +59,11 @@ public sealed class WeatherCommandsTests
         var (code, output, _) = Run("inspect", TestData.Open("725945TYA.CSV"), "--map", "tmy3", "--units", "si", "--json");
         Assert.Equal(0, code);
         var root = JsonDocument.Parse(output).RootElement;
-        Assert.Equal(18.3, root.GetProperty("degree_day_base").GetDouble(), 9);
-        Assert.Equal(62, root.GetProperty("elevation").GetDouble(), 9); // Arcata header: 62 m
-        Assert.Equal(29, root.GetProperty("repairs").GetProperty("dewpoint_above_drybulb_clamped").GetInt32()
-            + root.GetProperty("repairs").GetProperty("dewpoint_above_drybulb_suspect").GetInt32()); // SOURCES.md: 29 hours
+        Assert.Equal(18.3, root.GetProperty("climate").GetProperty("degree_day_base_c").GetDouble(), 9);
+        Assert.Equal(62, root.GetProperty("elevation_m").GetDouble(), 9); // Arcata header: 62 m
+        var repairs = root.GetProperty("repairs");
+        Assert.Equal(29, repairs.GetProperty("dewpoint_above_drybulb_clamped").GetProperty("count").GetInt32()
+            + repairs.GetProperty("dewpoint_above_drybulb_suspect").GetProperty("count").GetInt32()); // SOURCES.md: 29 hours
     }
 
     [Fact]

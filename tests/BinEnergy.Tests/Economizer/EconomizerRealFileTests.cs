@@ -31,18 +31,18 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
             Assert.True(e.OccupiedHours > 3000, file); // 60 office hours a week, about 3,120 a year
             foreach (var c in e.Controls.Prepend(e.Baseline))
             {
-                Assert.Equal(e.OccupiedHours, c.Hourly.Hours, 9);
-                Assert.Equal(e.OccupiedHours, c.Bin.Hours, 9);
-                if (c.JointBin is not null)
+                Assert.Equal(e.OccupiedHours, c.Totals.Hourly.Hours, 9);
+                Assert.Equal(e.OccupiedHours, c.Totals.Bin.Hours, 9);
+                if (c.Totals.JointBin is not null)
                 {
-                    Assert.Equal(e.OccupiedHours, c.JointBin.Hours, 9);
+                    Assert.Equal(e.OccupiedHours, c.Totals.JointBin.Hours, 9);
                 }
 
                 // The breakdowns add up to the annual figures.
-                Assert.Equal(c.Hourly.CoilTotal.Joules, c.ByMonth.Sum(m => m.CoilTotal.Joules), 1e-6 * c.Hourly.CoilTotal.Joules + 1);
-                Assert.Equal(c.Hourly.CoilLatent.Joules, c.ByBinHourly.Sum(m => m.CoilLatent.Joules), 1e-6 * c.Hourly.CoilLatent.Joules + 1);
-                Assert.Equal(c.Bin.CoilTotal.Joules, c.ByBin.Sum(m => m.CoilTotal.Joules), 1e-6 * c.Bin.CoilTotal.Joules + 1);
-                Assert.Equal(e.OccupiedHours, c.ByBinHourly.Sum(m => m.Hours), 9);
+                Assert.Equal(c.Totals.Hourly.CoilTotal.Joules, c.ByMonth.Sum(m => m.CoilTotal.Joules), 1e-6 * c.Totals.Hourly.CoilTotal.Joules + 1);
+                Assert.Equal(c.Totals.Hourly.CoilLatent.Joules, c.ByBin.Sum(m => m.Hourly.CoilLatent.Joules), 1e-6 * c.Totals.Hourly.CoilLatent.Joules + 1);
+                Assert.Equal(c.Totals.Bin.CoilTotal.Joules, c.ByBin.Sum(m => m.Bin.CoilTotal.Joules), 1e-6 * c.Totals.Bin.CoilTotal.Joules + 1);
+                Assert.Equal(e.OccupiedHours, c.ByBin.Sum(m => m.Hourly.Hours), 9);
             }
         }
     }
@@ -114,8 +114,8 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
 
         Assert.True(worse > 100, $"only {worse} humid hours where the dry-bulb control adds load");
         var result = EconomizerRealFiles.Control(files.Integrated[Melbourne], HighLimitKind.DifferentialDryBulb);
-        Assert.True(result.HourlySavings.Joules < 0, "the year's savings are reported negative, not clipped");
-        Assert.True(result.HourlySavingsPercent < 0);
+        Assert.True(result.Savings(IntegrationMethod.Hourly).Joules < 0, "the year's savings are reported negative, not clipped");
+        Assert.True(result.SavingsPercent(IntegrationMethod.Hourly) < 0);
     }
 
     [Fact]
@@ -125,8 +125,8 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
         {
             var de = EconomizerRealFiles.Control(e, HighLimitKind.DifferentialEnthalpy);
             var db = EconomizerRealFiles.Control(e, HighLimitKind.DifferentialDryBulb);
-            Assert.True(de.Hourly.LatentSavingsAgainst(e.Baseline.Hourly).Joules >= db.Hourly.LatentSavingsAgainst(e.Baseline.Hourly).Joules);
-            Assert.True(de.HourlySavings.Joules >= db.HourlySavings.Joules);
+            Assert.True(de.Totals.Hourly.LatentSavingsAgainst(e.Baseline.Totals.Hourly).Joules >= db.Totals.Hourly.LatentSavingsAgainst(e.Baseline.Totals.Hourly).Joules);
+            Assert.True(de.Savings(IntegrationMethod.Hourly).Joules >= db.Savings(IntegrationMethod.Hourly).Joules);
         }
     }
 
@@ -139,7 +139,7 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
     [Fact]
     public void AnnualSavings_RankControlsAsThePhysicsPredicts()
     {
-        double Savings(string file, HighLimitKind k) => Kbtu(EconomizerRealFiles.Control(files.Integrated[file], k).HourlySavings);
+        double Savings(string file, HighLimitKind k) => Kbtu(EconomizerRealFiles.Control(files.Integrated[file], k).Savings(IntegrationMethod.Hourly));
 
         // Every site: differential enthalpy saves at least as much as differential dry-bulb.
         foreach (var (file, _, _) in EconomizerRealFiles.Sites)
@@ -174,8 +174,8 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
         // Integrated differential enthalpy saves at least as much as non-integrated (its integrated hours never add load).
         foreach (var (file, _, _) in EconomizerRealFiles.Sites)
         {
-            Assert.True(Kbtu(EconomizerRealFiles.Control(files.Integrated[file], HighLimitKind.DifferentialEnthalpy).HourlySavings)
-                >= Kbtu(EconomizerRealFiles.Control(files.NonIntegrated[file], HighLimitKind.DifferentialEnthalpy).HourlySavings) - 1e-6, file);
+            Assert.True(Kbtu(EconomizerRealFiles.Control(files.Integrated[file], HighLimitKind.DifferentialEnthalpy).Savings(IntegrationMethod.Hourly))
+                >= Kbtu(EconomizerRealFiles.Control(files.NonIntegrated[file], HighLimitKind.DifferentialEnthalpy).Savings(IntegrationMethod.Hourly)) - 1e-6, file);
         }
     }
 
@@ -187,9 +187,9 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
         foreach (var file in new[] { Melbourne, Chicago })
         {
             var c = EconomizerRealFiles.Control(files.Integrated[file], HighLimitKind.DifferentialDryBulb);
-            double hourly = Kbtu(c.HourlySavings);
-            double bin = Kbtu(c.BinSavings);
-            double joint = Kbtu(c.JointBinSavings!.Value);
+            double hourly = Kbtu(c.Savings(IntegrationMethod.Hourly));
+            double bin = Kbtu(c.Savings(IntegrationMethod.Bin));
+            double joint = Kbtu(c.Savings(IntegrationMethod.JointBin));
             Assert.True(Math.Abs(joint - hourly) < 0.5 * Math.Abs(bin - hourly), $"{file}: hourly {hourly:0}, bin {bin:0}, joint {joint:0}");
         }
     }
@@ -207,9 +207,9 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
             var bins = BinTable.Build(weather, DryBulbBinScale.Default(UnitSystem.IP), occupied);
             var mid = EconomizerEvaluation.Evaluate(weather, occupied, bins, EconomizerRealFiles.Reference(true) with { BinPoint = BinEvaluationPoint.Midpoint });
             var mean = files.Integrated[file];
-            double hourly = mean.Baseline.Hourly.CoilSensible.Joules;
-            Assert.Equal(hourly, mid.Baseline.Hourly.CoilSensible.Joules); // the hourly sum does not depend on the bins
-            double e1 = Math.Abs(mean.Baseline.Bin.CoilSensible.Joules / hourly - 1), e2 = Math.Abs(mid.Baseline.Bin.CoilSensible.Joules / hourly - 1);
+            double hourly = mean.Baseline.Totals.Hourly.CoilSensible.Joules;
+            Assert.Equal(hourly, mid.Baseline.Totals.Hourly.CoilSensible.Joules); // the hourly sum does not depend on the bins
+            double e1 = Math.Abs(mean.Baseline.Totals.Bin.CoilSensible.Joules / hourly - 1), e2 = Math.Abs(mid.Baseline.Totals.Bin.CoilSensible.Joules / hourly - 1);
             output.WriteLine($"{file}: baseline sensible coil, bins at mean dry-bulb {e1 * 100:0.00} % off the hourly sum, at midpoints {e2 * 100:0.00} %");
             Assert.All(mean.Bins.Where(b => b.OccupiedHours > 0), b => Assert.InRange(b.EvaluatedAt.Celsius, b.Low.Celsius, b.High.Celsius));
             meanError += e1;
@@ -258,6 +258,6 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
 
         var bins = Core.Binning.BinTable.Build(w, Core.Binning.DryBulbBinScale.Default(UnitSystem.IP), occ);
         var e = EconomizerEvaluation.Evaluate(w, occ, bins, settings);
-        Assert.Equal(joules, e.Baseline.Hourly.CoilSensible.Joules, 1e-9 * joules);
+        Assert.Equal(joules, e.Baseline.Totals.Hourly.CoilSensible.Joules, 1e-9 * joules);
     }
 }

@@ -36,7 +36,7 @@ public sealed class EconomizerRealFiles
             var bins = BinTable.Build(weather, DryBulbBinScale.Default(UnitSystem.IP), occupied);
             Weather[file] = weather;
             Occupied[file] = occupied;
-            Integrated[file] = EconomizerEvaluation.Evaluate(weather, occupied, bins, Reference(true), bins.Joint(HumidityBinScale.DefaultWidthIp));
+            Integrated[file] = EconomizerEvaluation.Evaluate(weather, occupied, bins, Reference(true));
             NonIntegrated[file] = EconomizerEvaluation.Evaluate(weather, occupied, bins, Reference(false));
         }
     }

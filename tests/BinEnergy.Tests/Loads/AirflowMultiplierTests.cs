@@ -20,11 +20,11 @@ public class AirflowMultiplierTests
             DryBulbBinScale.Default(UnitSystem.SI));
 
         // Invariant: loads are linear in the airflow (m = rho V), so half the air is half the load.
-        Assert.True(full.Hourly.Heating.Joules > 0);
-        Assert.Equal(full.Hourly.Heating.Joules * 0.5, half.Hourly.Heating.Joules, 6);
-        Assert.Equal(full.Hourly.CoolingLatent.Joules * 0.5, half.Hourly.CoolingLatent.Joules, 6);
-        Assert.Equal(full.Bin.Heating.Joules * 0.5, half.Bin.Heating.Joules, 6);
-        Assert.True(half.Hourly.CoolingSensible.Joules <= full.Hourly.CoolingSensible.Joules); // invariant: never above the no-DCV case
+        Assert.True(full.Annual.Hourly.Loads.Heating.Joules > 0);
+        Assert.Equal(full.Annual.Hourly.Loads.Heating.Joules * 0.5, half.Annual.Hourly.Loads.Heating.Joules, 6);
+        Assert.Equal(full.Annual.Hourly.Loads.CoolingLatent.Joules * 0.5, half.Annual.Hourly.Loads.CoolingLatent.Joules, 6);
+        Assert.Equal(full.Annual.Bin.Loads.Heating.Joules * 0.5, half.Annual.Bin.Loads.Heating.Joules, 6);
+        Assert.True(half.Annual.Hourly.Loads.CoolingSensible.Joules <= full.Annual.Hourly.Loads.CoolingSensible.Joules); // invariant: never above the no-DCV case
     }
 
     [Fact]
@@ -39,14 +39,14 @@ public class AirflowMultiplierTests
         var result = OutdoorAirCalculator.Compute(weather, settings, BinTable.Build(weather, scale, flags), flags, keepHours: true);
         var hours = result.Hours!;
         Assert.Equal(weather.Count, hours.Count);
-        Assert.Equal(result.Hourly.Heating.Joules, hours.Sum(h => h?.Heating.Joules ?? 0), 1e-6 * result.Hourly.Heating.Joules);
-        Assert.Equal(result.Hourly.CoolingLatent.Joules, hours.Sum(h => h?.CoolingLatent.Joules ?? 0), 1e-6 * result.Hourly.CoolingLatent.Joules + 1);
-        Assert.Equal(result.Hourly.HoursVentilated, hours.Count(h => h is not null));
+        Assert.Equal(result.Annual.Hourly.Loads.Heating.Joules, hours.Sum(h => h.Loads.Heating.Joules), 1e-6 * result.Annual.Hourly.Loads.Heating.Joules);
+        Assert.Equal(result.Annual.Hourly.Loads.CoolingLatent.Joules, hours.Sum(h => h.Loads.CoolingLatent.Joules), 1e-6 * result.Annual.Hourly.Loads.CoolingLatent.Joules + 1);
+        Assert.Equal(result.Annual.Hourly.Loads.HoursVentilated, hours.Count(h => h.Loads.HoursVentilated > 0));
 
         // A night hour carries a quarter of the airflow: at the same state it would carry a quarter of the day's load.
         var full = OutdoorAirCalculator.Compute(weather, settings with { AirflowMultipliers = null }, BinTable.Build(weather, scale, flags), flags, keepHours: true);
-        int night = Enumerable.Range(0, weather.Count).First(i => weather.Times[i].Hour == 3 && full.Hours![i]!.Heating.Joules > 0);
-        Assert.Equal(0.25 * full.Hours![night]!.Heating.Joules, hours[night]!.Heating.Joules, 1e-9 * full.Hours[night]!.Heating.Joules);
+        int night = Enumerable.Range(0, weather.Count).First(i => weather.Times[i].Hour == 3 && full.Hours![i].Loads.Heating.Joules > 0);
+        Assert.Equal(0.25 * full.Hours![night].Loads.Heating.Joules, hours[night].Loads.Heating.Joules, 1e-9 * full.Hours[night].Loads.Heating.Joules);
         Assert.Null(OutdoorAirCalculator.Compute(weather, settings, scale).Hours); // only when asked for
     }
 }

@@ -52,10 +52,10 @@ public class DemandControlledVentilationRealFileTests(ITestOutputHelper output)
         }
 
         double expected = weighted * massFlow * 3600;
-        output.WriteLine($"Chicago, 1,000 cfm people-only with the office profile: heating {result.Hourly.Heating.Kbtu:0} kBtu hourly, " +
-            $"{result.Bin.Heating.Kbtu:0} by bins, raw {expected / 1055055.85:0}; {weighted / plain * 100:0.0} % of the constant-airflow degree-hours");
-        Assert.Equal(1.0, result.Hourly.Heating.Joules / expected, 0.003); // same tolerance as the constant-airflow check
-        Assert.Equal(8760, result.Hourly.HoursVentilated);
+        output.WriteLine($"Chicago, 1,000 cfm people-only with the office profile: heating {result.Annual.Hourly.Loads.Heating.Kbtu:0} kBtu hourly, " +
+            $"{result.Annual.Bin.Loads.Heating.Kbtu:0} by bins, raw {expected / 1055055.85:0}; {weighted / plain * 100:0.0} % of the constant-airflow degree-hours");
+        Assert.Equal(1.0, result.Annual.Hourly.Loads.Heating.Joules / expected, 0.003); // same tolerance as the constant-airflow check
+        Assert.Equal(8760, result.Annual.Hourly.Loads.HoursVentilated);
 
         // The profile weights the colder night hours by zero: the heating share is clearly below the mean fraction (11/24).
         Assert.True(weighted / plain < Office.Average() - 0.02, $"night-weighted share {weighted / plain:0.000} should be clearly below the mean fraction");
@@ -67,7 +67,7 @@ public class DemandControlledVentilationRealFileTests(ITestOutputHelper output)
     {
         var weather = RealSiteLoadTests.Read(file, map);
         var result = OutdoorAirCalculator.Compute(weather, PeopleOnly(BinEvaluationPoint.MeanDryBulb), DryBulbBinScale.Default(UnitSystem.IP));
-        double heating = result.DifferencePercent(LoadFigure.Heating)!.Value;
+        double heating = result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.Heating)!.Value;
         output.WriteLine($"{place}: bin vs hourly heating with the office profile {heating:+0.00;-0.00} %");
 
         // Each bin uses its hours' mean multiplier at its mean dry-bulb: the error is the within-bin covariance of

@@ -29,9 +29,9 @@ public class OutdoorAirInvariantTests
         // Worked by hand: rho = 101,325 / (287.042 x 294.261) = 1.19961 kg/m3 (dry air at 70 F, Handbook ch. 1 eq. 26);
         // q = 1.19961 x 1 m3/s x (1.006 + 1.86 x 0.002) x 20 K = 24.225 kW; one hour = 24.225 kWh.
         Assert.Equal(1.19961, result.Assumptions.DryAirDensity, 4);
-        Assert.Equal(24.225, result.Hourly.Heating.KilowattHours, 0.002);
-        Assert.Equal(0.0, result.Hourly.CoolingSensible.Joules);
-        Assert.Equal(0.0, result.Hourly.CoolingLatent.Joules);
+        Assert.Equal(24.225, result.Annual.Hourly.Loads.Heating.KilowattHours, 0.002);
+        Assert.Equal(0.0, result.Annual.Hourly.Loads.CoolingSensible.Joules);
+        Assert.Equal(0.0, result.Annual.Hourly.Loads.CoolingLatent.Joules);
     }
 
     [Fact]
@@ -53,22 +53,22 @@ public class OutdoorAirInvariantTests
         var wheel = OutdoorAirCalculator.Compute(weather, settings, DryBulbBinScale.Default(UnitSystem.SI));
 
         // Heating hour by hand: T' = -10 + 0.7 x (20 - (-10)) = 11 C, load (20 - 11) / 30 = 30 % of the plain load.
-        Assert.Equal(0.3 * plain.Hourly.Heating.Joules, wheel.Hourly.Heating.Joules, 1e-3);
-        Assert.Equal(0.7 * plain.Hourly.Heating.Joules, wheel.Hourly.RecoveredHeating.Joules, 1e-3);
+        Assert.Equal(0.3 * plain.Annual.Hourly.Loads.Heating.Joules, wheel.Annual.Hourly.Loads.Heating.Joules, 1e-3);
+        Assert.Equal(0.7 * plain.Annual.Hourly.Loads.Heating.Joules, wheel.Annual.Hourly.Loads.RecoveredHeating.Joules, 1e-3);
 
         // Cooling hour by hand: T' = 35 - 0.7 x 11 = 27.3 C; W' = 0.020 - 0.6 x (0.020 - W_max).
         double wMax = wheel.Assumptions.MaxHumidityRatio.KilogramsPerKilogram;
         double cp = 1006 + 1860 * 0.020;
-        Assert.Equal(rho * cp * (27.3 - 24) * 3600, wheel.Hourly.CoolingSensible.Joules, 1.0);
-        Assert.Equal(0.4 * plain.Hourly.CoolingLatent.Joules, wheel.Hourly.CoolingLatent.Joules, 1.0);
-        Assert.Equal(rho * 2_501_000 * (0.020 - wMax) * 3600, plain.Hourly.CoolingLatent.Joules, 1.0);
+        Assert.Equal(rho * cp * (27.3 - 24) * 3600, wheel.Annual.Hourly.Loads.CoolingSensible.Joules, 1.0);
+        Assert.Equal(0.4 * plain.Annual.Hourly.Loads.CoolingLatent.Joules, wheel.Annual.Hourly.Loads.CoolingLatent.Joules, 1.0);
+        Assert.Equal(rho * 2_501_000 * (0.020 - wMax) * 3600, plain.Annual.Hourly.Loads.CoolingLatent.Joules, 1.0);
 
         // Below a -5 C frost limit the effectiveness drops to 0.35: T' = -10 + 0.35 x 30 = 0.5 C, load 19.5 / 30 of plain.
         var frost = OutdoorAirCalculator.Compute(weather, settings with
         {
             Recovery = settings.Recovery! with { FrostLimit = Temperature.FromCelsius(-5), FrostEffectiveness = 0.35 },
         }, DryBulbBinScale.Default(UnitSystem.SI));
-        Assert.Equal(19.5 / 30 * plain.Hourly.Heating.Joules, frost.Hourly.Heating.Joules, 1e-3);
+        Assert.Equal(19.5 / 30 * plain.Annual.Hourly.Loads.Heating.Joules, frost.Annual.Hourly.Loads.Heating.Joules, 1e-3);
     }
 
     [Theory]
@@ -80,14 +80,14 @@ public class OutdoorAirInvariantTests
         var weather = SyntheticWeather.Year(meanC: 16, spreadK: 2);
         var one = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical(basis, 1000), Bins, HumidityBinScale.Default(UnitSystem.IP));
         var three = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical(basis, 3000), Bins, HumidityBinScale.Default(UnitSystem.IP));
-        foreach (var figure in OutdoorAirTotals.Figures)
+        foreach (var figure in Enum.GetValues<LoadFigure>())
         {
-            Assert.Equal(3 * one.Hourly.Get(figure).Joules, three.Hourly.Get(figure).Joules, 1e-6 * (1 + three.Hourly.Get(figure).Joules));
-            Assert.Equal(3 * one.Bin.Get(figure).Joules, three.Bin.Get(figure).Joules, 1e-6 * (1 + three.Bin.Get(figure).Joules));
-            Assert.Equal(3 * one.JointBin!.Get(figure).Joules, three.JointBin!.Get(figure).Joules, 1e-6 * (1 + three.JointBin!.Get(figure).Joules));
+            Assert.Equal(3 * one.Annual.Hourly.Loads[figure].Joules, three.Annual.Hourly.Loads[figure].Joules, 1e-6 * (1 + three.Annual.Hourly.Loads[figure].Joules));
+            Assert.Equal(3 * one.Annual.Bin.Loads[figure].Joules, three.Annual.Bin.Loads[figure].Joules, 1e-6 * (1 + three.Annual.Bin.Loads[figure].Joules));
+            Assert.Equal(3 * one.Annual.JointBin.Loads[figure].Joules, three.Annual.JointBin.Loads[figure].Joules, 1e-6 * (1 + three.Annual.JointBin.Loads[figure].Joules));
         }
 
-        Assert.True(one.Hourly.Heating.Joules > 0 && one.Hourly.CoolingSensible.Joules > 0 && one.Hourly.CoolingLatent.Joules > 0);
+        Assert.True(one.Annual.Hourly.Loads.Heating.Joules > 0 && one.Annual.Hourly.Loads.CoolingSensible.Joules > 0 && one.Annual.Hourly.Loads.CoolingLatent.Joules > 0);
     }
 
     [Fact]
@@ -105,15 +105,15 @@ public class OutdoorAirInvariantTests
         var result = OutdoorAirCalculator.Compute(weather, settings, Bins, HumidityBinScale.Default(UnitSystem.IP));
         Assert.True(settings.MinRelativeHumidity * Saturation.VapourPressurePa(settings.HeatTo.Celsius) * 1.01
             < MoistAir.VapourPressureFromHumidityRatio(weather.HumidityRatio.Min(), Atmosphere.SeaLevelPressurePa));
-        foreach (var figure in OutdoorAirTotals.Figures)
+        foreach (var figure in Enum.GetValues<LoadFigure>())
         {
-            Assert.Equal(0.0, result.Hourly.Get(figure).Joules);
-            Assert.Equal(0.0, result.Bin.Get(figure).Joules);
-            Assert.Equal(0.0, result.JointBin!.Get(figure).Joules);
-            Assert.Equal(0.0, result.DifferencePercent(figure));
+            Assert.Equal(0.0, result.Annual.Hourly.Loads[figure].Joules);
+            Assert.Equal(0.0, result.Annual.Bin.Loads[figure].Joules);
+            Assert.Equal(0.0, result.Annual.JointBin.Loads[figure].Joules);
+            Assert.Equal(0.0, result.DifferencePercent(IntegrationMethod.Bin, figure));
         }
 
-        Assert.Equal(8760, result.Hourly.HoursVentilated);
+        Assert.Equal(8760, result.Annual.Hourly.Loads.HoursVentilated);
     }
 
     [Fact]
@@ -141,19 +141,19 @@ public class OutdoorAirInvariantTests
                 var with = OutdoorAirCalculator.Compute(weather, baseSettings with { Recovery = device }, Bins, HumidityBinScale.Default(UnitSystem.IP));
                 foreach (var f in figures)
                 {
-                    Assert.True(with.Hourly.Get(f).Joules <= plain.Hourly.Get(f).Joules, $"hourly {f}");
-                    Assert.True(with.Bin.Get(f).Joules <= plain.Bin.Get(f).Joules, $"bin {f}");
-                    Assert.True(with.JointBin!.Get(f).Joules <= plain.JointBin!.Get(f).Joules, $"joint {f}");
+                    Assert.True(with.Annual.Hourly.Loads[f].Joules <= plain.Annual.Hourly.Loads[f].Joules, $"hourly {f}");
+                    Assert.True(with.Annual.Bin.Loads[f].Joules <= plain.Annual.Bin.Loads[f].Joules, $"bin {f}");
+                    Assert.True(with.Annual.JointBin.Loads[f].Joules <= plain.Annual.JointBin.Loads[f].Joules, $"joint {f}");
                     for (int b = 0; b < with.Bins.Count; b++)
                     {
-                        Assert.True(with.Bins[b].Hourly.Get(f).Joules <= plain.Bins[b].Hourly.Get(f).Joules, $"bin row {b} {f}");
+                        Assert.True(with.Bins[b].Figures.Hourly.Loads[f].Joules <= plain.Bins[b].Figures.Hourly.Loads[f].Joules, $"bin row {b} {f}");
                     }
                 }
 
                 // What the device saves is exactly the difference of the loads.
-                double saved = plain.Hourly.Heating.Joules + plain.Hourly.Humidification.Joules - with.Hourly.Heating.Joules - with.Hourly.Humidification.Joules;
-                Assert.Equal(saved, with.Hourly.RecoveredHeating.Joules, 1e-6 * (1 + saved));
-                Assert.True(with.Hourly.RecoveredHeating.Joules >= 0 && with.Hourly.RecoveredCooling.Joules >= 0);
+                double saved = plain.Annual.Hourly.Loads.Heating.Joules + plain.Annual.Hourly.Loads.Humidification.Joules - with.Annual.Hourly.Loads.Heating.Joules - with.Annual.Hourly.Loads.Humidification.Joules;
+                Assert.Equal(saved, with.Annual.Hourly.Loads.RecoveredHeating.Joules, 1e-6 * (1 + saved));
+                Assert.True(with.Annual.Hourly.Loads.RecoveredHeating.Joules >= 0 && with.Annual.Hourly.Loads.RecoveredCooling.Joules >= 0);
             }
         }
     }
@@ -167,13 +167,13 @@ public class OutdoorAirInvariantTests
         var result = OutdoorAirCalculator.Compute(weather, settings, Bins);
         int occupied = schedule.Flags(weather).Count(f => f);
 
-        Assert.Equal(occupied, result.Hourly.HoursVentilated);
-        Assert.Equal(occupied, result.Bin.HoursVentilated);
+        Assert.Equal(occupied, result.Annual.Hourly.Loads.HoursVentilated);
+        Assert.Equal(occupied, result.Annual.Bin.Loads.HoursVentilated);
         Assert.Equal(occupied, result.Bins.Sum(b => b.HoursVentilated));
-        Assert.Equal(result.Hourly.Heating.Joules, result.Bins.Sum(b => b.Hourly.Heating.Joules), 1e-3);
-        Assert.Equal(result.Hourly.CoolingLatent.Joules, result.Months.Sum(m => m.Totals.CoolingLatent.Joules), 1e-3);
+        Assert.Equal(result.Annual.Hourly.Loads.Heating.Joules, result.Bins.Sum(b => b.Figures.Hourly.Loads.Heating.Joules), 1e-3);
+        Assert.Equal(result.Annual.Hourly.Loads.CoolingLatent.Joules, result.Months.Sum(m => m.Figures.Hourly.Loads.CoolingLatent.Joules), 1e-3);
         Assert.Equal(12, result.Months.Count);
-        Assert.Equal(result.Bin.Heating.Joules, result.Bins.Sum(b => b.BinMethod.Heating.Joules), 1e-3);
+        Assert.Equal(result.Annual.Bin.Loads.Heating.Joules, result.Bins.Sum(b => b.Figures.Bin.Loads.Heating.Joules), 1e-3);
     }
 
     [Fact]
@@ -216,8 +216,8 @@ public class OutdoorAirInvariantTests
         var standard = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical(FlowBasis.Standard), Bins);
 
         // Dry air at 70 F and 83.33 kPa: 83,328 / (287.042 x 294.261) = 0.9865 kg/m3 vs 1.2014 standard: 17.9 % less (worked by hand).
-        double ratio = site.Hourly.Heating.Joules / standard.Hourly.Heating.Joules;
+        double ratio = site.Annual.Hourly.Loads.Heating.Joules / standard.Annual.Hourly.Loads.Heating.Joules;
         Assert.Equal(0.821, ratio, 0.001);
-        Assert.Equal(ratio, site.Hourly.CoolingSensible.Joules / standard.Hourly.CoolingSensible.Joules, 9);
+        Assert.Equal(ratio, site.Annual.Hourly.Loads.CoolingSensible.Joules / standard.Annual.Hourly.Loads.CoolingSensible.Joules, 9);
     }
 }

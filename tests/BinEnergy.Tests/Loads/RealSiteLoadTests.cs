@@ -54,19 +54,19 @@ public class RealSiteLoadTests(ITestOutputHelper output)
         }
 
         double j = massFlow * 3600;
-        output.WriteLine($"{place}: heating {result.Hourly.Heating.Kbtu:0} kBtu (raw {heating * j / 1055055.85:0}), " +
-            $"sensible cooling {result.Hourly.CoolingSensible.Kbtu:0} (raw {cooling * j / 1055055.85:0}), latent {result.Hourly.CoolingLatent.Kbtu:0} (raw {latent * j / 1055055.85:0})");
-        Assert.Equal(8760, result.Hourly.HoursVentilated);
-        Assert.Equal(1.0, result.Hourly.Heating.Joules / (heating * j), 0.003);
+        output.WriteLine($"{place}: heating {result.Annual.Hourly.Loads.Heating.Kbtu:0} kBtu (raw {heating * j / 1055055.85:0}), " +
+            $"sensible cooling {result.Annual.Hourly.Loads.CoolingSensible.Kbtu:0} (raw {cooling * j / 1055055.85:0}), latent {result.Annual.Hourly.Loads.CoolingLatent.Kbtu:0} (raw {latent * j / 1055055.85:0})");
+        Assert.Equal(8760, result.Annual.Hourly.Loads.HoursVentilated);
+        Assert.Equal(1.0, result.Annual.Hourly.Loads.Heating.Joules / (heating * j), 0.003);
         if (cooling * j > 1e8)
         {
-            Assert.Equal(1.0, result.Hourly.CoolingSensible.Joules / (cooling * j), 0.005);
+            Assert.Equal(1.0, result.Annual.Hourly.Loads.CoolingSensible.Joules / (cooling * j), 0.005);
         }
 
         // Magnus against Hyland-Wexler moves W by about 0.1 %, the excess over the limit by more: 3 %.
         if (latent * j > 1e8)
         {
-            Assert.Equal(1.0, result.Hourly.CoolingLatent.Joules / (latent * j), 0.03);
+            Assert.Equal(1.0, result.Annual.Hourly.Loads.CoolingLatent.Joules / (latent * j), 0.03);
         }
 
         // The bin method recomputed from the raw columns: 5 F bins of the raw dry-bulb in F (lower edge
@@ -85,21 +85,21 @@ public class RealSiteLoadTests(ITestOutputHelper output)
         double meanHeating = BinHeating((k, b) => b.T / b.N);
         double midHeating = BinHeating((k, b) => ((k + 0.5) * 5 - 32) / 1.8);
         var classic = OutdoorAirCalculator.Compute(weather, settings with { BinPoint = BinEvaluationPoint.Midpoint }, DryBulbBinScale.Default(UnitSystem.IP));
-        Assert.Equal(1.0, result.Bin.Heating.Joules / (meanHeating * j), 0.003);
-        Assert.Equal(1.0, classic.Bin.Heating.Joules / (midHeating * j), 0.003);
+        Assert.Equal(1.0, result.Annual.Bin.Loads.Heating.Joules / (meanHeating * j), 0.003);
+        Assert.Equal(1.0, classic.Annual.Bin.Loads.Heating.Joules / (midHeating * j), 0.003);
 
         // The check: bin and hourly sensible heating agree within 1 % on every real file. At each bin's
         // mean dry-bulb (the default) they do, in fact within 0.1 %; at the midpoints only where the heating
         // season is long (see MidpointBins_... below and docs/loads.md).
-        output.WriteLine($"{place}: bin vs hourly heating {result.DifferencePercent(LoadFigure.Heating):+0.00;-0.00} % at bin means, " +
-            $"{classic.DifferencePercent(LoadFigure.Heating):+0.00;-0.00} % at midpoints; sensible cooling {result.DifferencePercent(LoadFigure.CoolingSensible):+0.00;-0.00} % " +
-            $"and {classic.DifferencePercent(LoadFigure.CoolingSensible):+0.00;-0.00} %; latent {result.DifferencePercent(LoadFigure.CoolingLatent):+0.0;-0.0} %, " +
-            $"joint {result.JointDifferencePercent(LoadFigure.CoolingLatent):+0.0;-0.0} %");
-        Assert.InRange(result.DifferencePercent(LoadFigure.Heating)!.Value, -1.0, 1.0);
-        Assert.InRange(result.DifferencePercent(LoadFigure.Heating)!.Value, -0.1, 0.1);
+        output.WriteLine($"{place}: bin vs hourly heating {result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.Heating):+0.00;-0.00} % at bin means, " +
+            $"{classic.DifferencePercent(IntegrationMethod.Bin, LoadFigure.Heating):+0.00;-0.00} % at midpoints; sensible cooling {result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.CoolingSensible):+0.00;-0.00} % " +
+            $"and {classic.DifferencePercent(IntegrationMethod.Bin, LoadFigure.CoolingSensible):+0.00;-0.00} %; latent {result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.CoolingLatent):+0.0;-0.0} %, " +
+            $"joint {result.DifferencePercent(IntegrationMethod.JointBin, LoadFigure.CoolingLatent):+0.0;-0.0} %");
+        Assert.InRange(result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.Heating)!.Value, -1.0, 1.0);
+        Assert.InRange(result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.Heating)!.Value, -0.1, 0.1);
         if (cooling * j > 1e8)
         {
-            Assert.InRange(result.DifferencePercent(LoadFigure.CoolingSensible)!.Value, -0.1, 0.1);
+            Assert.InRange(result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.CoolingSensible)!.Value, -0.1, 0.1);
         }
     }
 
@@ -116,7 +116,7 @@ public class RealSiteLoadTests(ITestOutputHelper output)
     {
         var classic = OutdoorAirTestSettings.Typical() with { BinPoint = BinEvaluationPoint.Midpoint };
         var result = OutdoorAirCalculator.Compute(Read(file, map), classic, DryBulbBinScale.Default(UnitSystem.IP));
-        Assert.InRange(result.DifferencePercent(LoadFigure.Heating)!.Value, -1.0, 1.0);
+        Assert.InRange(result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.Heating)!.Value, -1.0, 1.0);
     }
 
     [Fact]
@@ -128,8 +128,8 @@ public class RealSiteLoadTests(ITestOutputHelper output)
         var standard = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical(FlowBasis.Standard), bins);
 
         // 1,619 m: 83.33 kPa standard atmosphere; dry air at 70 F there weighs 0.9865 kg/m3 against 1.2014 (worked by hand: 0.821).
-        double sensibleSite = site.Hourly.Heating.Joules + site.Hourly.CoolingSensible.Joules;
-        double sensibleStandard = standard.Hourly.Heating.Joules + standard.Hourly.CoolingSensible.Joules;
+        double sensibleSite = site.Annual.Hourly.Loads.Heating.Joules + site.Annual.Hourly.Loads.CoolingSensible.Joules;
+        double sensibleStandard = standard.Annual.Hourly.Loads.Heating.Joules + standard.Annual.Hourly.Loads.CoolingSensible.Joules;
         double less = 1 - sensibleSite / sensibleStandard;
         output.WriteLine($"Albuquerque: site basis {less * 100:0.0} % less sensible load; sensible factor {site.Assumptions.Factors.SensibleIp:0.000}");
         Assert.Equal(0.179, less, 0.002);
@@ -142,8 +142,8 @@ public class RealSiteLoadTests(ITestOutputHelper output)
         var weather = Read("722040TYA.CSV.gz", "tmy3");
         var result = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical(), DryBulbBinScale.Default(UnitSystem.IP),
             HumidityBinScale.Default(UnitSystem.IP));
-        double oneD = result.DifferencePercent(LoadFigure.CoolingLatent)!.Value;
-        double joint = result.JointDifferencePercent(LoadFigure.CoolingLatent)!.Value;
+        double oneD = result.DifferencePercent(IntegrationMethod.Bin, LoadFigure.CoolingLatent)!.Value;
+        double joint = result.DifferencePercent(IntegrationMethod.JointBin, LoadFigure.CoolingLatent)!.Value;
         output.WriteLine($"Melbourne latent: bins {oneD:+0.0;-0.0} %, joint bins {joint:+0.0;-0.0} % against the hourly sum");
 
         // A bin's mean W hides its spread, and the latent load is one-sided (only W above W_max counts): 1-D bins undercount.

@@ -21,9 +21,9 @@ public class TradeShorthandTests
         double shorthandBtu = 1.08 * 2000 * degreeHoursF; // q = 1.08 x cfm x dT (common practice)
 
         // 1.08 is 60 x 0.075 x 0.24 = 1.080, our 1.006 kJ/(kg K) gives 1.0811: within the trade's 0.5 % rounding.
-        Assert.Equal(1.0, result.Hourly.Heating.Btu / shorthandBtu, 0.005);
-        Assert.Equal(1.0, result.Bin.Heating.Btu / shorthandBtu, 0.01);
-        Assert.Equal(8760, result.Hourly.HoursVentilated);
+        Assert.Equal(1.0, result.Annual.Hourly.Loads.Heating.Btu / shorthandBtu, 0.005);
+        Assert.Equal(1.0, result.Annual.Bin.Loads.Heating.Btu / shorthandBtu, 0.01);
+        Assert.Equal(8760, result.Annual.Hourly.Loads.HoursVentilated);
     }
 
     [Fact]
@@ -43,7 +43,7 @@ public class TradeShorthandTests
         // "0.69" of the 4,840 family. The shorthand 0.68 corresponds to h_fg near 1,058 Btu/lb,
         // the latent heat at room and coil temperatures (about 1,054 at 75 F). 0.691 / 0.68 = 1.016:
         // the engine is about 1.6 % above the shorthand, inside the 2 % the test allows.
-        double ratio = result.Hourly.CoolingLatent.Btu / shorthandBtu;
+        double ratio = result.Annual.Hourly.Loads.CoolingLatent.Btu / shorthandBtu;
         Assert.InRange(ratio, 1.012, 1.02);
         Assert.Equal(1.0, ratio, 0.02);
     }
@@ -62,7 +62,7 @@ public class TradeShorthandTests
         double watts = 2 * 1000 * 1.0 / (6356 * 0.6) * 745.7;
         // 6356 and 745.7 are rounded: the rule and the exact 2 V dp / eta agree within 0.2 %.
         Assert.Equal(watts, result.Assumptions.FanPenalty.Watts, watts * 0.002);
-        Assert.Equal(watts * 100 / 1000, result.Hourly.FanEnergy.KilowattHours, 0.002 * watts * 100 / 1000);
-        Assert.Equal(result.Hourly.FanEnergy.Joules, result.Bin.FanEnergy.Joules, 1e-6);
+        Assert.Equal(watts * 100 / 1000, result.Annual.Hourly.Loads.FanEnergy.KilowattHours, 0.002 * watts * 100 / 1000);
+        Assert.Equal(result.Annual.Hourly.Loads.FanEnergy.Joules, result.Annual.Bin.Loads.FanEnergy.Joules, 1e-6);
     }
 }

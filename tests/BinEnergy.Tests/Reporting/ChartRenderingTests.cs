@@ -198,22 +198,24 @@ public class ChartRenderingTests
 
     [Theory]
     [MemberData(nameof(Cases))]
-    public void BinVsHourly_DrawsBothMethodsOfEveryQuantity(string @case)
+    public void MethodCheck_DrawsThreeMethodsOfEveryQuantity(string @case)
     {
-        var full = ReportingSamples.BinVsHourly(@case == "ten-climates" ? "ten invented climates" : InventedClimate.Names[0]);
+        var full = ReportingSamples.MethodCheck(@case == "ten-climates" ? "ten invented climates" : InventedClimate.Names[0]);
         var data = full with { Rows = Cut(full.Rows, @case) };
-        var chart = BinVsHourlyChart.Render(data);
-        Assert.Equal(data.Rows.Sum(r => r.BinMethod), chart.SeriesLabelled(BinVsHourlyChart.BinLabel).Total, 9);
-        Assert.Equal(data.Rows.Sum(r => r.Hourly), chart.SeriesLabelled(BinVsHourlyChart.HourlyLabel).Total, 9);
+        var chart = MethodCheckChart.Render(data);
+        Assert.Equal(data.Rows.Sum(r => r.BinMethod), chart.SeriesLabelled(MethodCheckChart.BinLabel).Total, 9);
+        Assert.Equal(data.Rows.Sum(r => r.JointBin), chart.SeriesLabelled(MethodCheckChart.JointLabel).Total, 9);
+        Assert.Equal(data.Rows.Sum(r => r.Hourly), chart.SeriesLabelled(MethodCheckChart.HourlyLabel).Total, 9);
         AssertImages(chart, @case);
     }
 
     [Fact]
-    public void BinVsHourly_DifferenceIsPerCentOfHourly()
+    public void MethodCheck_DifferenceIsPerCentOfHourly()
     {
-        Assert.Equal("+1.0 %", BinVsHourlyChart.Difference(new BinVsHourlyRow("x", 101, 100)));
-        Assert.Equal("-2.5 %", BinVsHourlyChart.Difference(new BinVsHourlyRow("x", 39, 40)));
-        Assert.Equal("both 0", BinVsHourlyChart.Difference(new BinVsHourlyRow("x", 0, 0)));
+        Assert.Equal("+1.0 %", MethodCheckChart.Difference(101, 100));
+        Assert.Equal("-2.5 %", MethodCheckChart.Difference(39, 40));
+        Assert.Equal("both 0", MethodCheckChart.Difference(0, 0));
+        Assert.Equal("hourly 0", MethodCheckChart.Difference(3, 0));
     }
 
     [Theory]

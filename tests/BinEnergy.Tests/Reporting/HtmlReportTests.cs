@@ -28,7 +28,7 @@ public class HtmlReportTests
             ComparisonChart.RenderEnergy(ReportingSamples.Comparison(3)),
             ComparisonChart.RenderCost(ReportingSamples.Comparison(3)),
             MonthlyEnergyChart.Render(ReportingSamples.Monthly(climate)),
-            BinVsHourlyChart.Render(ReportingSamples.BinVsHourly(climate.Name)),
+            MethodCheckChart.Render(ReportingSamples.MethodCheck(climate.Name)),
         ];
     });
 

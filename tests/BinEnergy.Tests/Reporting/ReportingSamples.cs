@@ -127,15 +127,15 @@ internal static class ReportingSamples
         };
     }
 
-    public static BinVsHourlyData BinVsHourly(string subject) => new()
+    public static MethodCheckData MethodCheck(string subject) => new()
     {
         Subject = subject,
         EnergyUnit = "kBtu",
         Rows =
         [
-            new BinVsHourlyRow("Heating", 184_300, 183_100),
-            new BinVsHourlyRow("Sensible cooling", 21_900, 22_650),
-            new BinVsHourlyRow("Latent cooling", 30_400, 27_800),
+            new MethodCheckRow("Heating", 183_100, 183_400, 184_300),
+            new MethodCheckRow("Sensible cooling", 22_650, 22_500, 21_900),
+            new MethodCheckRow("Latent cooling", 27_800, 27_100, 30_400),
         ],
     };
 

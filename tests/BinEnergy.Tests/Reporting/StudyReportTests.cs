@@ -33,7 +33,7 @@ public class StudyReportTests
             Assert.Equal(first.Occupied.Count(o => o), hours.SeriesLabelled(BinHoursChart.OccupiedLabel).Total, 9);
 
             var loads = charts.Single(c => c.Name == "load-by-bin-" + slug).Chart;
-            Assert.Equal(Energy.FromJoules(first.AnnualBin.HeatingJ).Kbtu, loads.SeriesLabelled(LoadByBinChart.HeatingLabel).Total, 3);
+            Assert.Equal(first.OutdoorAir.Annual[run.Study.HeadlineMethod].Loads.Heating.Kbtu, loads.SeriesLabelled(LoadByBinChart.HeatingLabel).Total, 3);
         }
     }
 

@@ -44,7 +44,7 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("relative humidity above 100", "max_rh_pct = 50", "max_rh_pct = 150", "key ventilation.max_rh_pct", "150 is out of range: expected a percentage above 0 and at most 100");
         Replace("variant overriding a climate", "recovery.enabled = false", "climate.weather = \"other.csv\"", "key variant.climate.weather", "climates are the other axis of the run");
         Replace("a rating point that is not a pair", "cooling_cop = [[65, 4.2]", "cooling_cop = [[65, 4.2, 1], [95, 3.2]]", "key plant.cooling_cop", "each point must be a pair [outdoor temperature, value]");
-        Replace("unknown economizer control", "controls = [", "controls = [\"fixed-drybulbs\"]", "key economizer.controls", "\"fixed-drybulbs\" is not one of fixed-drybulb, differential-drybulb, fixed-enthalpy, differential-enthalpy, fixed-dewpoint; did you mean \"fixed-drybulb\"?");
+        Replace("unknown economizer control", "controls = [", "controls = [\"fixed-drybulbs\"]", "key economizer.controls", "\"fixed-drybulbs\" is not one of none, fixed-drybulb, differential-drybulb, fixed-enthalpy, differential-enthalpy, fixed-dewpoint; did you mean \"fixed-drybulb\"?");
         Replace("misspelled fuel", "heating_fuel = \"gas\"", "heating_fuel = \"gaz\"", "key plant.heating_fuel", "did you mean \"gas\"?");
         Replace("variant key without its table", "ventilation.airflow_cfm = 2600", "airflow_cfm = 2600", "key variant.airflow_cfm", "did you mean ventilation.airflow_cfm?");
         Replace("the same key twice", "cool_to_f = 75", "heat_to_f = 75", "ventilation", "is already defined");

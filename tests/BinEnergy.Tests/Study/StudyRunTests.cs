@@ -61,7 +61,7 @@ public sealed class StudyRunTests : IDisposable
         var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
         Assert.True(code == 0, err);
         var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
-        Assert.Equal(6, annual.Count); // 1 climate x 3 variants x 2 methods
+        Assert.Equal(9, annual.Count); // 1 climate x 3 variants x 3 methods
 
         // The same settings written out by hand from the example study, given to the engine directly.
         var weather = WeatherReader.Read(Path.Combine(folder, "harbor.csv"));
@@ -94,10 +94,10 @@ public sealed class StudyRunTests : IDisposable
         foreach (var (variant, settings) in variants)
         {
             var engine = OutdoorAirCalculator.Compute(weather, settings, new DryBulbBinScale(5, UnitSystem.IP));
-            foreach (var (method, totals) in new[] { ("bin", engine.Bin), ("hourly", engine.Hourly) })
+            foreach (var (method, totals) in new[] { ("bin", engine.Annual.Bin.Loads), ("joint-bin", engine.Annual.JointBin.Loads), ("hourly", engine.Annual.Hourly.Loads) })
             {
                 var row = annual.Single(r => r["variant"] == variant && r["method"] == method);
-                Assert.Equal(totals.HoursVentilated, int.Parse(row["hours_ventilated"], CultureInfo.InvariantCulture));
+                Assert.Equal((int)totals.HoursVentilated, int.Parse(row["hours_ventilated"], CultureInfo.InvariantCulture));
                 Assert.Equal(totals.Heating.Kbtu, D(row["heating_kbtu"]));
                 Assert.Equal(totals.CoolingSensible.Kbtu, D(row["cooling_sensible_kbtu"]));
                 Assert.Equal(totals.CoolingLatent.Kbtu, D(row["cooling_latent_kbtu"]));
@@ -140,18 +140,15 @@ public sealed class StudyRunTests : IDisposable
             var (c, json, e) = Cli(args);
             Assert.True(c == 0, e);
             using var doc = JsonDocument.Parse(json);
-            foreach (var method in new[] { "bin", "hourly" })
+            foreach (var method in new[] { "hourly", "joint-bin", "bin" })
             {
-                var expected = doc.RootElement.GetProperty(method);
+                var expected = doc.RootElement.GetProperty("annual").GetProperty(method.Replace('-', '_'));
                 var row = annual.Single(r => r["variant"] == variant && r["method"] == method);
                 Assert.Equal(expected.GetProperty("hours_ventilated").GetInt32(), int.Parse(row["hours_ventilated"], CultureInfo.InvariantCulture));
-                foreach (var figure in new[] { "heating", "cooling_sensible", "cooling_latent", "humidification", "recovered_heating", "recovered_cooling" })
+                foreach (var figure in new[] { "heating_kbtu", "cooling_sensible_kbtu", "cooling_latent_kbtu", "humidification_kbtu", "recovered_heating_kbtu", "recovered_cooling_kbtu", "fan_kwh" })
                 {
-                    Assert.Equal(expected.GetProperty(figure).GetDouble(), D(row[figure + "_kbtu"]));
+                    Assert.Equal(expected.GetProperty(figure).GetDouble(), D(row[figure]));
                 }
-
-                // The command gives fan energy in kBtu in IP; the table in kWh (1 kWh = 3412.14 Btu, DESIGN 3).
-                Assert.Equal(expected.GetProperty("fan_energy").GetDouble(), D(row["fan_kwh"]) * Conversions.BtuPerKilowattHour / 1000.0, 6);
             }
         }
     }
@@ -171,23 +168,22 @@ public sealed class StudyRunTests : IDisposable
             "--high-limit-enthalpy", "28", "--high-limit-dewpoint", "55", "--json");
         Assert.True(code2 == 0, err2);
         using var doc = JsonDocument.Parse(json);
-        var controls = doc.RootElement.GetProperty("controls");
+        var command = doc.RootElement.GetProperty("by_method").EnumerateArray().ToList();
         string[] names = ["none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"];
-        Assert.Equal(names.Length * 2 * 3, rows.Count); // controls x methods x variants (the economizer does not depend on the ventilation variants here)
+        Assert.Equal(names.Length * 3 * 3, rows.Count); // controls x methods x variants (the economizer does not depend on the ventilation variants here)
         foreach (var variant in new[] { "minimum", "plus-30", "no-recovery" })
         {
             foreach (var name in names)
             {
-                var command = name == "none" ? doc.RootElement.GetProperty("baseline") : controls.GetProperty(name);
-                foreach (var method in new[] { "bin", "hourly" })
+                foreach (var method in new[] { "hourly", "joint-bin", "bin" })
                 {
-                    var expected = command.GetProperty(method);
+                    var expected = command.Single(r => r.GetProperty("control").GetString() == name && r.GetProperty("method").GetString() == method);
                     var row = rows.Single(r => r["variant"] == variant && r["control"] == name && r["method"] == method);
                     Assert.Equal(expected.GetProperty("hours_free").GetDouble(), D(row["hours_free"]));
                     Assert.Equal(expected.GetProperty("hours_integrated").GetDouble(), D(row["hours_integrated"]));
                     Assert.Equal(expected.GetProperty("hours_minimum").GetDouble(), D(row["hours_minimum"]));
-                    Assert.Equal(expected.GetProperty("coil_total").GetDouble(), D(row["coil_total_kbtu"]));
-                    Assert.Equal(expected.GetProperty("savings").GetDouble(), D(row["savings_kbtu"]));
+                    Assert.Equal(expected.GetProperty("coil_total_kbtu").GetDouble(), D(row["coil_total_kbtu"]));
+                    Assert.Equal(expected.GetProperty("savings_kbtu").GetDouble(), D(row["savings_kbtu"]));
                 }
             }
         }
@@ -244,19 +240,19 @@ public sealed class StudyRunTests : IDisposable
 
         // 8,760 hours x 3 variants in the hourly table; bins hold every hour of the record once per variant.
         Assert.Equal(8760 * 3, duck["hourly"].rows);
-        Assert.Equal(8760.0 * 3, duck["bins"].sums["hours"]);
+        Assert.Equal(8760.0 * 3 * 3, duck["bins"].sums["hours"]); // once per variant and method
 
-        // summary.json carries the same headline numbers as the annual table's bin rows.
+        // summary.json's headline carries the same numbers as the annual table's rows of the headline method (hourly by default).
         using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
-        double summaryHeating = summary.RootElement.GetProperty("cases").EnumerateArray().Sum(c => c.GetProperty("bin").GetProperty("heating_kbtu").GetDouble());
-        double annualBinHeating = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "bin").Sum(r => D(r["heating_kbtu"]));
-        Assert.Equal(annualBinHeating, summaryHeating, 6);
+        Assert.Equal("hourly", summary.RootElement.GetProperty("headline_method").GetString());
+        double summaryHeating = summary.RootElement.GetProperty("headline").EnumerateArray().Sum(c => c.GetProperty("heating_kbtu").GetDouble());
+        double annualHourlyHeating = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
+        Assert.Equal(annualHourlyHeating, summaryHeating, 6);
         Assert.Equal(64, summary.RootElement.GetProperty("study_sha256").GetString()!.Length);
 
-        // The monthly table's heating adds up to the hourly method's annual heating.
-        double monthly = duck["monthly"].sums["heating_kbtu"]!.Value;
-        double annualHourly = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
-        Assert.Equal(annualHourly, monthly, 6);
+        // The monthly table's hourly heating adds up to the hourly method's annual heating.
+        double monthly = ReadCsv(Path.Combine(out1, "tables", "monthly.csv")).Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
+        Assert.Equal(annualHourlyHeating, monthly, 6);
     }
 
     [Fact]
@@ -299,10 +295,9 @@ public sealed class StudyRunTests : IDisposable
         Assert.Contains("harms occupants", err, StringComparison.Ordinal);
         Assert.Contains("licensed engineer", stdout, StringComparison.Ordinal);
         using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
-        var tight = summary.RootElement.GetProperty("cases").EnumerateArray().Single(c => c.GetProperty("variant").GetString() == "tight");
-        Assert.Contains(tight.GetProperty("warnings").EnumerateArray(), w => w.GetString()!.Contains("locally adopted code", StringComparison.Ordinal));
-        var minimum = summary.RootElement.GetProperty("cases").EnumerateArray().First(c => c.GetProperty("variant").GetString() == "minimum");
-        Assert.DoesNotContain(minimum.GetProperty("warnings").EnumerateArray(), w => w.GetString()!.Contains("people-and-area", StringComparison.Ordinal));
+        var warnings = summary.RootElement.GetProperty("warnings").EnumerateArray().Select(w => w.GetString()!).ToList();
+        Assert.Contains(warnings, w => w.StartsWith("harbor / tight: ", StringComparison.Ordinal) && w.Contains("locally adopted code", StringComparison.Ordinal));
+        Assert.DoesNotContain(warnings, w => w.Contains("/ minimum: ", StringComparison.Ordinal) && w.Contains("people-and-area", StringComparison.Ordinal));
     }
 
     [Fact]
@@ -368,8 +363,8 @@ public sealed class StudyRunTests : IDisposable
         // The hourly rows do not depend on the evaluation point; the report states which one was used.
         static IEnumerable<string> Hourly(string dir) => File.ReadLines(Path.Combine(dir, "tables", "annual.csv")).Where(l => l.Contains(",hourly,", StringComparison.Ordinal));
         Assert.Equal(Hourly(outMean), Hourly(outMid));
-        Assert.Contains("the mean dry-bulb of each bin&#39;s ventilated hours", File.ReadAllText(Path.Combine(outMean, "report.html")), StringComparison.Ordinal);
-        Assert.Contains("each bin&#39;s midpoint (the classic method)", File.ReadAllText(Path.Combine(outMid, "report.html")), StringComparison.Ordinal);
+        Assert.Contains("dry-bulb bin at the mean dry-bulb of its hours", File.ReadAllText(Path.Combine(outMean, "report.html")), StringComparison.Ordinal);
+        Assert.Contains("dry-bulb bin at its midpoint (the classic method)", File.ReadAllText(Path.Combine(outMid, "report.html")), StringComparison.Ordinal);
     }
 
     [Fact]
@@ -406,7 +401,7 @@ public sealed class StudyRunTests : IDisposable
         var header = File.ReadLines(Path.Combine(out1, "tables", "bins.csv")).First().Split(',');
         Assert.Contains("bin_low_c", header);
         Assert.Contains("heating_kwh", header);
-        Assert.Contains("mean_humidity_ratio_kg_kg", header);
+        Assert.Contains("mean_humidity_ratio_g_kg", header);
         Assert.Contains("gas_kwh", header);
         var bins = ReadCsv(Path.Combine(out1, "tables", "bins.csv"));
         Assert.All(bins, b => Assert.Equal(2.0, D(b["bin_high_c"]) - D(b["bin_low_c"]), 9));

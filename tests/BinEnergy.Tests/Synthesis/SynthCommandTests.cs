@@ -104,8 +104,8 @@ public sealed class SynthCommandTests : IDisposable
         using var doc = JsonDocument.Parse(stdout);
         var months = doc.RootElement.GetProperty("months");
         Assert.Equal(12, months.GetArrayLength());
-        Assert.Equal(17.8, months[6].GetProperty("drybulb_max_target").GetDouble(), 1e-9); // kelpwick-monthly.csv, July
-        Assert.Equal(17.8, months[6].GetProperty("drybulb_max").GetDouble(), 0.5);
+        Assert.Equal(17.8, months[6].GetProperty("drybulb_max_target_c").GetDouble(), 1e-9); // kelpwick-monthly.csv, July
+        Assert.Equal(17.8, months[6].GetProperty("drybulb_max_c").GetDouble(), 0.5);
         Assert.Equal(8760, doc.RootElement.GetProperty("hours").GetInt32());
     }
 }

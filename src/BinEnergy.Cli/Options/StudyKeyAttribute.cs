@@ -1,0 +1,24 @@
+namespace BinEnergy.Cli.Options;
+
+/// <summary>
+/// The study-file key an option sets (<c>[ventilation] airflow_cfm</c> for <c>--airflow</c>), so a
+/// single command runs as a one-case study through the same checks and engines as <c>run</c>.
+/// </summary>
+/// <param name="table">The study table.</param>
+/// <param name="key">The key without its unit suffix.</param>
+/// <param name="unit">The quantity, whose display unit gives the suffix.</param>
+[AttributeUsage(AttributeTargets.Property, AllowMultiple = true)]
+internal sealed class StudyKeyAttribute(string table, string key, KeyUnit unit = KeyUnit.None) : Attribute
+{
+    public string Table { get; } = table;
+
+    public string Key { get; } = key;
+
+    public KeyUnit Unit { get; } = unit;
+
+    /// <summary>For a flag: the key gets the opposite (<c>--non-integrated</c> sets <c>integrated = false</c>).</summary>
+    public bool Inverted { get; init; }
+
+    /// <summary>For text: split at commas into a list.</summary>
+    public bool List { get; init; }
+}

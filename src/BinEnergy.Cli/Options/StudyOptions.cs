@@ -1,0 +1,103 @@
+using System.ComponentModel;
+using System.Reflection;
+using BinEnergy.Core.Study;
+using BinEnergy.Reporting.Units;
+using Spectre.Console.Cli;
+
+namespace BinEnergy.Cli.Options;
+
+/// <summary>
+/// Turns a command's options into a one-case study (<see cref="StudyInput"/>) through their
+/// <see cref="StudyKeyAttribute"/>s, and the study's errors back into messages about the options.
+/// </summary>
+internal static class StudyOptions
+{
+    /// <summary>Every option of <paramref name="settings"/> that was given, as study keys in the display units' spellings.</summary>
+    public static StudyInput Add(StudyInput input, CommandSettings settings, DisplayUnits u)
+    {
+        foreach (var property in settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance))
+        {
+            var keys = property.GetCustomAttributes<StudyKeyAttribute>().ToList();
+            if (keys.Count == 0)
+            {
+                continue;
+            }
+
+            string origin = OptionName(property);
+            object? value = property.GetValue(settings);
+            foreach (var key in keys)
+            {
+                object? studyValue = value switch
+                {
+                    null => null,
+                    bool flag => flag ? !key.Inverted : null,
+                    string text when key.List => text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries),
+                    string text => text,
+                    double number => number,
+                    int number => number,
+                    Enum choice => WordOf(property, choice),
+                    _ => throw new InvalidOperationException($"option {origin} has a value of type {value.GetType().Name} that no study key takes"),
+                };
+                if (studyValue is not null)
+                {
+                    input.Set(key.Table, KeyName(key, u), studyValue, origin);
+                }
+            }
+        }
+
+        return input;
+    }
+
+    /// <summary>The study's reading of the options; a study-file error becomes a usage error naming the option.</summary>
+    public static StudyDefinition Read(StudyInput input, string source)
+    {
+        try
+        {
+            return StudyFileReader.FromInput(input, source, Directory.GetCurrentDirectory());
+        }
+        catch (StudyFileException e) when (e.File == source)
+        {
+            throw Explain(input, e);
+        }
+    }
+
+    /// <summary>A study-file error about the options as a usage error that names the option.</summary>
+    public static UsageException Explain(StudyInput input, StudyFileException e)
+    {
+        string? origin = input.OriginOf(e.Line, e.Key);
+        return new UsageException(origin is null ? e.Problem : origin + ": " + e.Problem);
+    }
+
+    private static string KeyName(StudyKeyAttribute key, DisplayUnits u) => key.Unit switch
+    {
+        KeyUnit.None => key.Key,
+        KeyUnit.Temperature => u.Temperature.NameFor(key.Key),
+        KeyUnit.TemperatureDifference => u.TemperatureDifference.NameFor(key.Key),
+        KeyUnit.Airflow => u.Airflow.NameFor(key.Key),
+        KeyUnit.Length => u.Length.NameFor(key.Key),
+        KeyUnit.Area => u.Area.NameFor(key.Key),
+        KeyUnit.Power => u.Power.NameFor(key.Key),
+        KeyUnit.PressureDrop => u.PressureDrop.NameFor(key.Key),
+        KeyUnit.Enthalpy => u.Enthalpy.NameFor(key.Key),
+        _ => throw new ArgumentOutOfRangeException(nameof(key), key.Unit, "unknown key unit"),
+    };
+
+    /// <summary>The option's long name as the user types it, e.g. <c>--airflow</c>; an argument's name in capitals.</summary>
+    public static string OptionName(PropertyInfo property)
+    {
+        if (property.GetCustomAttribute<CommandOptionAttribute>() is { } option)
+        {
+            return "--" + option.LongNames[0];
+        }
+
+        return property.GetCustomAttribute<CommandArgumentAttribute>()?.ValueName.ToUpperInvariant() ?? property.Name;
+    }
+
+    private static string WordOf(PropertyInfo property, Enum value)
+    {
+        var converterType = property.GetCustomAttribute<TypeConverterAttribute>()?.ConverterTypeName is string name ? Type.GetType(name) : null;
+        var converter = converterType is null ? null : Activator.CreateInstance(converterType);
+        var method = converter?.GetType().GetMethod("WordOf");
+        return method?.Invoke(converter, [value]) as string ?? value.ToString().ToLowerInvariant();
+    }
+}

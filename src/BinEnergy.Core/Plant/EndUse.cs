@@ -1,0 +1,17 @@
+namespace BinEnergy.Core.Plant;
+
+/// <summary>What the energy bought for the outdoor air is used for; indexes <see cref="PlantEnergy"/>.</summary>
+public enum EndUse
+{
+    /// <summary>Heating the outdoor air (the heating fuel, or a heat pump's electricity).</summary>
+    Heating,
+
+    /// <summary>Cooling and dehumidifying it (electricity through the cooling COP).</summary>
+    Cooling,
+
+    /// <summary>Fans (electricity).</summary>
+    Fans,
+
+    /// <summary>Humidification (the humidifier's energy).</summary>
+    Humidification,
+}
