@@ -12,7 +12,7 @@ public class CommonSettings : OutputSettings
 {
     [CommandOption("--units <UNITS>")]
     [Description("Display units: ip (F, Btu, cfm) or si (C, kWh, L/s). Default ip.")]
-    [TypeConverter(typeof(UnitSystemChoice))]
+    [TypeConverter(typeof(ChoiceConverter<UnitSystem>))]
     public UnitSystem Units { get; init; } = UnitSystem.IP;
 
     /// <summary>The display units of the outputs.</summary>
@@ -28,6 +28,6 @@ public class OutputSettings : CommandSettings
 
     [CommandOption("--format <FORMAT>")]
     [Description("Text output: table (default), tsv (pastes into a spreadsheet) or markdown.")]
-    [TypeConverter(typeof(TextFormatChoice))]
+    [TypeConverter(typeof(ChoiceConverter<TextFormat>))]
     public TextFormat Format { get; init; } = TextFormat.Table;
 }

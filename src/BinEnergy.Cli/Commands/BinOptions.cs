@@ -4,6 +4,7 @@ using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Schedules;
+using BinEnergy.Reporting.Units;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -13,7 +14,7 @@ public class BinOptions : WeatherFileSettings
 {
     [CommandOption("--width <W>")]
     [Description("Dry-bulb bin width (F in ip, K in si). Bins sit on multiples of the width, lower edge inclusive. Default 5 F or 2 C.")]
-    [StudyKey("study", "bin_width", KeyUnit.TemperatureDifference)]
+    [StudyKey("study", "bin_width", nameof(DisplayUnits.TemperatureDifference))]
     public double? Width { get; init; }
 
     [CommandOption("--occupied <SCHEDULE>")]

@@ -15,7 +15,7 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
     {
         [CommandOption("--by <SPLIT>")]
         [Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise).")]
-        [TypeConverter(typeof(BinSplitChoice))]
+        [TypeConverter(typeof(ChoiceConverter<BinSplit>))]
         public BinSplit? By { get; init; }
 
         [CommandOption("--blocks <HOURS>")]

@@ -1,7 +1,7 @@
 using System.ComponentModel;
-using System.IO.Compression;
 using BinEnergy.Core.Weather;
 using BinEnergy.Reporting.Documents;
+using BinEnergy.Reporting.Tables;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -54,31 +54,15 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
         comments.Add("repairs: " + (weather.Quality.Counts.Count == 0 ? "none" : string.Join(", ", weather.Quality.Counts.Select(kv => kv.Key + " " + kv.Value))));
         comments.AddRange(weather.Quality.Warnings.Select(w => "note: " + w));
 
-        // Written to a temporary name beside the target, then moved: a failure leaves no half-written file.
         string? dir = Path.GetDirectoryName(target);
         if (dir is not null && !Directory.Exists(dir))
         {
             throw new UsageException($"the folder of --out does not exist: {dir}");
         }
 
-        string temp = target + ".tmp-" + Environment.ProcessId;
-        try
+        if (!TextFile.WriteAtomically(target, settings.Force, w => OpenLayoutWriter.Write(weather, w, comments)))
         {
-            using (var file = File.Create(temp))
-            using (Stream stream = target.EndsWith(".gz", StringComparison.OrdinalIgnoreCase) ? new GZipStream(file, CompressionLevel.Optimal) : file)
-            using (var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(false)) { NewLine = "\n" })
-            {
-                OpenLayoutWriter.Write(weather, writer, comments);
-            }
-
-            File.Move(temp, target, overwrite: true);
-        }
-        finally
-        {
-            if (File.Exists(temp))
-            {
-                File.Delete(temp);
-            }
+            throw new UsageException($"{settings.Out} exists; add --force to replace it, or choose another --out");
         }
 
         output.Write(ConvertDocument.Build(weather, settings.Out), settings);

@@ -4,6 +4,7 @@ using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
 using BinEnergy.Reporting.Text;
+using BinEnergy.Reporting.Units;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
@@ -19,37 +20,37 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
     {
         [CommandOption("--supply-airflow <N>")]
         [Description("Supply airflow (cfm in ip, L/s in si): the constant flow, or the maximum with --supply-airflow-min. Required.")]
-        [StudyKey("economizer", "supply_airflow", KeyUnit.Airflow)]
+        [StudyKey("economizer", "supply_airflow", nameof(DisplayUnits.Airflow))]
         public double? SupplyAirflow { get; init; }
 
         [CommandOption("--supply-airflow-min <N>")]
         [Description("Minimum supply airflow of a variable-volume system (cfm or L/s). Without it the flow is constant.")]
-        [StudyKey("economizer", "supply_airflow_min", KeyUnit.Airflow)]
+        [StudyKey("economizer", "supply_airflow_min", nameof(DisplayUnits.Airflow))]
         public double? SupplyAirflowMin { get; init; }
 
         [CommandOption("--min-outdoor-airflow <N>")]
         [Description("Minimum outdoor airflow (cfm or L/s); must meet the ventilation code. Required.")]
-        [StudyKey("economizer", "min_outdoor_airflow", KeyUnit.Airflow)]
-        [StudyKey("ventilation", "airflow", KeyUnit.Airflow)]
+        [StudyKey("economizer", "min_outdoor_airflow", nameof(DisplayUnits.Airflow))]
+        [StudyKey("ventilation", "airflow", nameof(DisplayUnits.Airflow))]
         public double? MinOutdoorAirflow { get; init; }
 
         [CommandOption("--flow-basis <BASIS>")]
         [Description("How airflows become mass flows: site (dry air at 70 F at the site pressure, default), standard (0.075 lb/ft3) or actual (the coil-entering state).")]
-        [TypeConverter(typeof(FlowBasisChoice))]
+        [TypeConverter(typeof(ChoiceConverter<FlowBasis>))]
         [StudyKey("economizer", "flow_basis")]
         [StudyKey("ventilation", "flow_basis")]
         public FlowBasis? FlowBasis { get; init; }
 
         [CommandOption("--supply-temp <T>")]
         [Description("Supply (coil-leaving) air temperature (F or C). Required.")]
-        [StudyKey("economizer", "supply_temp", KeyUnit.Temperature)]
+        [StudyKey("economizer", "supply_temp", nameof(DisplayUnits.Temperature))]
         public double? SupplyTemp { get; init; }
 
         [CommandOption("--return-temp <T>")]
         [Description("Return air temperature (F or C). Required.")]
-        [StudyKey("economizer", "return_temp", KeyUnit.Temperature)]
-        [StudyKey("ventilation", "heat_to", KeyUnit.Temperature)]
-        [StudyKey("ventilation", "cool_to", KeyUnit.Temperature)]
+        [StudyKey("economizer", "return_temp", nameof(DisplayUnits.Temperature))]
+        [StudyKey("ventilation", "heat_to", nameof(DisplayUnits.Temperature))]
+        [StudyKey("ventilation", "cool_to", nameof(DisplayUnits.Temperature))]
         public double? ReturnTemp { get; init; }
 
         [CommandOption("--return-rh <PCT>")]
@@ -60,17 +61,17 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
 
         [CommandOption("--design-load <Q>")]
         [Description("Building sensible cooling load at the design outdoor temperature (Btu/h in ip, kW in si). Required.")]
-        [StudyKey("economizer", "design_load", KeyUnit.Power)]
+        [StudyKey("economizer", "design_load", nameof(DisplayUnits.Power))]
         public double? DesignLoad { get; init; }
 
         [CommandOption("--design-outdoor <T>")]
         [Description("Design outdoor dry-bulb of that load (F or C). Required.")]
-        [StudyKey("economizer", "design_outdoor", KeyUnit.Temperature)]
+        [StudyKey("economizer", "design_outdoor", nameof(DisplayUnits.Temperature))]
         public double? DesignOutdoor { get; init; }
 
         [CommandOption("--balance-point <T>")]
         [Description("Outdoor dry-bulb below which the building needs no cooling (F or C). Required.")]
-        [StudyKey("economizer", "balance_point", KeyUnit.Temperature)]
+        [StudyKey("economizer", "balance_point", nameof(DisplayUnits.Temperature))]
         public double? BalancePoint { get; init; }
 
         [CommandOption("--coil-leaving-rh <PCT>")]
@@ -90,17 +91,17 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
 
         [CommandOption("--high-limit-drybulb <T>")]
         [Description("Dry-bulb high limit (F or C). Default 75 F (23.9 C), a suggestion recalled from memory: the local energy code governs.")]
-        [StudyKey("economizer", "high_limit_drybulb", KeyUnit.Temperature)]
+        [StudyKey("economizer", "high_limit_drybulb", nameof(DisplayUnits.Temperature))]
         public double? HighLimitDryBulb { get; init; }
 
         [CommandOption("--high-limit-enthalpy <H>")]
         [Description("Enthalpy high limit (Btu/lb on the 0 F datum in ip, kJ/kg on the 0 C datum in si). Default 28 Btu/lb (47.2 kJ/kg), recalled from memory.")]
-        [StudyKey("economizer", "high_limit_enthalpy", KeyUnit.Enthalpy)]
+        [StudyKey("economizer", "high_limit_enthalpy", nameof(DisplayUnits.Enthalpy))]
         public double? HighLimitEnthalpy { get; init; }
 
         [CommandOption("--high-limit-dewpoint <T>")]
         [Description("Dew-point high limit (F or C). Default 55 F (12.8 C), recalled from memory.")]
-        [StudyKey("economizer", "high_limit_dewpoint", KeyUnit.Temperature)]
+        [StudyKey("economizer", "high_limit_dewpoint", nameof(DisplayUnits.Temperature))]
         public double? HighLimitDewPoint { get; init; }
 
         public override ValidationResult Validate()

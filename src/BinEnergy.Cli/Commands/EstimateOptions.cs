@@ -10,13 +10,13 @@ public class EstimateOptions : BinOptions
 {
     [CommandOption("--bin-point <POINT>")]
     [Description(BinPointHelp)]
-    [TypeConverter(typeof(BinPointChoice))]
+    [TypeConverter(typeof(ChoiceConverter<BinEvaluationPoint>))]
     [StudyKey("study", "bin_point")]
     public BinEvaluationPoint? BinPoint { get; init; }
 
     [CommandOption("--headline <METHOD>")]
     [Description(HeadlineHelp)]
-    [TypeConverter(typeof(MethodChoice))]
+    [TypeConverter(typeof(ChoiceConverter<IntegrationMethod>))]
     [StudyKey("study", "headline_method")]
     public IntegrationMethod? Headline { get; init; }
 }

@@ -3,6 +3,7 @@ using BinEnergy.Cli.Options;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
+using BinEnergy.Reporting.Units;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
@@ -15,23 +16,23 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
     {
         [CommandOption("--airflow <FLOW>")]
         [Description("Outdoor airflow (cfm in ip, L/s in si). Or give --people and --area rates instead.")]
-        [StudyKey("ventilation", "airflow", KeyUnit.Airflow)]
+        [StudyKey("ventilation", "airflow", nameof(DisplayUnits.Airflow))]
         public double? Airflow { get; init; }
 
         [CommandOption("--flow-basis <BASIS>")]
         [Description("How the volume becomes mass of dry air: site (dry air at 70 F and the site pressure, default), standard (0.075 lb/ft3) or actual (each hour's outdoor air).")]
-        [TypeConverter(typeof(FlowBasisChoice))]
+        [TypeConverter(typeof(ChoiceConverter<FlowBasis>))]
         [StudyKey("ventilation", "flow_basis")]
         public FlowBasis? FlowBasis { get; init; }
 
         [CommandOption("--heat-to <T>")]
         [Description("Heating setpoint (F or C). Required.")]
-        [StudyKey("ventilation", "heat_to", KeyUnit.Temperature)]
+        [StudyKey("ventilation", "heat_to", nameof(DisplayUnits.Temperature))]
         public double? HeatTo { get; init; }
 
         [CommandOption("--cool-to <T>")]
         [Description("Cooling setpoint (F or C). Required.")]
-        [StudyKey("ventilation", "cool_to", KeyUnit.Temperature)]
+        [StudyKey("ventilation", "cool_to", nameof(DisplayUnits.Temperature))]
         public double? CoolTo { get; init; }
 
         [CommandOption("--max-rh <PCT>")]
@@ -46,7 +47,7 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
 
         [CommandOption("--ventilate <WHEN>")]
         [Description("When outdoor air runs: occupied (the --occupied hours, default) or always.")]
-        [TypeConverter(typeof(VentilationChoice))]
+        [TypeConverter(typeof(ChoiceConverter<VentilationOperation>))]
         [StudyKey("ventilation", "operation")]
         public VentilationOperation? Ventilate { get; init; }
 
@@ -57,17 +58,17 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
 
         [CommandOption("--per-person <FLOW>")]
         [Description("Outdoor air per person (cfm or L/s) from the standard your code adopts.")]
-        [StudyKey("ventilation", "per_person", KeyUnit.Airflow)]
+        [StudyKey("ventilation", "per_person", nameof(DisplayUnits.Airflow))]
         public double? PerPerson { get; init; }
 
         [CommandOption("--area <A>")]
         [Description("Zone floor area (ft2 in ip, m2 in si).")]
-        [StudyKey("ventilation", "area", KeyUnit.Area)]
+        [StudyKey("ventilation", "area", nameof(DisplayUnits.Area))]
         public double? Area { get; init; }
 
         [CommandOption("--per-area <RATE>")]
         [Description("Outdoor air per unit floor area (cfm/ft2 or L/(s m2)) from the standard your code adopts.")]
-        [StudyKey("ventilation", "per_area", KeyUnit.Airflow)]
+        [StudyKey("ventilation", "per_area", nameof(DisplayUnits.Airflow))]
         public double? PerArea { get; init; }
 
         [CommandOption("--zone-effectiveness <EZ>")]
@@ -87,7 +88,7 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
 
         [CommandOption("--frost-limit <T>")]
         [Description("Outdoor dry-bulb (F or C) below which the recovery device defrosts and runs at --frost-effectiveness.")]
-        [StudyKey("recovery", "frost_limit", KeyUnit.Temperature)]
+        [StudyKey("recovery", "frost_limit", nameof(DisplayUnits.Temperature))]
         public double? FrostLimit { get; init; }
 
         [CommandOption("--frost-effectiveness <E>")]
@@ -97,7 +98,7 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
 
         [CommandOption("--recovery-pressure <DP>")]
         [Description("Pressure drop the device adds on each air stream (in. w.c. in ip, Pa in si). Default 0.")]
-        [StudyKey("recovery", "pressure_drop", KeyUnit.PressureDrop)]
+        [StudyKey("recovery", "pressure_drop", nameof(DisplayUnits.PressureDrop))]
         public double? RecoveryPressure { get; init; }
 
         [CommandOption("--fan-efficiency <E>")]

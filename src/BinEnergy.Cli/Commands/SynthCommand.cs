@@ -1,9 +1,7 @@
 using System.ComponentModel;
-using System.Globalization;
-using System.IO.Compression;
-using System.Text;
 using BinEnergy.Core.Weather.Synthesis;
 using BinEnergy.Reporting.Documents;
+using BinEnergy.Reporting.Tables;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -40,7 +38,6 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
         public bool Force { get; init; }
     }
 
-    /// <summary>Monthly errors above these are shown as warnings (the synthesizer normally meets them by far).</summary>
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
@@ -59,46 +56,14 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
             throw new UsageException($"the folder of --out {outPath} does not exist; create it first");
         }
 
-        if (File.Exists(fullOut) && !settings.Force)
+        var climate = MonthlyClimateReader.Read(monthly);
+        var result = WeatherSynthesizer.Synthesize(climate, seed, settings.Year);
+        if (!TextFile.WriteAtomically(fullOut, settings.Force, w => SynthesizedYearWriter.Write(result, monthly, w)))
         {
             throw new UsageException($"{outPath} exists; add --force to replace it, or choose another --out");
         }
 
-        var climate = MonthlyClimateReader.Read(monthly);
-        var result = WeatherSynthesizer.Synthesize(climate, seed, settings.Year);
-        WriteAtomically(result, monthly, fullOut, settings.Force, outPath);
-
         output.Write(SynthDocument.Build(result, climate, outPath, settings.DisplayUnits), settings);
         return ExitCodes.Ok;
-    }
-
-    private static void WriteAtomically(SynthesisResult result, string monthly, string fullOut, bool force, string shownOut)
-    {
-        string temp = Path.Combine(Path.GetDirectoryName(fullOut)!,
-            string.Create(CultureInfo.InvariantCulture, $".{Path.GetFileName(fullOut)}.{Environment.ProcessId}.tmp"));
-        try
-        {
-            using (var stream = new FileStream(temp, FileMode.CreateNew, FileAccess.Write))
-            using (Stream body = fullOut.EndsWith(".gz", StringComparison.OrdinalIgnoreCase)
-                ? new GZipStream(stream, CompressionLevel.Optimal)
-                : stream)
-            using (var writer = new StreamWriter(body, new UTF8Encoding(encoderShouldEmitUTF8Identifier: false)))
-            {
-                SynthesizedYearWriter.Write(result, monthly, writer);
-            }
-
-            File.Move(temp, fullOut, overwrite: force);
-        }
-        catch (IOException) when (!force && File.Exists(fullOut))
-        {
-            throw new UsageException($"{shownOut} appeared while writing; add --force to replace it, or choose another --out");
-        }
-        finally
-        {
-            if (File.Exists(temp))
-            {
-                File.Delete(temp);
-            }
-        }
     }
 }

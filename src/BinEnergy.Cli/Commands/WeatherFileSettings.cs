@@ -2,6 +2,7 @@ using System.ComponentModel;
 using BinEnergy.Cli.Options;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
+using BinEnergy.Reporting.Units;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -21,7 +22,7 @@ public class WeatherFileSettings : CommonSettings
 
     [CommandOption("--elevation <Z>")]
     [Description("Site elevation (ft in ip, m in si), overriding the file's metadata; sets the site pressure.")]
-    [StudyKey("climate", "elevation", KeyUnit.Length)]
+    [StudyKey("climate", "elevation", nameof(DisplayUnits.Length))]
     public double? Elevation { get; init; }
 
     [CommandOption("--drop-long-gaps")]

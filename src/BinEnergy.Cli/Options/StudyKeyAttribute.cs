@@ -6,15 +6,16 @@ namespace BinEnergy.Cli.Options;
 /// </summary>
 /// <param name="table">The study table.</param>
 /// <param name="key">The key without its unit suffix.</param>
-/// <param name="unit">The quantity, whose display unit gives the suffix.</param>
+/// <param name="unit">The <see cref="Reporting.Units.DisplayUnits"/> property whose unit gives the key its suffix
+/// (<c>nameof(DisplayUnits.Airflow)</c> makes <c>airflow</c> <c>airflow_cfm</c> or <c>airflow_ls</c>); null for a key without one.</param>
 [AttributeUsage(AttributeTargets.Property, AllowMultiple = true)]
-internal sealed class StudyKeyAttribute(string table, string key, KeyUnit unit = KeyUnit.None) : Attribute
+internal sealed class StudyKeyAttribute(string table, string key, string? unit = null) : Attribute
 {
     public string Table { get; } = table;
 
     public string Key { get; } = key;
 
-    public KeyUnit Unit { get; } = unit;
+    public string? Unit { get; } = unit;
 
     /// <summary>For a flag: the key gets the opposite (<c>--non-integrated</c> sets <c>integrated = false</c>).</summary>
     public bool Inverted { get; init; }

@@ -68,19 +68,10 @@ internal static class StudyOptions
         return new UsageException(origin is null ? e.Problem : origin + ": " + e.Problem);
     }
 
-    private static string KeyName(StudyKeyAttribute key, DisplayUnits u) => key.Unit switch
-    {
-        KeyUnit.None => key.Key,
-        KeyUnit.Temperature => u.Temperature.NameFor(key.Key),
-        KeyUnit.TemperatureDifference => u.TemperatureDifference.NameFor(key.Key),
-        KeyUnit.Airflow => u.Airflow.NameFor(key.Key),
-        KeyUnit.Length => u.Length.NameFor(key.Key),
-        KeyUnit.Area => u.Area.NameFor(key.Key),
-        KeyUnit.Power => u.Power.NameFor(key.Key),
-        KeyUnit.PressureDrop => u.PressureDrop.NameFor(key.Key),
-        KeyUnit.Enthalpy => u.Enthalpy.NameFor(key.Key),
-        _ => throw new ArgumentOutOfRangeException(nameof(key), key.Unit, "unknown key unit"),
-    };
+    private static string KeyName(StudyKeyAttribute key, DisplayUnits u) => key.Unit is null
+        ? key.Key
+        : (typeof(DisplayUnits).GetProperty(key.Unit)?.GetValue(u) as DisplayUnit
+            ?? throw new InvalidOperationException($"DisplayUnits has no unit {key.Unit}")).NameFor(key.Key);
 
     /// <summary>The option's long name as the user types it, e.g. <c>--airflow</c>; an argument's name in capitals.</summary>
     public static string OptionName(PropertyInfo property)
@@ -95,9 +86,7 @@ internal static class StudyOptions
 
     private static string WordOf(PropertyInfo property, Enum value)
     {
-        var converterType = property.GetCustomAttribute<TypeConverterAttribute>()?.ConverterTypeName is string name ? Type.GetType(name) : null;
-        var converter = converterType is null ? null : Activator.CreateInstance(converterType);
-        var method = converter?.GetType().GetMethod("WordOf");
-        return method?.Invoke(converter, [value]) as string ?? value.ToString().ToLowerInvariant();
+        var converter = property.GetCustomAttribute<TypeConverterAttribute>()?.ConverterTypeName is string name ? Type.GetType(name) : null;
+        return converter?.GetMethod("WordOf")?.Invoke(null, [value]) as string ?? value.ToString().ToLowerInvariant();
     }
 }

@@ -24,7 +24,7 @@ public static class AirDocument
             .Number("rh", u.RelativeHumidity, "Relative humidity", s => s.RelativeHumidity)
             .Number("humidity_ratio", u.HumidityRatio, "Humidity ratio", s => s.HumidityRatio.KilogramsPerKilogram)
             .Number("humidity_ratio", u.Moisture, "Humidity ratio", s => s.HumidityRatio.KilogramsPerKilogram)
-            .Number("enthalpy", u.Enthalpy, u.IsIp ? "Enthalpy (dry air, 0 F datum)" : "Enthalpy (dry air, 0 C datum)", s => s.Enthalpy.JoulesPerKilogram)
+            .Number("enthalpy", u.Enthalpy, $"Enthalpy (dry air, {u.EnthalpyDatum} datum)", s => s.Enthalpy.JoulesPerKilogram)
             .Number("specific_volume", u.SpecificVolume, "Specific volume (dry air)", s => s.SpecificVolume)
             .Number("density", u.Density, "Density (moist air)", s => s.Density)
             .Number("pressure", u.Pressure, "Pressure", s => s.Pressure.Pascals)
@@ -33,14 +33,11 @@ public static class AirDocument
             .Text("humidity_definition", "Humidity definitions", _ => HumidityDefinition)
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Layout = TableLayout.Record }, [state]));
 
-        var latentPerMoisture = u.IsIp
-            ? new DisplayUnit("btuh_cfm_per_gr_lb", "Btu/(h cfm) per gr/lb", f => u.LatentFactor.FromSi(f) / Core.Units.Conversions.GrainsPerPound, "0.0000")
-            : new DisplayUnit("w_ls_per_g_kg", "W/(L/s) per g/kg", f => f / 1000.0, "0.0000");
         doc.Add(new ColumnSet<(string Basis, AirflowFactors Factors)>()
             .Text("basis", "Basis", x => x.Basis)
             .Number("sensible_factor", u.SensibleFactor.WithFormat("0.0000"), "Sensible factor", x => x.Factors.SensibleSi)
             .Number("latent_factor", u.LatentFactor, "Latent factor", x => x.Factors.LatentSi)
-            .Number("latent_factor", latentPerMoisture, "Latent factor", x => x.Factors.LatentSi)
+            .Number("latent_factor", u.LatentFactorPerMoisture, "Latent factor", x => x.Factors.LatentSi)
             .Number("total_factor", u.TotalFactor.WithFormat("0.0000"), "Total factor", x => x.Factors.TotalSi)
             .Fill(new ResultTable("factors") { Title = "Airflow factors: q = factor x flow x difference", Layout = TableLayout.Keyed, KeyColumn = "basis", Transpose = true },
                 [("this state", state.Factors), ("standard air", AirflowFactors.StandardAir)]));

@@ -97,7 +97,7 @@ public static class BinsDocument
 
         doc.Note(NoteKind.Note, Inv($"Hours: {table.Hours} ({weather.Calendar.Note}). Occupied: {table.OccupiedHours}, unoccupied: {table.UnoccupiedHours}; schedule \"{schedule}\"."));
         doc.Note(NoteKind.Note, "Bins sit on multiples of the width, lower edge inclusive (50 F belongs to 50-55 F). Means are over the bin's hours; the mean coincident wet-bulb (MCWB) is the mean of the hourly wet-bulbs.");
-        doc.Note(NoteKind.Note, u.IsIp ? "Enthalpy in Btu/lb of dry air on the 0 F datum." : "Enthalpy in kJ/kg of dry air on the 0 C datum.");
+        doc.Note(NoteKind.Note, $"Enthalpy in {u.Enthalpy.Symbol} of dry air on the {u.EnthalpyDatum} datum.");
         return doc;
     }
 

@@ -57,7 +57,7 @@ public static class InspectDocument
             .Number("base", u.Temperature.WithFormat("0.#"), "Base", i => curve.BasesC[i])
             .Number("heating", u.DegreeDays, "Heating", i => curve.HeatingKDays[i])
             .Number("cooling", u.DegreeDays, "Cooling", i => curve.CoolingKDays[i])
-            .Fill(new ResultTable("degree_day_curve") { Title = "Degree-days by base (balance point)", TerminalEvery = u.IsIp ? 5 : 2 }, Enumerable.Range(0, curve.BasesC.Length)));
+            .Fill(new ResultTable("degree_day_curve") { Title = "Degree-days by base (balance point)", TerminalEvery = u.DegreeDayCurveTerminalStep }, Enumerable.Range(0, curve.BasesC.Length)));
 
         var d = climate.Design;
         var design = new List<DesignRow>

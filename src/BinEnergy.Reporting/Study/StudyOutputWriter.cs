@@ -20,7 +20,7 @@ public static class StudyOutputWriter
         var metadata = new Dictionary<string, string>
         {
             ["binenergy.study"] = run.Study.Name,
-            ["binenergy.units"] = run.Study.Units == Core.Units.UnitSystem.IP ? "ip" : "si",
+            ["binenergy.units"] = StudyTables.Units(run).Name,
             ["binenergy.engine_version"] = run.EngineVersion,
             ["binenergy.study_sha256"] = run.Study.Hash,
             ["binenergy.currency"] = run.Study.Currency,

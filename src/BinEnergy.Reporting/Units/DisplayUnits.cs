@@ -140,6 +140,17 @@ public sealed class DisplayUnits
     /// <summary>Hours (fractional in some bin methods).</summary>
     public DisplayUnit Hours { get; } = new(string.Empty, "h", h => h, "N0");
 
+    /// <summary>The enthalpy datum of these units, in words: "0 F" or "0 C".</summary>
+    public string EnthalpyDatum => ip ? "0 F" : "0 C";
+
+    /// <summary>The latent airflow factor per unit of the humidity ratio people read: per gr/lb or per g/kg.</summary>
+    public DisplayUnit LatentFactorPerMoisture => ip
+        ? new("btuh_cfm_per_gr_lb", "Btu/(h cfm) per gr/lb", f => f * AirflowFactors.IpPowerPerFlowPerSi / Conversions.GrainsPerPound, "0.0000")
+        : new("w_ls_per_g_kg", "W/(L/s) per g/kg", f => f / 1000.0, "0.0000");
+
+    /// <summary>Every how many rows the terminal shows of the degree-day curve: every 5 F or every 2 K.</summary>
+    public int DegreeDayCurveTerminalStep => ip ? 5 : 2;
+
     /// <summary>The degree-day base people quote in these units: 65 F, or 18.3 C (common practice).</summary>
     public double DegreeDayBaseC => ip ? Conversions.FahrenheitToCelsius(65.0) : 18.3;
 

@@ -1,6 +1,8 @@
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Units;
 
+using BinEnergy.Reporting.Units;
+
 namespace BinEnergy.Reporting.Charts.Data;
 
 /// <summary>
@@ -63,7 +65,8 @@ public sealed record PsychroChartData
             throw new ArgumentException($"dry-bulb has {dryBulbC.Count} hours but humidity ratio has {humidityRatio.Count}; they must match");
         }
 
-        double step = units == UnitSystem.IP ? 5.0 / 1.8 : 5.0;
+        var u = new DisplayUnits(units);
+        double step = 5.0 / u.TemperatureDifference.FromSi(1.0);
         double lo = dryBulbC.Count > 0 ? dryBulbC.Min() : -10.0;
         double hi = dryBulbC.Count > 0 ? dryBulbC.Max() : 40.0;
         double fromC = Temperature.From(Math.Floor(Temperature.FromCelsius(lo).In(units) / 5.0) * 5.0, units).Celsius;
@@ -74,7 +77,7 @@ public sealed record PsychroChartData
         }
 
         ChartLine Line(string label, IReadOnlyList<ChartPoint> points) =>
-            new(label, points.Select(p => DryBulb(p.DryBulbC, units)).ToArray(), points.Select(p => Humidity(p.HumidityRatio, units)).ToArray());
+            new(label, points.Select(p => u.Temperature.FromSi(p.DryBulbC)).ToArray(), points.Select(p => u.Moisture.FromSi(p.HumidityRatio)).ToArray());
 
         var rh = ChartCurves.RelativeHumiditySteps
             .Select(r => Line(FormattableString.Invariant($"{r * 100:0} %"), ChartCurves.RelativeHumidityCurve(r, fromC, toC, pressurePa)))
@@ -83,28 +86,17 @@ public sealed record PsychroChartData
             ? null
             : Line(economizer.Label, ChartCurves.EconomizerRegion(fromC, pressurePa, economizer.DryBulbLimitC, economizer.EnthalpyLimitJPerKg, economizer.DewPointLimitC));
 
-        var pressure = Pressure.FromPascals(pressurePa);
         return new PsychroChartData
         {
             Subject = subject,
-            TemperatureUnit = units == UnitSystem.IP ? "F" : "C",
-            HumidityRatioUnit = units == UnitSystem.IP ? "gr/lb" : "g/kg",
-            PressureNote = units == UnitSystem.IP
-                ? FormattableString.Invariant($"Curves drawn at {pressure.In(units):0.00} psia")
-                : FormattableString.Invariant($"Curves drawn at {pressure.In(units):0.0} kPa"),
-            HourDryBulb = dryBulbC.Select(t => DryBulb(t, units)).ToArray(),
-            HourHumidityRatio = humidityRatio.Select(w => Humidity(w, units)).ToArray(),
+            TemperatureUnit = u.Temperature.Symbol,
+            HumidityRatioUnit = u.Moisture.Symbol,
+            PressureNote = "Curves drawn at " + DisplayUnits.Text(u.Pressure, pressurePa, "0.00"),
+            HourDryBulb = dryBulbC.Select(u.Temperature.FromSi).ToArray(),
+            HourHumidityRatio = humidityRatio.Select(u.Moisture.FromSi).ToArray(),
             SaturationCurve = Line("Saturation (100 %)", ChartCurves.SaturationCurve(fromC, toC, pressurePa)),
             RelativeHumidityLines = rh,
             EconomizerRegion = region,
         };
-    }
-
-    private static double DryBulb(double celsius, UnitSystem units) => Temperature.FromCelsius(celsius).In(units);
-
-    private static double Humidity(double kgPerKg, UnitSystem units)
-    {
-        var w = Core.Units.HumidityRatio.FromKilogramsPerKilogram(kgPerKg);
-        return units == UnitSystem.IP ? w.GrainsPerPound : w.GramsPerKilogram;
     }
 }
