@@ -407,6 +407,37 @@ public sealed class StudyRunTests : IDisposable
         Assert.All(bins, b => Assert.Equal(2.0, D(b["bin_high_c"]) - D(b["bin_low_c"]), 9));
     }
 
+    [Fact]
+    public void EveryTableHasTheThreeMethods_AndTheHeadlineFollowsTheStudy()
+    {
+        string out1 = Path.Combine(folder, "out-methods");
+        string text = ExampleStudy.Text.Replace("bin_width_f = 5", "bin_width_f = 5\nheadline_method = \"bin\"", StringComparison.Ordinal);
+        var (code, stdout, err) = Cli("run", StudyPath(text), "--out", out1);
+        Assert.True(code == 0, err);
+        foreach (var table in new[] { "annual", "bins", "monthly", "economizer" })
+        {
+            var methods = ReadCsv(Path.Combine(out1, "tables", table + ".csv")).Select(r => r["method"]).Distinct().Order().ToList();
+            Assert.Equal(["bin", "hourly", "joint-bin"], methods);
+        }
+
+        // Each bin row carries the exact figures of its own hours beside the method's estimate; they add up to the hourly year.
+        var bins = ReadCsv(Path.Combine(out1, "tables", "bins.csv")).Where(r => r["variant"] == "minimum" && r["method"] == "bin").ToList();
+        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["variant"] == "minimum").ToDictionary(r => r["method"]);
+        Assert.Equal(D(annual["hourly"]["cooling_latent_kbtu"]), bins.Sum(b => D(b["hourly_cooling_latent_kbtu"])), 6);
+        Assert.Equal(D(annual["bin"]["cooling_latent_kbtu"]), bins.Sum(b => D(b["cooling_latent_kbtu"])), 6);
+
+        // The headline is the bin method's, said so, and its distance from hourly is warned about.
+        using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
+        Assert.Equal("bin", summary.RootElement.GetProperty("headline_method").GetString());
+        var headline = summary.RootElement.GetProperty("headline").EnumerateArray().Single(c => c.GetProperty("variant").GetString() == "minimum");
+        Assert.Equal(D(annual["bin"]["cost_usd"]), headline.GetProperty("cost_usd").GetDouble(), 6);
+        Assert.Contains("bin method", stdout, StringComparison.Ordinal);
+        Assert.Contains(summary.RootElement.GetProperty("method_check").EnumerateArray(), r => r.GetProperty("figure").GetString() == "Cooling, latent");
+        string report = File.ReadAllText(Path.Combine(out1, "report.html"));
+        Assert.Contains("Method check", report, StringComparison.Ordinal);
+        Assert.Contains("Joint bins vs hourly", report, StringComparison.Ordinal);
+    }
+
     private sealed record DuckTable(int rows, List<DuckColumn> columns, Dictionary<string, double?> sums, Dictionary<string, string> metadata);
 
     private sealed record DuckColumn(string name, string type, string nullable);
