@@ -27,6 +27,12 @@ public class BinOptions : WeatherFileSettings
     [StudyKey("schedule", "holidays", List = true)]
     public string? Holidays { get; init; }
 
+    [CommandOption("--daylight-saving <RULE>")]
+    [Description("The building's clocks: none (default, the schedule is in standard time), north-america or europe (the schedule is in clock time; the weather stays in standard time).")]
+    [TypeConverter(typeof(ChoiceConverter<DaylightSaving>))]
+    [StudyKey("schedule", "daylight_saving")]
+    public DaylightSaving? DaylightSaving { get; init; }
+
     [CommandOption("--csv")]
     [Description("Write the main table as CSV to standard output (the same column names and units as the study tables).")]
     public bool Csv { get; init; }
@@ -68,7 +74,7 @@ public class BinOptions : WeatherFileSettings
 
         try
         {
-            return OccupancySchedule.Parse(Occupied ?? "always", holidays);
+            return OccupancySchedule.Parse(Occupied ?? "always", holidays).WithDaylightSaving(DaylightSaving ?? Core.Schedules.DaylightSaving.None);
         }
         catch (ScheduleSyntaxException e)
         {

@@ -1,6 +1,7 @@
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Units;
 using BinEnergy.Reporting.Output;
 
@@ -18,6 +19,8 @@ internal static class Choices
         [typeof(BinEvaluationPoint)] = ("--bin-point", "a bin evaluation point",
             new[] { ("mean", BinEvaluationPoint.MeanDryBulb), ("mid", BinEvaluationPoint.Midpoint), ("midpoint", BinEvaluationPoint.Midpoint) }),
         [typeof(IntegrationMethod)] = ("--headline", "a method", new[] { ("hourly", IntegrationMethod.Hourly), ("joint-bin", IntegrationMethod.JointBin), ("bin", IntegrationMethod.Bin) }),
+        [typeof(DaylightSaving)] = ("--daylight-saving", "a daylight-saving rule",
+            new[] { ("none", DaylightSaving.None), ("north-america", DaylightSaving.NorthAmerica), ("europe", DaylightSaving.Europe) }),
         [typeof(BinSplit)] = ("--by", "a split", new[] { ("month", BinSplit.Month), ("block", BinSplit.TimeOfDayBlock) }),
     };
 

@@ -45,4 +45,7 @@ public sealed record OutdoorAirAssumptions(
 {
     /// <summary>The humidity-ratio bins of the joint-bin method.</summary>
     public HumidityBinScale HumidityScale { get; init; } = HumidityBinScale.Default(BinScale.Units);
+
+    /// <summary>The daylight-saving rule the schedule's clock follows.</summary>
+    public Schedules.DaylightSaving DaylightSaving { get; init; }
 }

@@ -223,6 +223,7 @@ public static class OutdoorAirCalculator
             var w = weather.HumidityRatio;
             var p = weather.PressurePa;
             var times = weather.Times;
+            var clock = settings.AirflowMultipliers is null ? times : settings.Schedule.ClockTimes(weather); // occupancy follows the clock
             var cellOf = cells.CellOfHour;
             var binOf = cells.DryBulbBinOfCell;
             double densitySum = 0;
@@ -235,7 +236,7 @@ public static class OutdoorAirCalculator
 
                 double rho = Density(t[i], w[i], p[i]);
                 densitySum += rho;
-                double f = multiplierByHour[times[i].Hour];
+                double f = multiplierByHour[clock[i].Hour];
                 var figures = At(t[i], w[i], rho, f, 1.0, sums.Clamps);
                 int c = cellOf[i];
                 sums.ByBin[binOf[c]] += figures;
@@ -350,6 +351,7 @@ public static class OutdoorAirCalculator
                 Calendar: weather.Calendar.Note)
             {
                 HumidityScale = humidity,
+                DaylightSaving = settings.Schedule.DaylightSaving,
             };
         }
     }

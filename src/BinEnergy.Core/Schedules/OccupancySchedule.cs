@@ -45,6 +45,24 @@ public sealed class OccupancySchedule
     /// <summary>The schedule's text as given.</summary>
     public string Text { get; }
 
+    /// <summary>The daylight-saving rule of the building's clocks (the schedule is in clock time).</summary>
+    public DaylightSaving DaylightSaving { get; private init; } = DaylightSaving.None;
+
+    /// <summary>The same schedule read in the clock time of <paramref name="rule"/>.</summary>
+    public OccupancySchedule WithDaylightSaving(DaylightSaving rule) => new(Text, table, holidays) { DaylightSaving = rule };
+
+    /// <summary>The clock time of every hour of a record (local standard time shifted by the daylight-saving rule).</summary>
+    public DateTime[] ClockTimes(HourlyWeather weather)
+    {
+        ArgumentNullException.ThrowIfNull(weather);
+        if (DaylightSaving == DaylightSaving.None)
+        {
+            return weather.Times;
+        }
+
+        return [.. weather.Times.Select(t => DaylightSavingRule.ClockTime(t, DaylightSaving, weather.Site.UtcOffsetHours))];
+    }
+
     /// <summary>The holiday dates (unoccupied unless a <c>Hol</c> clause says otherwise).</summary>
     public IReadOnlyCollection<DateOnly> Holidays => holidays;
 
@@ -96,7 +114,7 @@ public sealed class OccupancySchedule
         return new OccupancySchedule(text, table, dates);
     }
 
-    /// <summary>Whether the hour starting at <paramref name="hourStart"/> (local standard time) is occupied.</summary>
+    /// <summary>Whether the hour starting at <paramref name="hourStart"/> (clock time) is occupied.</summary>
     public bool IsOccupied(DateTime hourStart)
     {
         int row = holidays.Count > 0 && holidays.Contains(DateOnly.FromDateTime(hourStart))
@@ -109,7 +127,7 @@ public sealed class OccupancySchedule
     public bool[] Flags(HourlyWeather weather)
     {
         var flags = new bool[weather.Count];
-        var times = weather.Times;
+        var times = ClockTimes(weather);
         for (int i = 0; i < flags.Length; i++)
         {
             flags[i] = IsOccupied(times[i]);

@@ -57,9 +57,15 @@ public static class StudyCaseBuilder
             holidays.Add(d);
         }
 
+        var rule = schedule.Text("daylight_saving") switch
+        {
+            "north-america" => DaylightSaving.NorthAmerica,
+            "europe" => DaylightSaving.Europe,
+            _ => DaylightSaving.None,
+        };
         try
         {
-            return OccupancySchedule.Parse(text, holidays);
+            return OccupancySchedule.Parse(text, holidays).WithDaylightSaving(rule);
         }
         catch (ScheduleSyntaxException e)
         {

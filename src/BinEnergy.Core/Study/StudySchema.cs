@@ -50,6 +50,8 @@ internal static class StudySchema
         [
             Text("occupied", "Occupied hours, e.g. \"Mon-Fri 07:00-19:00; Sat 08:00-13:00\" or \"always\".", "always"),
             new KeyDefinition("holidays", ValueKind.TextList, Unitless("holidays"), "Dates (YYYY-MM-DD) treated as unoccupied."),
+            Choice("daylight_saving", ["none", "north-america", "europe"], "none",
+                "The daylight-saving rule of the building's clocks: the schedule is read in clock time, the weather stays in standard time."),
         ], true, "The occupancy schedule."),
 
         new("ventilation", false,

@@ -186,7 +186,7 @@ public static class StudyReport
                 SiteSensibleFactor = DisplayUnits.Text(u.SensibleFactor, a.Factors.SensibleSi) + " at the first climate",
                 BinWidth = AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol),
                 Calendar = a.Calendar,
-                Schedule = a.Schedule,
+                Schedule = a.Schedule + "; " + AssumptionText.Clock(a.DaylightSaving),
                 DataRepairs = repairs,
             },
             Results = sections,

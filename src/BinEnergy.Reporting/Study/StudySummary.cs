@@ -76,7 +76,7 @@ public static class StudySummary
         [
             .. c.Case.Assumptions,
             AssumptionText.SiteFactor(a, u),
-            "schedule: " + a.Schedule,
+            "schedule: " + a.Schedule + "; " + AssumptionText.Clock(a.DaylightSaving),
             "calendar: " + a.Calendar,
             AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol),
             "plant energy of the hourly method uses each hour's outdoor dry-bulb for the COP curves; the bin methods use each bin's or cell's evaluation dry-bulb",

@@ -1,6 +1,7 @@
 using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Units;
 using BinEnergy.Reporting.Units;
 
@@ -40,6 +41,14 @@ public static class AssumptionText
     public const string LatentError =
         "Dry-bulb bins err most on latent loads: a bin's mean humidity ratio hides its humid hours, and only humidity above the limit counts. Joint bins close most of that error; the hourly sum has none.";
 
+    /// <summary>How the schedule's clock relates to the weather's standard time.</summary>
+    public static string Clock(DaylightSaving rule) => rule switch
+    {
+        DaylightSaving.NorthAmerica => "the schedule is in clock time with North American daylight saving (second Sunday in March to first Sunday in November); the weather stays in local standard time",
+        DaylightSaving.Europe => "the schedule is in clock time with European daylight saving (last Sunday in March to last Sunday in October); the weather stays in local standard time",
+        _ => "the schedule is in local standard time (no daylight saving)",
+    };
+
     /// <summary>The sentences of an outdoor-air estimate's assumptions.</summary>
     public static IEnumerable<string> OutdoorAir(OutdoorAirAssumptions a, DisplayUnits u, bool noSchedule)
     {
@@ -51,7 +60,8 @@ public static class AssumptionText
                 : ", no humidification");
         yield return a.Operation == VentilationOperation.Always
             ? "ventilation every hour"
-            : "ventilation in occupied hours: " + a.Schedule + (noSchedule ? " (no schedule given: every hour counts as occupied)" : string.Empty);
+            : "ventilation in occupied hours: " + a.Schedule + (noSchedule ? " (no schedule given: every hour counts as occupied)" : string.Empty)
+                + "; " + Clock(a.DaylightSaving);
         yield return Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol);
         yield return "formulas: " + Formulas;
         if (a.Recovery is EnergyRecoverySettings r)

@@ -89,6 +89,23 @@ public class OutdoorAirCommandTests
     }
 
     [Fact]
+    public void DaylightSaving_ShiftsTheOccupiedHours_AndIsStated()
+    {
+        string[] common = [BinsCommandTests.InventedFile(), "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--occupied", "Mon-Fri 07:00-19:00"];
+        var standard = Json(common);
+        var clock = Json([.. common, "--daylight-saving", "north-america"]);
+        double Heating(JsonElement r) => r.GetProperty("annual").GetProperty("hourly").GetProperty("heating_kbtu").GetDouble();
+
+        // The same number of weekday hours, an hour earlier in standard time from March to November: in a climate that is
+        // colder at 06:00 than at 18:00 the heating rises.
+        Assert.Equal(standard.GetProperty("annual").GetProperty("hourly").GetProperty("hours_ventilated").GetInt32(),
+            clock.GetProperty("annual").GetProperty("hourly").GetProperty("hours_ventilated").GetInt32());
+        Assert.True(Heating(clock) > Heating(standard));
+        Assert.Contains(clock.GetProperty("assumptions").EnumerateArray(), a => a.GetString()!.Contains("North American daylight saving", StringComparison.Ordinal));
+        Assert.Contains(standard.GetProperty("assumptions").EnumerateArray(), a => a.GetString()!.Contains("no daylight saving", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void AirflowBelowThePeopleAndAreaMinimum_Warns()
     {
         var (code, output, err) = AirCommandTests.Run("outdoor-air", BinsCommandTests.InventedFile(), "--airflow", "300", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60",
