@@ -27,6 +27,15 @@ public sealed record EconomizerControlResult
     /// <summary>Hourly totals per calendar month, January first (12 entries).</summary>
     public required IReadOnlyList<EconomizerTotals> ByMonth { get; init; }
 
+    /// <summary>Every total multiplied by <paramref name="factor"/> (e.g. to a mean year).</summary>
+    public EconomizerControlResult Scaled(double factor) => this with
+    {
+        Totals = Totals.Select(t => t.Scaled(factor)),
+        Baseline = Baseline.Select(t => t.Scaled(factor)),
+        ByBin = [.. ByBin.Select(b => b.Select(t => t.Scaled(factor)))],
+        ByMonth = [.. ByMonth.Select(t => t.Scaled(factor))],
+    };
+
     /// <summary>Coil energy saved against the baseline by a method (negative when the control adds load).</summary>
     public Energy Savings(IntegrationMethod method) => Totals[method].SavingsAgainst(Baseline[method]);
 

@@ -67,6 +67,25 @@ public sealed class EconomizerEvaluation
     /// <summary>True when compressor energy was bought through a plant.</summary>
     public bool HasPlant { get; }
 
+    /// <summary>How many complete years the figures are the mean of (1 for a single or typical year).</summary>
+    public int YearsAveraged { get; private init; } = 1;
+
+    /// <summary>The mean year of an evaluation over <paramref name="years"/> complete years: hours and energies divided by it.</summary>
+    public EconomizerEvaluation PerYear(int years)
+    {
+        if (years <= 1)
+        {
+            return this;
+        }
+
+        double f = 1.0 / years;
+        var bins = Bins.Select(b => b with { OccupiedHours = (int)Math.Round(b.OccupiedHours * f) }).ToList();
+        return new EconomizerEvaluation(Model, Weather, (int)Math.Round(OccupiedHours * f), bins, Baseline.Scaled(f), [.. Controls.Select(c => c.Scaled(f))], HasPlant)
+        {
+            YearsAveraged = years,
+        };
+    }
+
     /// <summary>The control with the largest savings by <paramref name="method"/> (ties: the first listed).</summary>
     public EconomizerControlResult Best(IntegrationMethod method = IntegrationMethod.Hourly) =>
         Controls.Aggregate((a, b) => b.Savings(method).Joules > a.Savings(method).Joules ? b : a);

@@ -27,6 +27,10 @@ public sealed record EconomizerTotals(
     /// <summary>No hours, no energy.</summary>
     public static EconomizerTotals Zero { get; } = new(0, 0, 0, 0, Energy.FromJoules(0), Energy.FromJoules(0), SiteEnergy.Zero);
 
+    /// <summary>Every hour and energy multiplied by <paramref name="factor"/> (e.g. to a mean year).</summary>
+    public EconomizerTotals Scaled(double factor) => new(HoursNoCooling * factor, HoursFree * factor, HoursIntegrated * factor, HoursMinimum * factor,
+        Energy.FromJoules(CoilSensible.Joules * factor), Energy.FromJoules(CoilLatent.Joules * factor), Compressor.Scaled(factor));
+
     /// <summary>Total coil energy: sensible plus latent.</summary>
     public Energy CoilTotal => CoilSensible + CoilLatent;
 

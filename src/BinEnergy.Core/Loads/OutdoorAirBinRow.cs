@@ -19,4 +19,8 @@ public sealed record OutdoorAirBinRow(
     int HoursVentilated,
     HumidityRatio MeanHumidityRatio,
     Temperature EvaluatedAt,
-    ByMethod<EnergyFigures> Figures);
+    ByMethod<EnergyFigures> Figures)
+{
+    /// <summary>How many years the bin's weather statistics span (its figures are per year): 1 but for the mean year of a multi-year record.</summary>
+    public int YearsAveraged { get; init; } = 1;
+}

@@ -36,6 +36,32 @@ public sealed record OutdoorAirResult
     /// <summary>Hours in which a COP curve was held at its end value (hourly method).</summary>
     public required CurveClampCounter Clamps { get; init; }
 
+    /// <summary>How many complete years these figures are the mean of (1 for a single or typical year).</summary>
+    public int YearsAveraged { get; init; } = 1;
+
+    /// <summary>
+    /// The mean year of a result computed over <paramref name="years"/> complete years: every energy and
+    /// ventilated hour divided by <paramref name="years"/> (the bins' weather statistics stay those of all the
+    /// hours; <see cref="OutdoorAirBinRow.YearsAveraged"/> says how many years they span). Peaks stay those of the record.
+    /// </summary>
+    public OutdoorAirResult PerYear(int years)
+    {
+        if (years <= 1)
+        {
+            return this;
+        }
+
+        double f = 1.0 / years;
+        return this with
+        {
+            Annual = Annual.Select(a => a.Scaled(f)),
+            Bins = [.. Bins.Select(b => b with { Figures = b.Figures.Select(x => x.Scaled(f)), YearsAveraged = years })],
+            Months = [.. Months.Select(m => m with { Figures = m.Figures.Select(x => x.Scaled(f)) })],
+            Hours = null,
+            YearsAveraged = years,
+        };
+    }
+
     /// <summary>
     /// A method against the hourly sum for one load figure, percent: 100 (method - hourly) / hourly;
     /// 0 when both are zero; null when only the hourly figure is zero.

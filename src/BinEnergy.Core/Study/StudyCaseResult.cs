@@ -22,6 +22,19 @@ public sealed record StudyCaseResult
     /// <summary>The economizer evaluation (identical to the <c>economizer</c> command's), or null without an economizer.</summary>
     public EconomizerEvaluation? Economizer { get; init; }
 
+    /// <summary>
+    /// The record's calendar years and their own results: one entry (the case's results) for a typical year
+    /// or a record within one year; one per year for a multi-year record, whose <see cref="OutdoorAir"/> and
+    /// <see cref="Economizer"/> are then the mean of its complete years (partial years are not mixed in).
+    /// </summary>
+    public required IReadOnlyList<CaseYear> Years { get; init; }
+
+    /// <summary>True when the record spans several calendar years (the case's figures are a mean year).</summary>
+    public bool IsMultiYear => Years.Count > 1;
+
+    /// <summary>Each hour's figures over the whole record when the run kept them (<c>--hourly</c>), else null.</summary>
+    public IReadOnlyList<EnergyFigures>? HourlyFigures { get; init; }
+
     /// <summary>Occupied flag per hour.</summary>
     public required bool[] Occupied { get; init; }
 

@@ -59,31 +59,59 @@ public static class StudyRunner
         return WeatherReader.Read(climate.WeatherPath, options);
     }
 
-    /// <summary>Runs one case on its weather.</summary>
+    /// <summary>
+    /// Runs one case on its weather: once for a typical year or a record within one calendar year; for a
+    /// multi-year record, once per calendar year and once over the complete years, whose results divided by
+    /// their number are the case's mean year (partial years are reported on their own, not mixed in).
+    /// </summary>
     public static StudyCaseResult RunCase(StudyCase c, HourlyWeather weather, IntegrationMethod headline = IntegrationMethod.Hourly, bool keepHours = false)
     {
-        var settings = c.OutdoorAir;
-        var flags = settings.Schedule.Flags(weather);
-        var table = BinTable.Build(weather, c.BinScale, flags);
-        var cells = HourCells.Build(weather, c.BinScale, HumidityBinScale.Default(c.BinScale.Units));
-        var plant = c.Plant is null ? null : new PlantModel(c.Plant);
-        var result = OutdoorAirCalculator.Compute(weather, settings, table, cells, flags, plant, DesignConditions.FromRecord(weather), keepHours);
-
-        EconomizerEvaluation? economizer = null;
-        if (c.Economizer is not null)
+        var years = RecordYear.Of(weather);
+        var warnings = new List<string>();
+        OutdoorAirResult result;
+        EconomizerEvaluation? economizer;
+        List<CaseYear> perYear;
+        IReadOnlyList<EnergyFigures>? hourly;
+        if (years.Count == 1)
         {
-            try
+            (result, economizer) = Evaluate(c, weather, keepHours);
+            perYear = [new CaseYear(years[0], result, economizer)];
+            hourly = result.Hours;
+            if (!years[0].Complete)
             {
-                economizer = EconomizerEvaluation.Evaluate(weather, flags, table, cells, c.Economizer, plant);
+                warnings.Add(FormattableString.Invariant($"The record has {weather.Count:N0} hours, not a whole year: the annual figures are for these hours only."));
             }
-            catch (EconomizerSettingsException e)
+        }
+        else
+        {
+            perYear = [.. years.Select(y =>
             {
-                var p = e.Problems[0];
-                throw new StudyFileException(c.Climate.Name, null, "economizer." + p.Key, p.Message);
+                var (r, e) = Evaluate(c, weather.Slice(y.Start, y.Hours), keepHours);
+                return new CaseYear(y, r, e);
+            })];
+            hourly = keepHours ? [.. perYear.SelectMany(y => y.OutdoorAir.Hours!)] : null;
+            var complete = years.Where(y => y.Complete).ToList();
+            foreach (var y in years.Where(y => !y.Complete))
+            {
+                warnings.Add(FormattableString.Invariant($"{y.Label} has {y.Hours:N0} hours, not a whole year: it is reported on its own and left out of the mean year."));
+            }
+
+            if (complete.Count == 0)
+            {
+                (result, economizer) = Evaluate(c, weather, keepHours: false);
+                warnings.Add("The record holds no complete calendar year: the case's figures are for all its hours, not a mean year.");
+            }
+            else
+            {
+                int from = complete[0].Start, to = complete[^1].Start + complete[^1].Hours;
+                int span = years.Count(y => y.Start >= from && y.Start < to);
+                var (all, e) = Evaluate(c, weather.Slice(from, to - from), keepHours: false);
+                (result, economizer) = (all.PerYear(span), e?.PerYear(span));
             }
         }
 
-        var warnings = new List<string>(result.Warnings);
+        var flags = c.OutdoorAir.Schedule.Flags(weather);
+        warnings.InsertRange(0, result.Warnings);
         if (c.Plant is PlantSettings ps && result.Clamps.CoolingHours > 0)
         {
             warnings.Add(FormattableString.Invariant(
@@ -108,9 +136,36 @@ public static class StudyRunner
             Weather = weather,
             OutdoorAir = result,
             Economizer = economizer,
+            Years = perYear,
+            HourlyFigures = hourly,
             Occupied = flags,
             Warnings = warnings,
         };
+    }
+
+    /// <summary>The outdoor-air and economizer engines on one record.</summary>
+    private static (OutdoorAirResult OutdoorAir, EconomizerEvaluation? Economizer) Evaluate(StudyCase c, HourlyWeather weather, bool keepHours)
+    {
+        var settings = c.OutdoorAir;
+        var flags = settings.Schedule.Flags(weather);
+        var table = BinTable.Build(weather, c.BinScale, flags);
+        var cells = HourCells.Build(weather, c.BinScale, HumidityBinScale.Default(c.BinScale.Units));
+        var plant = c.Plant is null ? null : new PlantModel(c.Plant);
+        var result = OutdoorAirCalculator.Compute(weather, settings, table, cells, flags, plant, DesignConditions.FromRecord(weather), keepHours);
+        if (c.Economizer is null)
+        {
+            return (result, null);
+        }
+
+        try
+        {
+            return (result, EconomizerEvaluation.Evaluate(weather, flags, table, cells, c.Economizer, plant));
+        }
+        catch (EconomizerSettingsException e)
+        {
+            var p = e.Problems[0];
+            throw new StudyFileException(c.Climate.Name, null, "economizer." + p.Key, p.Message);
+        }
     }
 
     private static string Show(double c, StudyCase sc) =>

@@ -132,4 +132,20 @@ public sealed class HourlyWeather
 
     /// <summary>The calendar the hours are placed in.</summary>
     public CalendarInfo Calendar { get; }
+
+    /// <summary>
+    /// The hours [<paramref name="start"/>, <paramref name="start"/> + <paramref name="count"/>) as a record of their own
+    /// (one calendar year of a multi-year record), with the same site, quality report and calendar.
+    /// </summary>
+    public HourlyWeather Slice(int start, int count)
+    {
+        ArgumentOutOfRangeException.ThrowIfNegative(start);
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(start + count, Count);
+        double[] Cut(double[] column) => column.AsSpan(start, count).ToArray();
+        return new HourlyWeather(Site, Times.AsSpan(start, count).ToArray(), Cut(DryBulbC), Cut(HumidityRatio), Cut(PressurePa), Cut(DewPointC),
+            Cut(WetBulbC), Cut(EnthalpyJPerKg), Quality, Calendar)
+        {
+            HourlyPressureFromRecord = HourlyPressureFromRecord,
+        };
+    }
 }

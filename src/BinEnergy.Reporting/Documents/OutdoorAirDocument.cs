@@ -38,6 +38,18 @@ public static class OutdoorAirDocument
             .Add(FigureColumns.Loads(u, show), m => r.Annual[m])
             .Fill(new ResultTable("annual") { Layout = TableLayout.Keyed, KeyColumn = "method", ShowInTerminal = false, Transpose = true }, IntegrationMethods.All));
 
+        if (run.IsMultiYear)
+        {
+            var years = new ColumnSet<CaseYear>()
+                .Text("year", "Year", y => y.Year.Label)
+                .Integer("complete_year", "Complete", y => y.Year.Complete ? 1 : 0)
+                .Integer("hours_in_year", "Hours", y => y.Year.Hours)
+                .Add(FigureColumns.Loads(u, show), y => y.OutdoorAir.Annual[headline])
+                .Fill(new ResultTable("years") { Title = $"Each calendar year, {IntegrationMethods.Label(headline)}" }, run.Years);
+            years.Notes.Add($"The figures above are the mean of the {r.YearsAveraged} complete years; a partial year (complete 0) is shown on its own and not mixed in.");
+            doc.Add(years);
+        }
+
         doc.Add(BinTable(r, u, show));
         doc.Add(MonthTable(r, u, show));
         if (r.Peaks is OutdoorAirPeaks peaks)

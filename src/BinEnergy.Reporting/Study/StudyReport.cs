@@ -114,8 +114,17 @@ public static class StudyReport
             Subject = $"{run.Study.Name} ({method})",
             EnergyUnit = eUnit + " outdoor-air load",
             CostUnit = u.Cost.Symbol,
-            Cells = run.Cases.Select(c => new ComparisonCell(c.Case.Climate.Name, c.Case.Variant.Name,
-                E(c.OutdoorAir.Annual[headline].Loads.ThermalTotal), c.OutdoorAir.Annual[headline].Bought.Total.Cost)).ToList(),
+            Cells = run.Cases.Select(c =>
+            {
+                var years = c.Years.Where(y => y.Year.Complete).Select(y => y.OutdoorAir.Annual[headline]).ToList();
+                bool spread = c.IsMultiYear && years.Count > 1;
+                return new ComparisonCell(c.Case.Climate.Name, c.Case.Variant.Name,
+                    E(c.OutdoorAir.Annual[headline].Loads.ThermalTotal), c.OutdoorAir.Annual[headline].Bought.Total.Cost)
+                {
+                    EnergyRange = spread ? (years.Min(y => E(y.Loads.ThermalTotal)), years.Max(y => E(y.Loads.ThermalTotal))) : null,
+                    CostRange = spread ? (years.Min(y => y.Bought.Total.Cost), years.Max(y => y.Bought.Total.Cost)) : null,
+                };
+            }).ToList(),
         };
         charts.Add(("comparison-energy", ComparisonChart.RenderEnergy(comparison)));
         charts.Add(("comparison-cost", ComparisonChart.RenderCost(comparison)));
@@ -157,6 +166,15 @@ public static class StudyReport
                     + AssumptionText.LatentError),
             ]),
         };
+        if (run.Cases.Any(c => c.IsMultiYear))
+        {
+            sections.Add(new ReportSection("Year-to-year spread",
+            [
+                Table(summary.Table("spread"), $"Multi-year records: the mean of the complete years (the headline) and the lowest and highest year, {IntegrationMethods.Label(headline)}"),
+                new ReportParagraph("Partial first or last years are shown in tables/annual with complete_year = 0 and are not part of the mean."),
+            ]));
+        }
+
         foreach (var (name, chart) in charts)
         {
             sections.Add(new ReportSection(chart.Title, [new ReportChart(chart, chart.Description)]));

@@ -43,6 +43,26 @@ public static class StudySummary
             .Add(FigureColumns.Loads(u, show), c => c.OutdoorAir.Annual[headline])
             .Fill(new ResultTable("headline") { Title = $"Annual outdoor-air figures, {IntegrationMethods.Label(headline)}" }, run.Cases));
 
+        doc.Add(new ColumnSet<(StudyCaseResult Case, CaseYear Year)>()
+            .Add(StudyTables.CaseColumns, x => x.Case)
+            .Text("year", "Year", x => x.Year.Year.Label)
+            .Integer("complete_year", "Complete year", x => x.Year.Year.Complete ? 1 : 0)
+            .Integer("hours_in_year", "Hours", x => x.Year.Year.Hours)
+            .Add(FigureColumns.Loads(u, show), x => x.Year.OutdoorAir.Annual[headline])
+            .Fill(new ResultTable("years") { Title = "Each calendar year of the records", ShowInTerminal = false },
+                run.Cases.SelectMany(c => c.Years.Select(y => (c, y)))));
+
+        doc.Add(new ColumnSet<(StudyCaseResult Case, Spread Spread)>()
+            .Add(StudyTables.CaseColumns, x => x.Case)
+            .Text("figure", "Figure", x => x.Spread.Figure)
+            .Text("unit", "Unit", x => x.Spread.Unit)
+            .Integer("years", "Complete years", x => x.Spread.Years)
+            .Number("mean", DisplayUnit.Count, "Mean year", x => x.Spread.Mean)
+            .Number("min", DisplayUnit.Count, "Lowest year", x => x.Spread.Min)
+            .Number("max", DisplayUnit.Count, "Highest year", x => x.Spread.Max)
+            .Fill(new ResultTable("spread") { Title = $"Year-to-year spread of the complete years, {IntegrationMethods.Label(headline)}", ShowInTerminal = false },
+                run.Cases.Where(c => c.IsMultiYear).SelectMany(c => Spreads(c, u, headline).Select(sp => (c, sp)))));
+
         doc.Add(new ColumnSet<(StudyCaseResult Case, MethodCheck.Row Row)>()
             .Add(StudyTables.CaseColumns, x => x.Case)
             .Add(MethodCheck.Columns(u), x => x.Row)
@@ -66,6 +86,40 @@ public static class StudySummary
         doc.NoteAll(NoteKind.Warning, run.Warnings);
         doc.NoteAll(NoteKind.Caution, Cautions.OutdoorAir);
         return doc;
+    }
+
+    /// <summary>A figure's mean year and its lowest and highest complete year.</summary>
+    /// <param name="Figure">The figure.</param>
+    /// <param name="Unit">Its unit symbol.</param>
+    /// <param name="Years">How many complete years.</param>
+    /// <param name="Mean">The mean year's value.</param>
+    /// <param name="Min">The lowest complete year's.</param>
+    /// <param name="Max">The highest complete year's.</param>
+    public sealed record Spread(string Figure, string Unit, int Years, double Mean, double Min, double Max);
+
+    /// <summary>The spread of each figure over a multi-year case's complete years, by <paramref name="method"/> (empty when it has none).</summary>
+    public static IEnumerable<Spread> Spreads(StudyCaseResult c, DisplayUnits u, IntegrationMethod method)
+    {
+        var complete = c.Years.Where(y => y.Year.Complete).Select(y => y.OutdoorAir.Annual[method]).ToList();
+        if (complete.Count == 0)
+        {
+            yield break;
+        }
+
+        var show = FigureSet.Of(c.OutdoorAir);
+        var mean = c.OutdoorAir.Annual[method];
+        foreach (var figure in new[] { Core.Loads.LoadFigure.Heating, Core.Loads.LoadFigure.CoolingSensible, Core.Loads.LoadFigure.CoolingLatent, Core.Loads.LoadFigure.Humidification })
+        {
+            var (_, label, unit) = FigureColumns.Of(figure, u);
+            var values = complete.Select(f => unit.FromSi(f.Loads[figure].Joules)).ToList();
+            yield return new Spread(label, unit.Symbol, complete.Count, unit.FromSi(mean.Loads[figure].Joules), values.Min(), values.Max());
+        }
+
+        if (show.Plant)
+        {
+            var costs = complete.Select(f => f.Bought.Total.Cost).ToList();
+            yield return new Spread("Cost", u.Cost.Symbol, complete.Count, mean.Bought.Total.Cost, costs.Min(), costs.Max());
+        }
     }
 
     /// <summary>The assumptions of one case: the defaults the study left to the engine, then how the figures were made.</summary>

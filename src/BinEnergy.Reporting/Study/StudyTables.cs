@@ -45,14 +45,25 @@ public static class StudyTables
         .Text("climate", "Climate", c => c.Case.Climate.Name)
         .Text("variant", "Variant", c => c.Case.Variant.Name);
 
-    /// <summary>One row per climate x variant x method.</summary>
+    /// <summary>
+    /// The years a case's annual and economizer rows are given for: its one year (<c>typical</c> or the
+    /// calendar year), or each calendar year of a multi-year record and then their mean (<c>mean</c>).
+    /// </summary>
+    public static IEnumerable<(string Year, bool Complete, OutdoorAirResult OutdoorAir, EconomizerEvaluation? Economizer)> YearsOf(StudyCaseResult c) =>
+        c.IsMultiYear
+            ? [.. c.Years.Select(y => (y.Year.Label, y.Year.Complete, y.OutdoorAir, y.Economizer)), (RecordYear.MeanLabel, true, c.OutdoorAir, c.Economizer)]
+            : [(c.Years[0].Year.Label, c.Years[0].Year.Complete, c.OutdoorAir, c.Economizer)];
+
+    /// <summary>One row per climate x variant x year x method (the year is <c>mean</c> for the mean of a multi-year record's complete years).</summary>
     public static ResultTable Annual(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
-        new ColumnSet<(StudyCaseResult Case, IntegrationMethod Method)>()
+        new ColumnSet<(StudyCaseResult Case, string Year, bool Complete, OutdoorAirResult OutdoorAir, IntegrationMethod Method)>()
             .Add(CaseColumns, x => x.Case)
+            .Text("year", "Year", x => x.Year)
+            .Integer("complete_year", "Complete year", x => x.Complete ? 1 : 0, detail: true)
             .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
-            .Add(FigureColumns.Loads(u, show), x => x.Case.OutdoorAir.Annual[x.Method])
+            .Add(FigureColumns.Loads(u, show), x => x.OutdoorAir.Annual[x.Method])
             .Fill(new ResultTable("annual") { Title = "Annual outdoor-air loads by method" },
-                cases.SelectMany(c => IntegrationMethods.All.Select(m => (c, m))));
+                cases.SelectMany(c => YearsOf(c).SelectMany(y => IntegrationMethods.All.Select(m => (c, y.Year, y.Complete, y.OutdoorAir, m)))));
 
     /// <summary>The columns of one dry-bulb bin: edges, hours and means, the method's figures and the exact figures of its own hours.</summary>
     public static ColumnSet<(OutdoorAirBinRow Bin, IntegrationMethod Method)> BinColumns(DisplayUnits u, FigureSet show) =>
@@ -61,8 +72,8 @@ public static class StudyTables
             .Number("bin_high", u.Temperature, "Bin to", x => x.Bin.Bin.High.Celsius)
             .Number("bin_mid", u.Temperature, "Bin midpoint", x => x.Bin.Bin.Mid.Celsius, detail: true)
             .Number("evaluated_drybulb", u.Temperature, "Evaluated at", x => x.Bin.EvaluatedAt.Celsius)
-            .Integer("hours", "Hours", x => x.Bin.Bin.All.Hours, detail: true)
-            .Integer("hours_occupied", "Hours occupied", x => x.Bin.Bin.Occupied.Hours, detail: true)
+            .Integer("hours", "Hours", x => (int)Math.Round((double)x.Bin.Bin.All.Hours / x.Bin.YearsAveraged), detail: true)
+            .Integer("hours_occupied", "Hours occupied", x => (int)Math.Round((double)x.Bin.Bin.Occupied.Hours / x.Bin.YearsAveraged), detail: true)
             .Number("mean_humidity_ratio", u.Moisture, "Mean coincident humidity ratio", x => x.Bin.MeanHumidityRatio.KilogramsPerKilogram)
             .Number("mean_coincident_wetbulb", u.Temperature, "Mean coincident wet-bulb", x => x.Bin.Bin.All.MeanWetBulb.Celsius, detail: true)
             .Add(FigureColumns.Loads(u, show), x => x.Bin.Figures[x.Method])
@@ -86,15 +97,16 @@ public static class StudyTables
                 cases.SelectMany(c => IntegrationMethods.All.SelectMany(m => c.OutdoorAir.Months.Select(mo => (c, mo, m)))));
 
     private static ResultTable Economizer(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
-        new ColumnSet<(StudyCaseResult Case, EconomizerControlResult Control, IntegrationMethod Method)>()
+        new ColumnSet<(StudyCaseResult Case, string Year, EconomizerControlResult Control, IntegrationMethod Method)>()
             .Add(CaseColumns, x => x.Case)
+            .Text("year", "Year", x => x.Year)
             .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
             .Text("control", "Control", x => FigureColumns.ControlName(x.Control))
             .Text("integration", "Integration", x => FigureColumns.Integration(x.Control))
             .Add(FigureColumns.Economizer(u, show.Plant), x => (x.Control, x.Method))
             .Fill(new ResultTable("economizer") { Title = "Economizer controls against the baseline, by method" },
-                cases.Where(c => c.Economizer is not null)
-                    .SelectMany(c => IntegrationMethods.All.SelectMany(m => c.Economizer!.BaselineAndControls.Select(x => (c, x, m)))));
+                cases.SelectMany(c => YearsOf(c).Where(y => y.Economizer is not null)
+                    .SelectMany(y => IntegrationMethods.All.SelectMany(m => y.Economizer!.BaselineAndControls.Select(x => (c, y.Year, x, m))))));
 
     private static ResultTable Peaks(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
         new ColumnSet<(StudyCaseResult Case, OutdoorAirPeak Peak)>()
@@ -114,9 +126,9 @@ public static class StudyTables
             .Integer("occupied", "Occupied", x => x.Case.Occupied[x.Hour] ? 1 : 0)
             .Number("drybulb", u.Temperature, "Dry-bulb", x => x.Case.Weather.DryBulbC[x.Hour])
             .Number("humidity_ratio", u.Moisture, "Humidity ratio", x => x.Case.Weather.HumidityRatio[x.Hour])
-            .Add(FigureColumns.Loads(u, show), x => x.Case.OutdoorAir.Hours![x.Hour])
+            .Add(FigureColumns.Loads(u, show), x => x.Case.HourlyFigures![x.Hour])
             .Fill(new ResultTable("hourly") { Title = "Outdoor-air loads hour by hour" },
-                cases.SelectMany(c => c.OutdoorAir.Hours is null
+                cases.SelectMany(c => c.HourlyFigures is null
                     ? throw new InvalidOperationException("the run did not keep its hours; run with --hourly")
                     : Enumerable.Range(0, c.Weather.Count).Select(i => (c, i))));
 }

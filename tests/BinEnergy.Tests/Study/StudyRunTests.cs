@@ -222,8 +222,8 @@ public sealed class StudyRunTests : IDisposable
             foreach (var c in seen.columns)
             {
                 // Proper types: names are strings, quantities doubles, hours and months 32-bit integers.
-                string expected = c.name is "climate" or "variant" or "method" or "control" or "integration" or "condition" or "time" ? "VARCHAR"
-                    : c.name is "hours_ventilated" or "hours" or "hours_occupied" or "month" or "hour" or "occupied" ? "INTEGER" : "DOUBLE";
+                string expected = c.name is "climate" or "variant" or "method" or "control" or "integration" or "condition" or "time" or "year" ? "VARCHAR"
+                    : c.name is "hours_ventilated" or "hours" or "hours_occupied" or "month" or "hour" or "occupied" or "complete_year" ? "INTEGER" : "DOUBLE";
                 Assert.True(expected == c.type, $"{table}.{c.name} is {c.type}, expected {expected}");
             }
 
@@ -436,6 +436,52 @@ public sealed class StudyRunTests : IDisposable
         string report = File.ReadAllText(Path.Combine(out1, "report.html"));
         Assert.Contains("Method check", report, StringComparison.Ordinal);
         Assert.Contains("Joint bins vs hourly", report, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void MultiYearRecord_GivesEachYear_TheMeanOfTheCompleteYearsAsHeadline_AndTheSpread()
+    {
+        // Three invented calendar years 2017-2019 and 500 hours of 2020 (a partial last year), a warmer trend year to year.
+        int hours = 3 * 8760 + 500;
+        var t = new double[hours];
+        var w = new double[hours];
+        for (int i = 0; i < hours; i++)
+        {
+            t[i] = 11 + (i / 8760) - 13 * Math.Cos(2 * Math.PI * i / 8760.0) - 5 * Math.Cos(2 * Math.PI * ((i % 24) - 3) / 24);
+            w[i] = MoistAir.HumidityRatioFromDewPoint(t[i] - 3, Atmosphere.SeaLevelPressurePa);
+        }
+
+        var record = SyntheticWeather.FromColumns(t, w, name: "Harbor years (invented)", start: new DateTime(2017, 1, 1));
+        using (var writer = new StreamWriter(Path.Combine(folder, "harbor-years.csv")))
+        {
+            OpenLayoutWriter.Write(record, writer);
+        }
+
+        string text = ExampleStudy.Text.Replace("weather = \"harbor.csv\"", "weather = \"harbor-years.csv\"", StringComparison.Ordinal);
+        Assert.NotEqual(ExampleStudy.Text, text);
+        string out1 = Path.Combine(folder, "out-years");
+        var (code, _, err) = Cli("run", StudyPath(text), "--out", out1);
+        Assert.True(code == 0, err);
+        Assert.Contains("2020 has 500 hours, not a whole year: it is reported on its own and left out of the mean year", err, StringComparison.Ordinal);
+
+        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["variant"] == "minimum" && r["method"] == "hourly").ToDictionary(r => r["year"]);
+        Assert.Equal(["2017", "2018", "2019", "2020", "mean"], annual.Keys.Order());
+        Assert.Equal("0", annual["2020"]["complete_year"]);
+        double mean = (D(annual["2017"]["heating_kbtu"]) + D(annual["2018"]["heating_kbtu"]) + D(annual["2019"]["heating_kbtu"])) / 3;
+        Assert.Equal(mean, D(annual["mean"]["heating_kbtu"]), 6); // the hourly mean year is the mean of the complete years, exactly
+        Assert.True(D(annual["2017"]["heating_kbtu"]) > D(annual["2019"]["heating_kbtu"])); // the warmer years need less heating
+
+        using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
+        var headline = summary.RootElement.GetProperty("headline").EnumerateArray().Single(c => c.GetProperty("variant").GetString() == "minimum");
+        Assert.Equal(mean, headline.GetProperty("heating_kbtu").GetDouble(), 6);
+        var spread = summary.RootElement.GetProperty("spread").EnumerateArray()
+            .Single(r => r.GetProperty("variant").GetString() == "minimum" && r.GetProperty("figure").GetString() == "Heating");
+        Assert.Equal(3, spread.GetProperty("years").GetInt32());
+        Assert.Equal(D(annual["2019"]["heating_kbtu"]), spread.GetProperty("min").GetDouble(), 6);
+        Assert.Equal(D(annual["2017"]["heating_kbtu"]), spread.GetProperty("max").GetDouble(), 6);
+        var economizerYears = ReadCsv(Path.Combine(out1, "tables", "economizer.csv")).Select(r => r["year"]).Distinct().Order();
+        Assert.Equal(["2017", "2018", "2019", "2020", "mean"], economizerYears);
+        Assert.Contains("Year-to-year spread", File.ReadAllText(Path.Combine(out1, "report.html")), StringComparison.Ordinal);
     }
 
     private sealed record DuckTable(int rows, List<DuckColumn> columns, Dictionary<string, double?> sums, Dictionary<string, string> metadata);
