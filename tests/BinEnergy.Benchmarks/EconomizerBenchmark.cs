@@ -63,19 +63,11 @@ public class EconomizerBenchmark
     [Benchmark(Baseline = true)]
     public HourlyWeather ReadStationYear() => WeatherReader.Read(file, "725300TYA.CSV", new WeatherReadOptions { Map = map });
 
-    /// <summary>Bin table plus every control, both methods, on the record already read.</summary>
+    /// <summary>Bin table plus every control, all three methods, on the record already read.</summary>
     [Benchmark]
     public EconomizerEvaluation BinsAndAllControls()
     {
         var bins = BinTable.Build(weather, DryBulbBinScale.Default(UnitSystem.IP), occupied);
         return EconomizerEvaluation.Evaluate(weather, occupied, bins, settings);
-    }
-
-    /// <summary>The same with joint dry-bulb x humidity-ratio bins as a third method.</summary>
-    [Benchmark]
-    public EconomizerEvaluation BinsJointBinsAndAllControls()
-    {
-        var bins = BinTable.Build(weather, DryBulbBinScale.Default(UnitSystem.IP), occupied);
-        return EconomizerEvaluation.Evaluate(weather, occupied, bins, settings, bins.Joint(HumidityBinScale.DefaultWidthIp));
     }
 }
