@@ -1,4 +1,5 @@
 using BinEnergy.Core.Binning;
+using BinEnergy.Core.Climate;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Schedules;
@@ -21,6 +22,8 @@ internal static class Choices
         [typeof(IntegrationMethod)] = ("--headline", "a method", new[] { ("hourly", IntegrationMethod.Hourly), ("joint-bin", IntegrationMethod.JointBin), ("bin", IntegrationMethod.Bin) }),
         [typeof(DaylightSaving)] = ("--daylight-saving", "a daylight-saving rule",
             new[] { ("none", DaylightSaving.None), ("north-america", DaylightSaving.NorthAmerica), ("europe", DaylightSaving.Europe) }),
+        [typeof(DegreeDayMethod)] = ("--degree-days", "a degree-day method",
+            new[] { ("daily-mean", DegreeDayMethod.DailyMean), ("hourly", DegreeDayMethod.Hourly), ("max-min", DegreeDayMethod.MaxMin) }),
         [typeof(BinSplit)] = ("--by", "a split", new[] { ("month", BinSplit.Month), ("block", BinSplit.TimeOfDayBlock) }),
     };
 

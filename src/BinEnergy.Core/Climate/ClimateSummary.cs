@@ -9,6 +9,7 @@ namespace BinEnergy.Core.Climate;
 /// <param name="MinDryBulbC">Lowest hourly dry-bulb, C.</param>
 /// <param name="MeanDryBulbC">Mean hourly dry-bulb, C.</param>
 /// <param name="MaxDryBulbC">Highest hourly dry-bulb, C.</param>
+/// <param name="DegreeDayMethod">How the degree-days were counted.</param>
 /// <param name="DegreeDayBaseC">The base of <paramref name="HeatingKDays"/> and <paramref name="CoolingKDays"/>, C.</param>
 /// <param name="HeatingKDays">Heating degree-days at the base, K-day.</param>
 /// <param name="CoolingKDays">Cooling degree-days at the base, K-day.</param>
@@ -18,19 +19,21 @@ public sealed record ClimateSummary(
     double MinDryBulbC,
     double MeanDryBulbC,
     double MaxDryBulbC,
+    DegreeDayMethod DegreeDayMethod,
     double DegreeDayBaseC,
     double HeatingKDays,
     double CoolingKDays,
     DegreeDayCurve Curve,
     DesignConditions Design)
 {
-    /// <summary>The summary of <paramref name="weather"/> with degree-days at <paramref name="baseC"/> and the curve over <paramref name="curveBasesC"/>.</summary>
-    public static ClimateSummary Of(HourlyWeather weather, double baseC, double[] curveBasesC)
+    /// <summary>The summary of <paramref name="weather"/> with degree-days by <paramref name="method"/> at <paramref name="baseC"/> and the curve over <paramref name="curveBasesC"/>.</summary>
+    public static ClimateSummary Of(HourlyWeather weather, DegreeDayMethod method, double baseC, double[] curveBasesC)
     {
         ArgumentNullException.ThrowIfNull(weather);
         var t = weather.DryBulbC;
-        return new ClimateSummary(t.Min(), t.Average(), t.Max(), baseC,
-            DegreeDays.Heating(t, baseC), DegreeDays.Cooling(t, baseC),
-            DegreeDayCurve.FromHours(t, curveBasesC), DesignConditions.FromRecord(weather));
+        var series = DegreeDaySeries.Of(weather, method);
+        return new ClimateSummary(t.Min(), t.Average(), t.Max(), method, baseC,
+            series.Heating(baseC), series.Cooling(baseC),
+            DegreeDayCurve.From(series, curveBasesC), DesignConditions.FromRecord(weather));
     }
 }

@@ -4,8 +4,8 @@ namespace BinEnergy.Core.Climate;
 
 /// <summary>
 /// Heating and cooling degree-days of an hourly record as functions of the base temperature
-/// (the variable-base or balance-point curve): exact values at a set of bases, each computed
-/// from the hours as in <see cref="DegreeDays"/>, and MathNet linear-spline interpolation
+/// (the variable-base or balance-point curve): exact values at a set of bases, each counted
+/// as in <see cref="DegreeDaySeries"/> by its method, and MathNet linear-spline interpolation
 /// between them for any balance point inside the range.
 /// </summary>
 public sealed class DegreeDayCurve
@@ -13,14 +13,18 @@ public sealed class DegreeDayCurve
     private readonly LinearSpline heating;
     private readonly LinearSpline cooling;
 
-    private DegreeDayCurve(double[] basesC, double[] heatingKDays, double[] coolingKDays)
+    private DegreeDayCurve(DegreeDayMethod method, double[] basesC, double[] heatingKDays, double[] coolingKDays)
     {
+        Method = method;
         BasesC = basesC;
         HeatingKDays = heatingKDays;
         CoolingKDays = coolingKDays;
         heating = LinearSpline.InterpolateSorted(basesC, heatingKDays);
         cooling = LinearSpline.InterpolateSorted(basesC, coolingKDays);
     }
+
+    /// <summary>How the day temperatures were taken.</summary>
+    public DegreeDayMethod Method { get; }
 
     /// <summary>The bases, C, ascending.</summary>
     public double[] BasesC { get; }
@@ -36,37 +40,41 @@ public sealed class DegreeDayCurve
         Enumerable.Range(40, 41).Select(f => Units.Conversions.FahrenheitToCelsius(f)).ToArray();
 
     /// <summary>
-    /// Builds the curve from hourly dry-bulbs. Sorting the hours once and keeping running sums
-    /// gives every base in O(log n): HDD(b) = (k b - sum of the k temperatures below b) / 24.
+    /// Builds the curve from a degree-day series. Sorting its temperatures once and keeping
+    /// running sums of days d and of d T gives every base in O(log n):
+    /// HDD(b) = b x (days below b) - (sum of d T below b), CDD(b) likewise above.
     /// </summary>
-    public static DegreeDayCurve FromHours(IReadOnlyList<double> dryBulbC, IReadOnlyList<double>? basesC = null)
+    public static DegreeDayCurve From(DegreeDaySeries series, IReadOnlyList<double>? basesC = null)
     {
+        ArgumentNullException.ThrowIfNull(series);
         var bases = (basesC ?? StandardBasesC()).ToArray();
         if (bases.Length < 2 || bases.Zip(bases.Skip(1)).Any(p => !(p.Second > p.First)))
         {
             throw new ArgumentException("the bases must be at least two values in ascending order", nameof(basesC));
         }
 
-        var sorted = dryBulbC.ToArray();
-        Array.Sort(sorted);
-        var prefix = new double[sorted.Length + 1];
+        var sorted = (double[])series.TemperaturesC.Clone();
+        var days = (double[])series.Days.Clone();
+        Array.Sort(sorted, days);
+        var dayPrefix = new double[sorted.Length + 1];
+        var degreePrefix = new double[sorted.Length + 1];
         for (int i = 0; i < sorted.Length; i++)
         {
-            prefix[i + 1] = prefix[i] + sorted[i];
+            dayPrefix[i + 1] = dayPrefix[i] + days[i];
+            degreePrefix[i + 1] = degreePrefix[i] + days[i] * sorted[i];
         }
 
-        double total = prefix[^1];
         var hdd = new double[bases.Length];
         var cdd = new double[bases.Length];
         for (int j = 0; j < bases.Length; j++)
         {
             double b = bases[j];
             int k = LowerBound(sorted, b);
-            hdd[j] = (k * b - prefix[k]) / 24.0;
-            cdd[j] = ((total - prefix[k]) - (sorted.Length - k) * b) / 24.0;
+            hdd[j] = b * dayPrefix[k] - degreePrefix[k];
+            cdd[j] = (degreePrefix[^1] - degreePrefix[k]) - b * (dayPrefix[^1] - dayPrefix[k]);
         }
 
-        return new DegreeDayCurve(bases, hdd, cdd);
+        return new DegreeDayCurve(series.Method, bases, hdd, cdd);
     }
 
     /// <summary>Heating degree-days at a base inside the curve's range, K-day (linear interpolation).</summary>

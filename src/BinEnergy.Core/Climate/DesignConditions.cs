@@ -1,3 +1,4 @@
+using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Weather;
 using MathNet.Numerics.Statistics;
 
@@ -8,17 +9,15 @@ namespace BinEnergy.Core.Climate;
 /// climatic design conditions of ASHRAE Handbook—Fundamentals (2017), ch. 14: heating 99.6 % and
 /// 99 % dry-bulb (exceeded in that share of the hours); cooling 0.4 %, 1 % and 2 % dry-bulb
 /// with mean coincident wet-bulb; dehumidification 0.4 % and 1 % dew point with mean
-/// coincident dry-bulb. Percentiles are MathNet sample quantiles of the hours
-/// (<see cref="QuantileMethod"/>); means are over the hours within
-/// <see cref="CoincidenceWindowK"/> of the design value. The handbook's published values
+/// coincident dry-bulb and the humidity ratio at the design dew point; enthalpy 0.4 % and 1 %
+/// with mean coincident dry-bulb. Percentiles are MathNet sample quantiles of the hours
+/// (<see cref="QuantileMethod"/>); coincident means are over the hours at the data level
+/// nearest the design value (<see cref="CoincidentHours"/>). The handbook's published values
 /// come from many years of observations; these come from the one record given, so a typical
 /// year gives milder extremes than the long-term tables.
 /// </summary>
 public sealed record DesignConditions
 {
-    /// <summary>Half-width of the coincidence window, K (about 1 F either side of the design value).</summary>
-    public const double CoincidenceWindowK = 0.5;
-
     /// <summary>The MathNet quantile definition used.</summary>
     public const QuantileDefinition Definition = QuantileDefinition.R7;
 
@@ -41,38 +40,52 @@ public sealed record DesignConditions
     /// <summary>Dehumidification 0.4 % and 1 % design points, in that order.</summary>
     public required IReadOnlyList<DehumidificationDesignPoint> Dehumidification { get; init; }
 
-    /// <summary>Computes the design conditions of a record.</summary>
-    public static DesignConditions FromRecord(HourlyWeather weather) =>
-        FromHours(weather.DryBulbC, weather.WetBulbC, weather.DewPointC, weather.HumidityRatio);
+    /// <summary>Enthalpy 0.4 % and 1 % design points, in that order.</summary>
+    public required IReadOnlyList<EnthalpyDesignPoint> Enthalpy { get; init; }
 
-    /// <summary>Computes design conditions from hourly columns of equal length.</summary>
-    public static DesignConditions FromHours(double[] dryBulbC, double[] wetBulbC, double[] dewPointC, double[] humidityRatio)
+    /// <summary>The definitions (percentiles and coincident means) in words, for outputs.</summary>
+    public static string Basis => "percentiles: " + QuantileMethod + "; " + CoincidentHours.Definition;
+
+    /// <summary>Computes the design conditions of a record at its site pressure.</summary>
+    public static DesignConditions FromRecord(HourlyWeather weather)
+    {
+        ArgumentNullException.ThrowIfNull(weather);
+        return FromHours(weather.DryBulbC, weather.WetBulbC, weather.DewPointC, weather.EnthalpyJPerKg, weather.Site.SitePressurePa);
+    }
+
+    /// <summary>Computes design conditions from hourly columns of equal length at a site pressure, Pa.</summary>
+    public static DesignConditions FromHours(double[] dryBulbC, double[] wetBulbC, double[] dewPointC, double[] enthalpyJPerKg, double sitePressurePa)
     {
         int n = dryBulbC.Length;
-        if (n == 0 || wetBulbC.Length != n || dewPointC.Length != n || humidityRatio.Length != n)
+        if (n == 0 || wetBulbC.Length != n || dewPointC.Length != n || enthalpyJPerKg.Length != n)
         {
             throw new ArgumentException("the hourly columns must be non-empty and of equal length");
         }
 
-        var db = (double[])dryBulbC.Clone();
-        Array.Sort(db);
-        var dp = (double[])dewPointC.Clone();
-        Array.Sort(dp);
+        var db = Sorted(dryBulbC);
+        var dp = Sorted(dewPointC);
+        var h = Sorted(enthalpyJPerKg);
         double Q(double[] sorted, double tau) => SortedArrayStatistics.QuantileCustom(sorted, tau, Definition);
 
         CoolingDesignPoint Cool(double percent)
         {
             double t = Q(db, 1 - percent / 100);
-            var (mean, count) = CoincidentMean(dryBulbC, t, wetBulbC);
-            return new CoolingDesignPoint(percent, t, mean, count);
+            var hours = CoincidentHours.Around(dryBulbC, t);
+            return new CoolingDesignPoint(percent, t, hours.MeanOf(dryBulbC, wetBulbC), hours.Count);
         }
 
         DehumidificationDesignPoint Dehum(double percent)
         {
             double d = Q(dp, 1 - percent / 100);
-            var (mdb, count) = CoincidentMean(dewPointC, d, dryBulbC);
-            var (mw, _) = CoincidentMean(dewPointC, d, humidityRatio);
-            return new DehumidificationDesignPoint(percent, d, mw, mdb, count);
+            var hours = CoincidentHours.Around(dewPointC, d);
+            return new DehumidificationDesignPoint(percent, d, MoistAir.HumidityRatioFromDewPoint(d, sitePressurePa), hours.MeanOf(dewPointC, dryBulbC), hours.Count);
+        }
+
+        EnthalpyDesignPoint Enth(double percent)
+        {
+            double e = Q(h, 1 - percent / 100);
+            var hours = CoincidentHours.Around(enthalpyJPerKg, e);
+            return new EnthalpyDesignPoint(percent, e, hours.MeanOf(enthalpyJPerKg, dryBulbC), hours.Count);
         }
 
         return new DesignConditions
@@ -82,23 +95,14 @@ public sealed record DesignConditions
             Heating990DryBulbC = Q(db, 0.01),
             Cooling = [Cool(0.4), Cool(1.0), Cool(2.0)],
             Dehumidification = [Dehum(0.4), Dehum(1.0)],
+            Enthalpy = [Enth(0.4), Enth(1.0)],
         };
     }
 
-    /// <summary>Mean of <paramref name="values"/> over the hours whose <paramref name="key"/> lies within the window of <paramref name="design"/>.</summary>
-    private static (double Mean, int Count) CoincidentMean(double[] key, double design, double[] values)
+    private static double[] Sorted(double[] values)
     {
-        double sum = 0;
-        int count = 0;
-        for (int i = 0; i < key.Length; i++)
-        {
-            if (Math.Abs(key[i] - design) <= CoincidenceWindowK + 1e-9)
-            {
-                sum += values[i];
-                count++;
-            }
-        }
-
-        return (count > 0 ? sum / count : double.NaN, count);
+        var copy = (double[])values.Clone();
+        Array.Sort(copy);
+        return copy;
     }
 }

@@ -8,7 +8,7 @@ namespace BinEnergy.Core.Loads;
 /// <summary>
 /// Outdoor-air load rates at the record's design conditions (DESIGN 7.4), with the states at
 /// the site pressure: heating at the 99.6 % dry-bulb with the mean coincident humidity ratio of
-/// the hours within <see cref="DesignConditions.CoincidenceWindowK"/> of it; cooling at the
+/// its coincident hours (<see cref="CoincidentHours"/>); cooling at the
 /// 0.4 % dry-bulb with its mean coincident wet-bulb (W from eq. 33 or 35); dehumidification at
 /// the 0.4 % dew point (W from the dew point, eq. 20) with its mean coincident dry-bulb.
 /// </summary>
@@ -44,8 +44,7 @@ internal static class DesignPeakLoads
             Peak("Heating 99.6 % dry-bulb", "heating_99_6", th, heatingW),
             Peak("Cooling 0.4 % dry-bulb, MCWB", "cooling_0_4", tc, coolW),
             Peak("Dehumidification 0.4 % dew point, MCDB", "dehumidification_0_4", dehumT, dehumW),
-            DesignConditions.QuantileMethod + FormattableString.Invariant(
-                $"; coincident means over hours within {DesignConditions.CoincidenceWindowK} K of the design value"));
+            DesignConditions.Basis);
     }
 
     /// <summary>
@@ -59,22 +58,10 @@ internal static class DesignPeakLoads
         return wetBulbC <= dryAirWetBulb ? 0.0 : MoistAir.HumidityRatioFromWetBulb(dryBulbC, Math.Min(wetBulbC, dryBulbC), pressurePa);
     }
 
-    /// <summary>Mean humidity ratio of the hours within the coincidence window of a dry-bulb, capped at saturation at it.</summary>
+    /// <summary>Mean humidity ratio of the coincident hours of a dry-bulb, capped at saturation at it.</summary>
     private static double CoincidentHumidityRatio(HourlyWeather weather, double dryBulbC, double pressurePa)
     {
-        double sum = 0;
-        int count = 0;
-        var t = weather.DryBulbC;
-        for (int i = 0; i < t.Length; i++)
-        {
-            if (Math.Abs(t[i] - dryBulbC) <= DesignConditions.CoincidenceWindowK + 1e-9)
-            {
-                sum += weather.HumidityRatio[i];
-                count++;
-            }
-        }
-
-        double w = count > 0 ? sum / count : 0.0;
+        double w = CoincidentHours.Around(weather.DryBulbC, dryBulbC).MeanOf(weather.DryBulbC, weather.HumidityRatio);
         return Math.Min(w, Saturation.HumidityRatio(dryBulbC, pressurePa));
     }
 }

@@ -21,4 +21,7 @@ public sealed record StudyDefinition(
 {
     /// <summary>The method of the headline figures (<c>[study] headline_method</c>, default hourly).</summary>
     public Loads.IntegrationMethod HeadlineMethod { get; init; } = Loads.IntegrationMethod.Hourly;
+
+    /// <summary>How each climate's degree-days are counted (<c>[study] degree_days</c>, default daily-mean).</summary>
+    public Climate.DegreeDayMethod DegreeDayMethod { get; init; } = Climate.DegreeDayMethod.DailyMean;
 }

@@ -88,7 +88,8 @@ public static class StudyFileReader
             }
 
             Loads.IntegrationMethods.TryParse(study.Text("headline_method") ?? "hourly", out var headline);
-            return new StudyDefinition(file, name, units, currency, hash, climates, variants) { HeadlineMethod = headline };
+            Climate.DegreeDayMethods.TryParse(study.Text("degree_days") ?? "daily-mean", out var degreeDays);
+            return new StudyDefinition(file, name, units, currency, hash, climates, variants) { HeadlineMethod = headline, DegreeDayMethod = degreeDays };
         }
 
         private void CheckTables(List<TomlEntry> entries)

@@ -31,6 +31,8 @@ internal static class StudySchema
                 "Where the bin method evaluates each bin: the mean dry-bulb of its ventilated hours, or its midpoint (midpoint or mid: the classic method)."),
             Choice("headline_method", ["hourly", "joint-bin", "bin"], "hourly",
                 "The method of the headline figures (summary, report, cost and carbon, comparison charts); the others are shown beside it."),
+            Choice("degree_days", ["daily-mean", "hourly", "max-min"], "daily-mean",
+                "How each climate's degree-days are counted: from daily mean temperatures (as published), degree-hours / 24, or daily (max + min) / 2."),
             Text("currency", "Currency code of the prices, used in the cost column names (cost_usd).", "usd"),
         ], false, "The study's name, display units, bin width and bin evaluation point."),
 

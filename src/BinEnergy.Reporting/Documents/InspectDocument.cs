@@ -47,28 +47,44 @@ public static class InspectDocument
             .Number("drybulb_min", u.Temperature, "Dry-bulb, lowest", c => c.MinDryBulbC)
             .Number("drybulb_mean", u.Temperature, "Dry-bulb, mean", c => c.MeanDryBulbC)
             .Number("drybulb_max", u.Temperature, "Dry-bulb, highest", c => c.MaxDryBulbC)
+            .Text("degree_day_method", "Degree-day method", c => DegreeDayMethods.Name(c.DegreeDayMethod))
             .Number("degree_day_base", u.Temperature, "Degree-day base", c => c.DegreeDayBaseC)
             .Number("heating_degree_days", u.DegreeDays, "Heating degree-days", c => c.HeatingKDays)
             .Number("cooling_degree_days", u.DegreeDays, "Cooling degree-days", c => c.CoolingKDays)
-            .Fill(new ResultTable("climate") { Title = "Dry-bulb and degree-days (from the hours)", Layout = TableLayout.Record }, [climate]));
+            .Fill(new ResultTable("climate") { Title = "Dry-bulb and degree-days", Layout = TableLayout.Record, Notes = { "Degree-days " + DegreeDayMethods.Describe(climate.DegreeDayMethod) + "; --degree-days chooses the method." } }, [climate]));
 
         var curve = climate.Curve;
         doc.Add(new ColumnSet<int>()
             .Number("base", u.Temperature.WithFormat("0.#"), "Base", i => curve.BasesC[i])
             .Number("heating", u.DegreeDays, "Heating", i => curve.HeatingKDays[i])
             .Number("cooling", u.DegreeDays, "Cooling", i => curve.CoolingKDays[i])
-            .Fill(new ResultTable("degree_day_curve") { Title = "Degree-days by base (balance point)", TerminalEvery = u.DegreeDayCurveTerminalStep }, Enumerable.Range(0, curve.BasesC.Length)));
+            .Fill(new ResultTable("degree_day_curve") { Title = "Degree-days by base (balance point), " + DegreeDayMethods.Describe(curve.Method), TerminalEvery = u.DegreeDayCurveTerminalStep }, Enumerable.Range(0, curve.BasesC.Length)));
 
         var d = climate.Design;
         var design = new List<DesignRow>
         {
-            new("heating_99_6", "Heating 99.6 % dry-bulb", d.Heating996DryBulbC, double.NaN, double.NaN, double.NaN, double.NaN, 0),
-            new("heating_99", "Heating 99 % dry-bulb", d.Heating990DryBulbC, double.NaN, double.NaN, double.NaN, double.NaN, 0),
+            new("heating_99_6", "Heating 99.6 % dry-bulb") { DryBulbC = d.Heating996DryBulbC },
+            new("heating_99", "Heating 99 % dry-bulb") { DryBulbC = d.Heating990DryBulbC },
         };
-        design.AddRange(d.Cooling.Select(c => new DesignRow(Key("cooling", c.AnnualPercent), Inv($"Cooling {c.AnnualPercent:0.#} % dry-bulb / MCWB"),
-            c.DryBulbC, c.MeanCoincidentWetBulbC, double.NaN, double.NaN, double.NaN, c.CoincidentHours)));
-        design.AddRange(d.Dehumidification.Select(h => new DesignRow(Key("dehumidification", h.AnnualPercent), Inv($"Dehumidification {h.AnnualPercent:0.#} % dew point / MCDB"),
-            double.NaN, double.NaN, h.DewPointC, h.HumidityRatio, h.MeanCoincidentDryBulbC, h.CoincidentHours)));
+        design.AddRange(d.Cooling.Select(c => new DesignRow(Key("cooling", c.AnnualPercent), Inv($"Cooling {c.AnnualPercent:0.#} % dry-bulb / MCWB"))
+        {
+            DryBulbC = c.DryBulbC,
+            WetBulbC = c.MeanCoincidentWetBulbC,
+            Hours = c.CoincidentHours,
+        }));
+        design.AddRange(d.Dehumidification.Select(h => new DesignRow(Key("dehumidification", h.AnnualPercent), Inv($"Dehumidification {h.AnnualPercent:0.#} % dew point / MCDB"))
+        {
+            DewPointC = h.DewPointC,
+            HumidityRatio = h.HumidityRatio,
+            MeanCoincidentDryBulbC = h.MeanCoincidentDryBulbC,
+            Hours = h.CoincidentHours,
+        }));
+        design.AddRange(d.Enthalpy.Select(e => new DesignRow(Key("enthalpy", e.AnnualPercent), Inv($"Enthalpy {e.AnnualPercent:0.#} % / MCDB"))
+        {
+            EnthalpyJPerKg = e.EnthalpyJPerKg,
+            MeanCoincidentDryBulbC = e.MeanCoincidentDryBulbC,
+            Hours = e.CoincidentHours,
+        }));
         var table = new ColumnSet<DesignRow>()
             .Text("condition", "Key", r => r.Key, detail: true)
             .Text("label", "Condition", r => r.Label)
@@ -76,11 +92,13 @@ public static class InspectDocument
             .Number("mean_coincident_wetbulb", u.Temperature, "MCWB", r => r.WetBulbC)
             .Number("dewpoint", u.Temperature, "Dew point", r => r.DewPointC)
             .Number("humidity_ratio", u.Moisture, "Humidity ratio", r => r.HumidityRatio)
+            .Number("enthalpy", u.Enthalpy, "Enthalpy", r => r.EnthalpyJPerKg)
             .Number("mean_coincident_drybulb", u.Temperature, "MCDB", r => r.MeanCoincidentDryBulbC)
             .Number("coincident_hours", DisplayUnit.Count, "Hours averaged", r => r.Hours > 0 ? r.Hours : double.NaN)
             .Fill(new ResultTable("design") { Title = "Design conditions from this record", Layout = TableLayout.Keyed, KeyColumn = "condition" }, design);
         table.Notes.Add("Percentiles: " + DesignConditions.QuantileMethod + ".");
-        table.Notes.Add(Inv($"Coincident means over the hours within {u.TemperatureDifference.FromSi(DesignConditions.CoincidenceWindowK):0.##} {u.TemperatureDifference.Symbol} of the design value."));
+        table.Notes.Add(char.ToUpperInvariant(CoincidentHours.Definition[0]) + CoincidentHours.Definition[1..] + ".");
+        table.Notes.Add("Dehumidification humidity ratio: at the design dew point and the site pressure.");
         doc.Add(table);
 
         var q = weather.Quality;
@@ -103,5 +121,20 @@ public static class InspectDocument
 
     private static string Inv(FormattableString s) => s.ToString(CultureInfo.InvariantCulture);
 
-    private sealed record DesignRow(string Key, string Label, double DryBulbC, double WetBulbC, double DewPointC, double HumidityRatio, double MeanCoincidentDryBulbC, int Hours);
+    private sealed record DesignRow(string Key, string Label)
+    {
+        public double DryBulbC { get; init; } = double.NaN;
+
+        public double WetBulbC { get; init; } = double.NaN;
+
+        public double DewPointC { get; init; } = double.NaN;
+
+        public double HumidityRatio { get; init; } = double.NaN;
+
+        public double EnthalpyJPerKg { get; init; } = double.NaN;
+
+        public double MeanCoincidentDryBulbC { get; init; } = double.NaN;
+
+        public int Hours { get; init; }
+    }
 }

@@ -151,8 +151,14 @@ public static class StudyReport
             return $"{g.Key} ({g.First().Weather.Count} hours): {counts}";
         }).ToList();
 
+        var climateTable = summary.Table("climates");
         var sections = new List<ReportSection>
         {
+            new("Climates",
+            [
+                Table(climateTable, "Each climate's record: site, air density and sensible factor, degree-days and design conditions"),
+                .. climateTable.Notes.Select(n => new ReportParagraph(n)),
+            ]),
             new($"Annual outdoor-air loads, cost and carbon ({IntegrationMethods.Label(headline)})",
             [
                 Table(summary.Table("headline"), $"Per climate and variant, {IntegrationMethods.Label(headline)} (the headline method)"),

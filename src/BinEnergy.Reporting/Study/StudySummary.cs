@@ -1,3 +1,4 @@
+using BinEnergy.Core.Climate;
 using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Study;
@@ -34,6 +35,35 @@ public static class StudySummary
             .Integer("climates", "Climates", r => r.Study.Climates.Count)
             .Integer("variants", "Variants", r => r.Study.Variants.Count)
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Layout = TableLayout.Record, ShowInTerminal = false }, [run]));
+
+        var climates = run.Cases.GroupBy(c => c.Case.Climate.Name)
+            .Select(g => (Case: g.First(), Climate: ClimateSummary.Of(g.First().Weather, run.Study.DegreeDayMethod, u.DegreeDayBaseC, u.DegreeDayCurveBasesC)))
+            .ToList();
+        doc.Add(new ColumnSet<(StudyCaseResult Case, ClimateSummary Climate)>()
+            .Text("climate", "Climate", x => x.Case.Case.Climate.Name)
+            .Text("site", "Site in the file", x => x.Case.Weather.Site.Name, detail: true)
+            .Integer("hours_in_record", "Hours", x => x.Case.Weather.Count, detail: true)
+            .Number("elevation", u.Length, "Elevation", x => x.Case.Weather.Site.ElevationM ?? double.NaN)
+            .Number("site_pressure", u.Pressure, "Site pressure", x => x.Case.Weather.Site.SitePressurePa)
+            .Number("dry_air_density", u.Density, "Dry-air density", x => x.Case.OutdoorAir.Assumptions.DryAirDensity)
+            .Number("site_sensible_factor", u.SensibleFactor, "Sensible factor", x => x.Case.OutdoorAir.Assumptions.Factors.SensibleSi)
+            .Text("degree_day_method", "Degree-days", x => DegreeDayMethods.Name(x.Climate.DegreeDayMethod), detail: true)
+            .Number("heating_degree_days", u.DegreeDays, "HDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.Climate.HeatingKDays)
+            .Number("cooling_degree_days", u.DegreeDays, "CDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.Climate.CoolingKDays)
+            .Number("heating_99_6_drybulb", u.Temperature, "Heating 99.6 %", x => x.Climate.Design.Heating996DryBulbC)
+            .Number("cooling_0_4_drybulb", u.Temperature, "Cooling 0.4 %", x => x.Climate.Design.Cooling[0].DryBulbC)
+            .Number("cooling_0_4_mcwb", u.Temperature, "MCWB", x => x.Climate.Design.Cooling[0].MeanCoincidentWetBulbC)
+            .Number("dehumidification_0_4_dewpoint", u.Temperature, "Dew point 0.4 %", x => x.Climate.Design.Dehumidification[0].DewPointC)
+            .Fill(new ResultTable("climates")
+            {
+                Title = "Climates: the site, degree-days and design conditions of each record",
+                ShowInTerminal = false,
+                Notes =
+                {
+                    "Degree-days " + DegreeDayMethods.Describe(run.Study.DegreeDayMethod) + " ([study] degree_days), base " + DisplayUnits.Text(u.Temperature, u.DegreeDayBaseC) + ".",
+                    "Design conditions from each record: " + DesignConditions.Basis + ".",
+                },
+            }, climates));
 
         doc.Add(new ColumnSet<StudyCaseResult>()
             .Add(StudyTables.CaseColumns, c => c)

@@ -43,7 +43,7 @@ public sealed class WeatherCommandsTests
         Assert.Equal(201 / 0.3048, root.GetProperty("elevation_ft").GetDouble(), 6); // header elevation 201 m in ft
         Assert.InRange(climate.GetProperty("heating_degree_days_f_day").GetDouble(), 5_800, 7_200); // about 6,500 F-day (recalled from memory)
         var design = root.GetProperty("design");
-        foreach (var key in new[] { "heating_99_6", "heating_99", "cooling_0_4", "cooling_1", "cooling_2", "dehumidification_0_4", "dehumidification_1" })
+        foreach (var key in new[] { "heating_99_6", "heating_99", "cooling_0_4", "cooling_1", "cooling_2", "dehumidification_0_4", "dehumidification_1", "enthalpy_0_4", "enthalpy_1" })
         {
             Assert.True(design.TryGetProperty(key, out _), key);
         }
@@ -51,6 +51,42 @@ public sealed class WeatherCommandsTests
         Assert.True(design.GetProperty("cooling_0_4").GetProperty("drybulb_f").GetDouble() > design.GetProperty("cooling_0_4").GetProperty("mean_coincident_wetbulb_f").GetDouble());
         Assert.Equal(JsonValueKind.Object, root.GetProperty("repairs").ValueKind);
         Assert.Equal(41, root.GetProperty("degree_day_curve").GetArrayLength());
+    }
+
+    [Fact]
+    public void InspectJson_NamesTheDegreeDayMethod_AndEachMethodGivesItsOwnFigures()
+    {
+        // O'Hare's typical year, base 65 F: from daily means 6,325 / 842 F-day, degree-hours / 24 6,497 / 1,014,
+        // daily (max + min) / 2 6,398 / 830 (the definitions, written out in Climate/RecordDesignConditionsTests).
+        var expected = new Dictionary<string, (double Hdd, double Cdd)> { ["daily-mean"] = (6325, 842), ["hourly"] = (6497, 1014), ["max-min"] = (6398, 830) };
+        foreach (var (method, (hdd, cdd)) in expected)
+        {
+            string[] args = method == "daily-mean"
+                ? ["inspect", TestData.Open("725300TYA.CSV"), "--map", "tmy3", "--json"]
+                : ["inspect", TestData.Open("725300TYA.CSV"), "--map", "tmy3", "--json", "--degree-days", method];
+            var (code, output, _) = Run(args);
+            Assert.Equal(0, code);
+            using var doc = JsonDocument.Parse(output);
+            var climate = doc.RootElement.GetProperty("climate");
+            Assert.Equal(method, climate.GetProperty("degree_day_method").GetString());
+            Assert.Equal(hdd, climate.GetProperty("heating_degree_days_f_day").GetDouble(), 0);
+            Assert.Equal(cdd, climate.GetProperty("cooling_degree_days_f_day").GetDouble(), 0);
+        }
+
+        var (bad, _, error) = Run("inspect", TestData.Open("725300TYA.CSV"), "--map", "tmy3", "--degree-days", "daily");
+        Assert.Equal(2, bad);
+        Assert.Contains("--degree-days", error, StringComparison.Ordinal);
+        Assert.Contains("daily-mean", error, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void InspectText_NamesTheCoincidentHoursDefinition_AndShowsTheEnthalpyPoints()
+    {
+        var (code, output, _) = Run("inspect", TestData.Open("725300TYA.CSV"), "--map", "tmy3", "--format", "tsv");
+        Assert.Equal(0, code);
+        Assert.Contains("data level nearest the design value", output, StringComparison.Ordinal);
+        Assert.Contains("Enthalpy 0.4 % / MCDB", output, StringComparison.Ordinal);
+        Assert.Contains("from daily mean temperatures", output, StringComparison.Ordinal);
     }
 
     [Fact]

@@ -439,6 +439,34 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void DegreeDayMethod_FromTheStudyFile_IsUsedAndNamedInSummaryAndReport()
+    {
+        string out1 = Path.Combine(folder, "out-degree-days");
+        string text = ExampleStudy.Text.Replace("bin_width_f = 5", "bin_width_f = 5\ndegree_days = \"max-min\"", StringComparison.Ordinal);
+        string study = StudyPath(text);
+        var (code, _, err) = Cli("run", study, "--out", out1);
+        Assert.True(code == 0, err);
+        using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
+        var climates = summary.RootElement.GetProperty("climates").EnumerateArray().ToList();
+        Assert.NotEmpty(climates);
+        foreach (var c in climates)
+        {
+            Assert.Equal("max-min", c.GetProperty("degree_day_method").GetString());
+            Assert.Equal("harbor", c.GetProperty("climate").GetString());
+            var weather = WeatherReader.Read(Path.Combine(folder, "harbor.csv"));
+
+            // The definition: sum over days of max(0, 65 F - (max + min) / 2), written out here.
+            double hdd = weather.Times.Select((t, i) => (t.Date, T: weather.DryBulbC[i] * 1.8 + 32)).GroupBy(x => x.Date)
+                .Sum(g => Math.Max(0, 65 - ((g.Max(x => x.T) + g.Min(x => x.T)) / 2)) * g.Count() / 24.0);
+            Assert.Equal(hdd, c.GetProperty("heating_degree_days_f_day").GetDouble(), 6);
+        }
+
+        string report = File.ReadAllText(Path.Combine(out1, "report.html"));
+        Assert.Contains("Climates", report, StringComparison.Ordinal);
+        Assert.Contains("from daily (max + min) / 2 temperatures", report, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void MultiYearRecord_GivesEachYear_TheMeanOfTheCompleteYearsAsHeadline_AndTheSpread()
     {
         // Three invented calendar years 2017-2019 and 500 hours of 2020 (a partial last year), a warmer trend year to year.

@@ -63,8 +63,8 @@ public class SampleReadBackTests
         _ = seed;
         var weather = WeatherReader.Read(SampleClimates.HourlyPath(name));
         double baseC = Temperature.FromFahrenheit(65).Celsius;
-        double hdd = DegreeDays.Heating(weather.DryBulbC, baseC) * 1.8;
-        double cdd = DegreeDays.Cooling(weather.DryBulbC, baseC) * 1.8;
+        double hdd = DegreeDaySeries.Of(weather, DegreeDayMethod.Hourly).Heating(baseC) * 1.8;
+        double cdd = DegreeDaySeries.Of(weather, DegreeDayMethod.Hourly).Cooling(baseC) * 1.8;
         var design = DesignConditions.FromRecord(weather);
         double F(double c) => Temperature.FromCelsius(c).Fahrenheit;
         var values = new[] { hdd, cdd, F(design.Heating996DryBulbC), F(design.Cooling[0].DryBulbC), F(design.Cooling[0].MeanCoincidentWetBulbC) };

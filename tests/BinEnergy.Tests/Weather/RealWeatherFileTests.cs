@@ -207,8 +207,8 @@ public sealed class RealWeatherFileTests
 
         var w = Read(name);
         double baseC = (65 - 32) / 1.8;
-        Assert.Equal((double)(hdd / 24m), DegreeDays.Heating(w.DryBulbC, baseC) * 1.8, 6);
-        Assert.Equal((double)(cdd / 24m), DegreeDays.Cooling(w.DryBulbC, baseC) * 1.8, 6);
+        Assert.Equal((double)(hdd / 24m), DegreeDaySeries.Of(w, DegreeDayMethod.Hourly).Heating(baseC) * 1.8, 6);
+        Assert.Equal((double)(cdd / 24m), DegreeDaySeries.Of(w, DegreeDayMethod.Hourly).Cooling(baseC) * 1.8, 6);
 
         // Independent percentile: Hyndman and Fan definition 7 written out, h = (n - 1) p.
         var sorted = raw.DryBulb.Order().ToArray();
@@ -231,7 +231,7 @@ public sealed class RealWeatherFileTests
     public void Chicago_AgreesWithPublishedClimateFigures()
     {
         var w = Read("725300TYA.CSV");
-        double hddF = DegreeDays.Heating(w.DryBulbC, (65 - 32) / 1.8) * 1.8;
+        double hddF = DegreeDaySeries.Of(w, DegreeDayMethod.DailyMean).Heating((65 - 32) / 1.8) * 1.8;
         Assert.InRange(hddF, 6_500 * 0.9, 6_500 * 1.1); // Chicago O'Hare normal HDD65 about 6,500 F-day (NOAA 1981-2010 normals; recalled from memory)
         var d = DesignConditions.FromRecord(w);
         double F(double c) => c * 1.8 + 32;
