@@ -62,13 +62,13 @@ public sealed class WeatherDataException : InputDataException
 
         if (column is not null)
         {
-            sb.Append(", column '").Append(column).Append('\'');
+            sb.Append(", column '").Append(FileExcerpt.Of(column)).Append('\'');
         }
 
         sb.Append(": ").Append(problem);
         if (value is not null)
         {
-            sb.Append(" (value '").Append(value.Length > 40 ? value[..40] + "..." : value).Append("')");
+            sb.Append(" (value '").Append(FileExcerpt.Of(value)).Append("')");
         }
 
         sb.Append(". ").Append(fix);

@@ -157,7 +157,7 @@ internal static class WeatherFileParser
             if (other is char o)
             {
                 throw new WeatherDataException(WeatherErrorKind.WrongSeparator, file,
-                    $"the column names are separated by '{(o == '\t' ? "tab" : o.ToString())}', not by '{sep}'",
+                    $"the column names are separated by '{(o == '\t' ? "tab" : FileExcerpt.Of(o.ToString()))}', not by '{sep}'",
                     map is null ? "Save the file with commas between fields and a dot as the decimal separator (the open layout is comma-separated)"
                                 : "Set separator = \"" + (o == '\t' ? "\\t" : o.ToString()) + "\" in the column map, or save the file comma-separated",
                     line: headerLine, value: headerText);
@@ -282,7 +282,7 @@ internal static class WeatherFileParser
         {
             if (metadata.ContainsKey(key))
             {
-                throw new WeatherDataException(WeatherErrorKind.BadMetadata, file, $"the metadata key '{key}' is given twice", "Keep one of the two lines", line: line);
+                throw new WeatherDataException(WeatherErrorKind.BadMetadata, file, $"the metadata key '{FileExcerpt.Of(key)}' is given twice", "Keep one of the two lines", line: line);
             }
 
             metadata[key] = (body[(colon + 1)..].Trim(), line);
@@ -667,14 +667,14 @@ internal static class WeatherFileParser
 
             if (columns.TryGetValue(qu.Q, out var existing))
             {
-                throw new WeatherDataException(WeatherErrorKind.DuplicateColumn, file, $"the columns '{existing.Name}' and '{h}' both give the {Describe(qu.Q)}",
+                throw new WeatherDataException(WeatherErrorKind.DuplicateColumn, file, $"the columns '{FileExcerpt.Of(existing.Name)}' and '{FileExcerpt.Of(h)}' both give the {Describe(qu.Q)}",
                     "Keep one of them", line: headerLine, column: h);
             }
 
             columns[qu.Q] = new ColumnSpec(h, qu.Unit);
         }
 
-        string found = headers.Length == 0 ? "none" : string.Join(", ", headers.Select(x => "'" + x + "'"));
+        string found = FileExcerpt.List(headers);
         string otherLayout = "; if the file comes from another source, read it with a column map (--map tmy3, --map pvgis or a map file)";
         if (!hasTime)
         {
@@ -729,7 +729,7 @@ internal static class WeatherFileParser
         if (idx < 0)
         {
             throw new WeatherDataException(kind, file, $"the {what} column '{name}' named by the {map.Source} is not in the header",
-                "Check that this file has the layout the map describes (columns found: " + string.Join(", ", headers.Take(12).Select(h => "'" + h + "'")) + (headers.Length > 12 ? ", ..." : "") + ")",
+                "Check that this file has the layout the map describes (columns found: " + FileExcerpt.List(headers) + ")",
                 line: headerLine, column: name);
         }
 
