@@ -58,4 +58,46 @@ public sealed class ResultTableTests : IDisposable
         Assert.True(File.Exists(Path.Combine(target, "tables", "annual.csv")));
         Assert.Throws<OutputFolderException>(() => OutputFolder.Begin(target, force: false));
     }
+
+    [Fact]
+    public void OutputFolder_ForceReplacesOnlyItsOwnMarkedFolder()
+    {
+        string target = Path.Combine(folder, "out");
+        using (var output = OutputFolder.Begin(target, force: false))
+        {
+            File.WriteAllText(output.PathFor("annual.csv"), "old\n");
+            output.Commit();
+        }
+
+        Assert.StartsWith("binenergy output folder", File.ReadAllText(Path.Combine(target, OutputFolder.MarkerName)), StringComparison.Ordinal);
+        using (var output = OutputFolder.Begin(target, force: true))
+        {
+            File.WriteAllText(output.PathFor("annual.csv"), "new\n");
+            output.Commit();
+        }
+
+        Assert.Equal("new\n", File.ReadAllText(Path.Combine(target, "annual.csv")));
+
+        // A project folder (a study file, no marker) is never replaced, and nothing in it is deleted.
+        string project = Path.Combine(folder, "proj");
+        Directory.CreateDirectory(project);
+        File.WriteAllText(Path.Combine(project, "study.toml"), "name = \"x\"\n");
+        var e = Assert.Throws<OutputFolderException>(() => OutputFolder.Begin(project, force: true));
+        Assert.Contains("nothing was deleted", e.Message, StringComparison.Ordinal);
+        Assert.True(File.Exists(Path.Combine(project, "study.toml")));
+        Assert.Equal(2, Directory.GetFileSystemEntries(folder).Length);
+    }
+
+    [Fact]
+    public void OutputFolder_ForceRefusesTheCurrentFolderAndItsParents()
+    {
+        string here = Directory.GetCurrentDirectory();
+        foreach (string target in new[] { ".", here, Path.GetDirectoryName(here)! })
+        {
+            int before = Directory.GetFileSystemEntries(here).Length;
+            var e = Assert.Throws<OutputFolderException>(() => OutputFolder.Begin(target, force: true));
+            Assert.Contains("current folder", e.Message, StringComparison.Ordinal);
+            Assert.Equal(before, Directory.GetFileSystemEntries(here).Length);
+        }
+    }
 }

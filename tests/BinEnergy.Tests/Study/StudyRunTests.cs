@@ -7,6 +7,7 @@ using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
+using BinEnergy.Reporting.Tables;
 using BinEnergy.Tests.Support;
 
 namespace BinEnergy.Tests.Study;
@@ -266,12 +267,19 @@ public sealed class StudyRunTests : IDisposable
         Assert.Equal(ExitCodes.BadInput, code);
         Assert.Contains("already exists and is not empty: add --force", err, StringComparison.Ordinal);
 
+        // --force does not replace a folder that no earlier run made (no marker file): nothing is deleted.
+        var (codeUnmarked, _, errUnmarked) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1, "--force");
+        Assert.Equal(ExitCodes.BadInput, codeUnmarked);
+        Assert.Contains("replaces only an output folder of an earlier run", errUnmarked, StringComparison.Ordinal);
+        Assert.Equal(["keep.txt"], Directory.GetFileSystemEntries(out1).Select(Path.GetFileName));
+        File.WriteAllText(Path.Combine(out1, OutputFolder.MarkerName), "binenergy output folder\n");
+
         // A study that fails while running (a schedule the engine rejects) leaves the folder untouched, even with --force.
         var (bad, _) = ExampleStudy.ReplaceLine("occupied = \"Mon-Fri", "occupied = \"Mon-Fry 07:00-19:00\"");
         var (code2, _, err2) = Cli("run", StudyPath(bad, "bad.toml"), "--out", out1, "--force");
         Assert.Equal(ExitCodes.BadInput, code2);
         Assert.Contains("key schedule.occupied", err2, StringComparison.Ordinal);
-        Assert.Equal(["keep.txt"], Directory.GetFileSystemEntries(out1).Select(Path.GetFileName));
+        Assert.Equal([OutputFolder.MarkerName, "keep.txt"], Directory.GetFileSystemEntries(out1).Select(Path.GetFileName).Order(StringComparer.Ordinal));
         Assert.Empty(Directory.GetDirectories(folder, ".out.partial-*"));
 
         // With --force a good run replaces it as a whole.
