@@ -32,11 +32,12 @@ public static class StudyReport
         double E(Energy e) => u.Energy.FromSi(e.Joules);
         var charts = new List<(string, RenderedChart)>();
 
+        var slugs = UniqueSlugs(run.Study.Climates.Select(c => c.Name).ToList());
         foreach (var climateCases in run.Cases.GroupBy(c => c.Case.Climate.Name))
         {
             var first = climateCases.First();
             string climate = climateCases.Key;
-            string slug = Slug(climate);
+            string slug = slugs[climate];
             string subject = $"{climate}, {first.Case.Variant.Name}";
             var bins = first.OutdoorAir.Bins;
 
@@ -247,6 +248,30 @@ public static class StudyReport
         }
 
         return values;
+    }
+
+    /// <summary>
+    /// File-name-safe forms of distinct names that are unique among themselves: names whose
+    /// <see cref="Slug"/> collides (<c>"A B"</c> and <c>"a-b"</c>, or two names without a Latin
+    /// letter, which both become <c>climate</c>) get <c>-2</c>, <c>-3</c>, ... in the order given,
+    /// so no chart overwrites another's file.
+    /// </summary>
+    public static IReadOnlyDictionary<string, string> UniqueSlugs(IReadOnlyList<string> names, string fallback = "climate")
+    {
+        var taken = new HashSet<string>(StringComparer.Ordinal);
+        var result = new Dictionary<string, string>(StringComparer.Ordinal);
+        foreach (string name in names.Distinct(StringComparer.Ordinal))
+        {
+            string slug = Slug(name, fallback);
+            for (int n = 2; !taken.Add(slug); n++)
+            {
+                slug = Slug(name, fallback) + "-" + n.ToString(System.Globalization.CultureInfo.InvariantCulture);
+            }
+
+            result[name] = slug;
+        }
+
+        return result;
     }
 
     /// <summary>A file-name-safe form of a name: lower case ASCII letters and digits, other runs to one dash.</summary>
