@@ -74,7 +74,8 @@ public sealed class RunCommand : Command<RunCommand.Settings>
 
         var runAt = DateTimeOffset.UtcNow;
         var tables = StudyOutputWriter.WriteAsync(run, folder, force, hourly,
-            extra: o => StudyReport.WriteInto(o, run, runAt), ct: cancellationToken).GetAwaiter().GetResult();
+            extra: o => StudyReport.WriteInto(o, run, runAt), ct: cancellationToken,
+            recovered: note => output.Error.WriteLine("binenergy: note: " + PrintableText.Of(note))).GetAwaiter().GetResult();
         foreach (var w in run.Warnings)
         {
             output.Error.WriteLine("warning: " + PrintableText.Of(w));

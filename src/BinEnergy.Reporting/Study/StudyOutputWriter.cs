@@ -12,10 +12,18 @@ public static class StudyOutputWriter
 {
     /// <summary>Writes the run into <paramref name="folder"/>; returns the tables written.</summary>
     /// <exception cref="OutputFolderException">The folder exists and is not empty, and <paramref name="force"/> is false.</exception>
+    /// <remarks>The study file, weather files and map files are the run's inputs: a folder holding one is refused. What the
+    /// folder recovered from an earlier, stopped run is passed to <paramref name="recovered"/>.</remarks>
     public static async Task<IReadOnlyList<ResultTable>> WriteAsync(StudyRunResult run, string folder, bool force, bool hourly,
-        Action<OutputFolder>? extra = null, CancellationToken ct = default)
+        Action<OutputFolder>? extra = null, CancellationToken ct = default, Action<string>? recovered = null)
     {
-        using var output = OutputFolder.Begin(folder, force);
+        var inputs = run.Study.Climates.SelectMany(c => c.Map is { } m && File.Exists(m) ? new[] { c.WeatherPath, m } : [c.WeatherPath]).Append(run.Study.File);
+        using var output = OutputFolder.Begin(folder, force, inputs);
+        foreach (string note in output.Recovered)
+        {
+            recovered?.Invoke(note);
+        }
+
         var tables = StudyTables.Build(run, hourly);
         var metadata = new Dictionary<string, string>
         {
