@@ -50,6 +50,11 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
         }
 
         string fullOut = Path.GetFullPath(outPath);
+        if (string.Equals(fullOut, Path.GetFullPath(monthly), StringComparison.Ordinal))
+        {
+            throw new UsageException("--out must differ from the --monthly input file (it would be overwritten)");
+        }
+
         string? folder = Path.GetDirectoryName(fullOut);
         if (folder is null || !Directory.Exists(folder))
         {

@@ -44,6 +44,17 @@ public sealed class SynthCommandTests : IDisposable
     }
 
     [Fact]
+    public void RefusesToOverwriteItsOwnInput_EvenWhenForced()
+    {
+        string monthly = Path.Combine(folder, "monthly-copy.csv");
+        File.Copy(Monthly, monthly);
+        var (code, _, stderr) = AirCommandTests.Run("synth", "--monthly", monthly, "--seed", "5", "--out", monthly, "--force");
+        Assert.Equal(2, code);
+        Assert.Contains("must differ from the --monthly input", stderr);
+        Assert.Equal(File.ReadAllText(Monthly), File.ReadAllText(monthly));
+    }
+
+    [Fact]
     public void BadMonthlyFile_ExitsThree_NamingFileAndLine_AndWritesNothing()
     {
         string monthly = Path.Combine(folder, "bad-monthly.csv");
