@@ -1,6 +1,7 @@
 using BinEnergy.Cli.Commands;
 using BinEnergy.Core.Errors;
 using BinEnergy.Core.Psychrometrics;
+using BinEnergy.Reporting.Output;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
@@ -43,36 +44,39 @@ public static class CliApp
         }
         catch (CommandParseException e)
         {
-            stderr.WriteLine($"binenergy: {(Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message))}");
+            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message));
             return ExitCodes.Usage;
         }
         catch (CommandRuntimeException e)
         {
-            stderr.WriteLine($"binenergy: {(Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message))}");
+            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message));
             return ExitCodes.Usage;
         }
         catch (UsageException e)
         {
-            stderr.WriteLine($"binenergy: {e.Message}");
+            Fail(stderr, e.Message);
             return ExitCodes.Usage;
         }
         catch (PsychrometricException e)
         {
-            stderr.WriteLine($"binenergy: {e.Reason}");
+            Fail(stderr, e.Reason);
             return ExitCodes.Usage;
         }
         catch (InputDataException e)
         {
-            stderr.WriteLine($"binenergy: {e.Message}");
+            Fail(stderr, e.Message);
             return ExitCodes.BadInput;
         }
         catch (Exception e)
         {
-            stderr.WriteLine($"binenergy: unexpected failure ({e.GetType().Name}): {e.Message}");
+            Fail(stderr, $"unexpected failure ({e.GetType().Name}): {e.Message}");
             stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
             return ExitCodes.Unexpected;
         }
     }
+
+    /// <summary>Writes an error line, with any control character from the user's files or arguments escaped (<see cref="PrintableText"/>).</summary>
+    private static void Fail(TextWriter stderr, string message) => stderr.WriteLine("binenergy: " + PrintableText.Of(message));
 
     /// <summary>The first exception of type <typeparamref name="T"/> in the chain of <paramref name="e"/>.</summary>
     private static T? Inner<T>(Exception e)

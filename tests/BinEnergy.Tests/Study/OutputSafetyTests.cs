@@ -129,4 +129,14 @@ public sealed class OutputSafetyTests : IDisposable
         Assert.DoesNotContain('\u001b', output);
         Assert.Contains("Harbor\\x1B[2J", output, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void ErrorMessages_EscapeControlCharacters()
+    {
+        // A file name with an ESC [2J (clear screen) sequence: the error names it, escaped.
+        var (code, _, err) = Cli("inspect", Path.Combine(folder, "missing\u001b[2J.csv"));
+        Assert.Equal(3, code);
+        Assert.DoesNotContain('\u001b', err);
+        Assert.Contains("missing\\x1B[2J.csv", err, StringComparison.Ordinal);
+    }
 }
