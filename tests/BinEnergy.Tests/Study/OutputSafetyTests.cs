@@ -139,4 +139,22 @@ public sealed class OutputSafetyTests : IDisposable
         Assert.DoesNotContain('\u001b', err);
         Assert.Contains("missing\\x1B[2J.csv", err, StringComparison.Ordinal);
     }
+
+    [Theory]
+    [InlineData("run")]
+    [InlineData("map")]
+    public void APasswordListGivenAsAStudyOrMap_IsRefusedWithoutQuotingIt(string asWhat)
+    {
+        // An invented password-list line: neither the study reader nor the column-map reader may print it back.
+        string path = Path.Combine(folder, "accounts.toml");
+        File.WriteAllText(path, "fenwarden:x:1042:1042:Fen Warden,,,:/home/fenwarden:/bin/bash\nmarshkeeper:x:1043:1043::/home/marshkeeper:/usr/sbin/nologin\n");
+        var (code, _, err) = asWhat == "run"
+            ? Cli("run", path, "--out", Path.Combine(folder, "never"))
+            : Cli("inspect", Path.Combine(folder, "harbor.csv"), "--map", path);
+        Assert.Equal(3, code);
+        Assert.Contains("accounts.toml, line 1", err, StringComparison.Ordinal);
+        Assert.DoesNotContain("/home/fenwarden", err, StringComparison.Ordinal);
+        Assert.DoesNotContain("/bin/bash", err, StringComparison.Ordinal);
+        Assert.False(Directory.Exists(Path.Combine(folder, "never")));
+    }
 }
