@@ -32,6 +32,7 @@ public static class CliApp
         app.Configure(config =>
         {
             config.SetApplicationName("binenergy");
+            config.SetApplicationVersion(Core.Study.StudyRunner.EngineVersion);
             config.ConfigureConsole(console);
             config.PropagateExceptions();
             config.Settings.StrictParsing = true;
