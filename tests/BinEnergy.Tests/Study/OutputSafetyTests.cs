@@ -1,6 +1,5 @@
 using System.Globalization;
 using System.Text.Json;
-using BinEnergy.Cli;
 using BinEnergy.Core.Weather;
 using BinEnergy.Reporting.Study;
 using BinEnergy.Tests.Support;
@@ -21,13 +20,7 @@ public sealed class OutputSafetyTests : IDisposable
 
     public void Dispose() => Directory.Delete(folder, recursive: true);
 
-    private static (int Code, string Out, string Err) Cli(params string[] args)
-    {
-        var stdout = new StringWriter();
-        var stderr = new StringWriter();
-        int code = CliApp.Run(args, stdout, stderr);
-        return (code, stdout.ToString(), stderr.ToString());
-    }
+    private static (int Code, string Out, string Err) Cli(params string[] args) => Tests.Cli.AirCommandTests.Run(args);
 
     private string Study(params string[] climateNames)
     {
