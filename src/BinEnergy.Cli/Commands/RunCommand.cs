@@ -17,7 +17,7 @@ public sealed class RunCommand : Command<RunCommand.Settings>
     public sealed class Settings : OutputSettings
     {
         [CommandArgument(0, "<STUDY>")]
-        [Description("The study file (TOML). Its [study] units govern the outputs.")]
+        [Description("The study file (TOML). Its [[study]] units govern the outputs.")]
         public string Study { get; init; } = string.Empty;
 
         [CommandOption("--out <DIR>")]
