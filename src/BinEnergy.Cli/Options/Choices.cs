@@ -19,11 +19,10 @@ internal static class Choices
         [typeof(VentilationOperation)] = ("--ventilate", "a ventilation period", new[] { ("occupied", VentilationOperation.Occupied), ("always", VentilationOperation.Always) }),
         [typeof(BinEvaluationPoint)] = ("--bin-point", "a bin evaluation point",
             new[] { ("mean", BinEvaluationPoint.MeanDryBulb), ("mid", BinEvaluationPoint.Midpoint), ("midpoint", BinEvaluationPoint.Midpoint) }),
-        [typeof(IntegrationMethod)] = ("--headline", "a method", new[] { ("hourly", IntegrationMethod.Hourly), ("joint-bin", IntegrationMethod.JointBin), ("bin", IntegrationMethod.Bin) }),
+        [typeof(IntegrationMethod)] = ("--headline", "a method", IntegrationMethods.All.Select(m => (IntegrationMethods.Name(m), m)).ToArray()),
         [typeof(DaylightSaving)] = ("--daylight-saving", "a daylight-saving rule",
             new[] { ("none", DaylightSaving.None), ("north-america", DaylightSaving.NorthAmerica), ("europe", DaylightSaving.Europe) }),
-        [typeof(DegreeDayMethod)] = ("--degree-days", "a degree-day method",
-            new[] { ("daily-mean", DegreeDayMethod.DailyMean), ("hourly", DegreeDayMethod.Hourly), ("max-min", DegreeDayMethod.MaxMin) }),
+        [typeof(DegreeDayMethod)] = ("--degree-days", "a degree-day method", DegreeDayMethods.All.Select(m => (DegreeDayMethods.Name(m), m)).ToArray()),
         [typeof(BinSplit)] = ("--by", "a split", new[] { ("month", BinSplit.Month), ("block", BinSplit.TimeOfDayBlock) }),
     };
 

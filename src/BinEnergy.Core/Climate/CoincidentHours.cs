@@ -27,17 +27,24 @@ public sealed record CoincidentHours(double LowKey, double HighKey, int Count)
     public const string Definition =
         "coincident means over the hours at the data level nearest the design value (both levels when it lies midway; widened one level each side until at least 5 hours)";
 
-    /// <summary>The coincident hours of <paramref name="design"/> in <paramref name="key"/> (any order, non-empty).</summary>
+    /// <summary>The coincident hours of <paramref name="design"/> in a key column (any order, non-empty).</summary>
     public static CoincidentHours Around(double[] key, double design)
     {
         ArgumentNullException.ThrowIfNull(key);
-        if (key.Length == 0)
-        {
-            throw new ArgumentException("the key column is empty", nameof(key));
-        }
-
         var sorted = (double[])key.Clone();
         Array.Sort(sorted);
+        return AroundSorted(sorted, design);
+    }
+
+    /// <summary>The coincident hours of <paramref name="design"/> in a key column already sorted ascending (non-empty), as the percentiles use it.</summary>
+    public static CoincidentHours AroundSorted(double[] sorted, double design)
+    {
+        ArgumentNullException.ThrowIfNull(sorted);
+        if (sorted.Length == 0)
+        {
+            throw new ArgumentException("the key column is empty", nameof(sorted));
+        }
+
         var levels = new List<double> { sorted[0] };
         foreach (double v in sorted)
         {

@@ -70,21 +70,21 @@ public sealed record DesignConditions
         CoolingDesignPoint Cool(double percent)
         {
             double t = Q(db, 1 - percent / 100);
-            var hours = CoincidentHours.Around(dryBulbC, t);
+            var hours = CoincidentHours.AroundSorted(db, t);
             return new CoolingDesignPoint(percent, t, hours.MeanOf(dryBulbC, wetBulbC), hours.Count);
         }
 
         DehumidificationDesignPoint Dehum(double percent)
         {
             double d = Q(dp, 1 - percent / 100);
-            var hours = CoincidentHours.Around(dewPointC, d);
+            var hours = CoincidentHours.AroundSorted(dp, d);
             return new DehumidificationDesignPoint(percent, d, MoistAir.HumidityRatioFromDewPoint(d, sitePressurePa), hours.MeanOf(dewPointC, dryBulbC), hours.Count);
         }
 
         EnthalpyDesignPoint Enth(double percent)
         {
             double e = Q(h, 1 - percent / 100);
-            var hours = CoincidentHours.Around(enthalpyJPerKg, e);
+            var hours = CoincidentHours.AroundSorted(h, e);
             return new EnthalpyDesignPoint(percent, e, hours.MeanOf(enthalpyJPerKg, dryBulbC), hours.Count);
         }
 
