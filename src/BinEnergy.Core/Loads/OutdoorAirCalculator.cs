@@ -105,6 +105,7 @@ public static class OutdoorAirCalculator
             Hours = hourly.Hours,
             HasPlant = plant is not null,
             Peaks = design is null ? null : DesignPeakLoads.Compute(weather, settings, design),
+            Design = design,
             Assumptions = engine.Assumptions(table.Scale, cells.HumidityScale, hourly.DensitySum, annual.Hourly.Loads.HoursVentilated),
             Warnings = Warnings(weather, settings, (int)annual.Hourly.Loads.HoursVentilated),
             Clamps = hourly.Clamps,

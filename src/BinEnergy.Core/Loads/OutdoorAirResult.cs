@@ -27,6 +27,9 @@ public sealed record OutdoorAirResult
     /// <summary>Peak load rates at the record's design conditions.</summary>
     public OutdoorAirPeaks? Peaks { get; init; }
 
+    /// <summary>The record's design conditions the peaks were computed at (null for an empty record).</summary>
+    public Climate.DesignConditions? Design { get; init; }
+
     /// <summary>The assumptions.</summary>
     public required OutdoorAirAssumptions Assumptions { get; init; }
 

@@ -37,9 +37,9 @@ public static class StudySummary
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Layout = TableLayout.Record, ShowInTerminal = false }, [run]));
 
         var climates = run.Cases.GroupBy(c => c.Case.Climate.Name)
-            .Select(g => (Case: g.First(), Climate: ClimateSummary.Of(g.First().Weather, run.Study.DegreeDayMethod, u.DegreeDayBaseC, u.DegreeDayCurveBasesC)))
+            .Select(g => (Case: g.First(), DegreeDays: DegreeDaysPerYear(g.First(), run.Study.DegreeDayMethod, u.DegreeDayBaseC), Design: g.First().OutdoorAir.Design!))
             .ToList();
-        doc.Add(new ColumnSet<(StudyCaseResult Case, ClimateSummary Climate)>()
+        doc.Add(new ColumnSet<(StudyCaseResult Case, (double Heating, double Cooling) DegreeDays, DesignConditions Design)>()
             .Text("climate", "Climate", x => x.Case.Case.Climate.Name)
             .Text("site", "Site in the file", x => x.Case.Weather.Site.Name, detail: true)
             .Integer("hours_in_record", "Hours", x => x.Case.Weather.Count, detail: true)
@@ -47,13 +47,13 @@ public static class StudySummary
             .Number("site_pressure", u.Pressure, "Site pressure", x => x.Case.Weather.Site.SitePressurePa)
             .Number("dry_air_density", u.Density, "Dry-air density", x => x.Case.OutdoorAir.Assumptions.DryAirDensity)
             .Number("site_sensible_factor", u.SensibleFactor, "Sensible factor", x => x.Case.OutdoorAir.Assumptions.Factors.SensibleSi)
-            .Text("degree_day_method", "Degree-days", x => DegreeDayMethods.Name(x.Climate.DegreeDayMethod), detail: true)
-            .Number("heating_degree_days", u.DegreeDays, "HDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.Climate.HeatingKDays)
-            .Number("cooling_degree_days", u.DegreeDays, "CDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.Climate.CoolingKDays)
-            .Number("heating_99_6_drybulb", u.Temperature, "Heating 99.6 %", x => x.Climate.Design.Heating996DryBulbC)
-            .Number("cooling_0_4_drybulb", u.Temperature, "Cooling 0.4 %", x => x.Climate.Design.Cooling[0].DryBulbC)
-            .Number("cooling_0_4_mcwb", u.Temperature, "MCWB", x => x.Climate.Design.Cooling[0].MeanCoincidentWetBulbC)
-            .Number("dehumidification_0_4_dewpoint", u.Temperature, "Dew point 0.4 %", x => x.Climate.Design.Dehumidification[0].DewPointC)
+            .Text("degree_day_method", "Degree-days", _ => DegreeDayMethods.Name(run.Study.DegreeDayMethod), detail: true)
+            .Number("heating_degree_days", u.DegreeDays, "HDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.DegreeDays.Heating)
+            .Number("cooling_degree_days", u.DegreeDays, "CDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.DegreeDays.Cooling)
+            .Number("heating_99_6_drybulb", u.Temperature, "Heating 99.6 %", x => x.Design.Heating996DryBulbC)
+            .Number("cooling_0_4_drybulb", u.Temperature, "Cooling 0.4 %", x => x.Design.Cooling[0].DryBulbC)
+            .Number("cooling_0_4_mcwb", u.Temperature, "MCWB", x => x.Design.Cooling[0].MeanCoincidentWetBulbC)
+            .Number("dehumidification_0_4_dewpoint", u.Temperature, "Dew point 0.4 %", x => x.Design.Dehumidification[0].DewPointC)
             .Fill(new ResultTable("climates")
             {
                 Title = "Climates: the site, degree-days and design conditions of each record",
@@ -61,7 +61,7 @@ public static class StudySummary
                 Notes =
                 {
                     "Degree-days " + DegreeDayMethods.Describe(run.Study.DegreeDayMethod) + " ([study] degree_days), base " + DisplayUnits.Text(u.Temperature, u.DegreeDayBaseC) + ".",
-                    "Design conditions from each record: " + DesignConditions.Basis + ".",
+                    "Design conditions from each record (a multi-year record: its complete years, and degree-days per complete year): " + DesignConditions.Basis + ".",
                 },
             }, climates));
 
@@ -116,6 +116,15 @@ public static class StudySummary
         doc.NoteAll(NoteKind.Warning, run.Warnings);
         doc.NoteAll(NoteKind.Caution, Cautions.OutdoorAir);
         return doc;
+    }
+
+    /// <summary>Heating and cooling degree-days of a case's record at a base, K-day: of the record, or the mean of a multi-year record's complete years.</summary>
+    private static (double Heating, double Cooling) DegreeDaysPerYear(StudyCaseResult c, DegreeDayMethod method, double baseC)
+    {
+        var complete = c.Years.Where(y => y.Year.Complete).ToList();
+        var spans = c.IsMultiYear && complete.Count > 0 ? complete.Select(y => c.Weather.Slice(y.Year.Start, y.Year.Hours)).ToList() : [c.Weather];
+        var series = spans.Select(w => DegreeDaySeries.Of(w, method)).ToList();
+        return (series.Average(d => d.Heating(baseC)), series.Average(d => d.Cooling(baseC)));
     }
 
     /// <summary>A figure's mean year and its lowest and highest complete year.</summary>

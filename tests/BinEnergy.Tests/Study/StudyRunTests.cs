@@ -510,6 +510,11 @@ public sealed class StudyRunTests : IDisposable
         using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
         var headline = summary.RootElement.GetProperty("headline").EnumerateArray().Single(c => c.GetProperty("variant").GetString() == "minimum");
         Assert.Equal(mean, headline.GetProperty("heating_kbtu").GetDouble(), 6);
+
+        // Degree-days per complete year (from daily means, the definition): the 3 x 365 whole days of 2017-2019, / 3.
+        double hddPerYear = Enumerable.Range(0, 3 * 365).Sum(d => Math.Max(0, 65 - (t.Skip(24 * d).Take(24).Average() * 1.8 + 32))) / 3;
+        var climate = summary.RootElement.GetProperty("climates").EnumerateArray().Single();
+        Assert.Equal(hddPerYear, climate.GetProperty("heating_degree_days_f_day").GetDouble(), 0);
         var spread = summary.RootElement.GetProperty("spread").EnumerateArray()
             .Single(r => r.GetProperty("variant").GetString() == "minimum" && r.GetProperty("figure").GetString() == "Heating");
         Assert.Equal(3, spread.GetProperty("years").GetInt32());
