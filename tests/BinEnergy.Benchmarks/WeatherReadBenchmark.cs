@@ -54,11 +54,28 @@ public class WeatherReadBenchmark
     [Benchmark]
     public int ParseIntoTable() => WeatherFileParser.Parse(openLayout, "chicago-open-layout.csv", null).Count;
 
-    /// <summary>The wet-bulb of every hour of the record (the costliest part of the full read), as the full read solves them.</summary>
+    /// <summary>The wet-bulb of every hour of the record (the costliest part of the full read), as the full read solves them (Newton).</summary>
     [Benchmark]
     public double WetBulbsOfRecord()
     {
-        HourlyStateBatchSolver.WetBulbsOfRecord(record.DryBulbC, record.HumidityRatio, record.PressurePa, record.DewPointC, wetBulbs);
+        for (int i = 0; i < record.Count; i++)
+        {
+            wetBulbs[i] = HourlyStateSolver.WetBulb(record.DryBulbC[i], record.HumidityRatio[i], record.PressurePa[i]);
+        }
+
+        return wetBulbs[^1];
+    }
+
+    /// <summary>The same wet-bulbs one hour at a time by the reference solver (MathNet Brent).</summary>
+    [Benchmark]
+    public double WetBulbsScalarReference()
+    {
+        for (int i = 0; i < record.Count; i++)
+        {
+            double t = record.DryBulbC[i], w = record.HumidityRatio[i], p = record.PressurePa[i];
+            wetBulbs[i] = w >= Saturation.HumidityRatio(t, p) ? t : MoistAir.WetBulb(t, w, p);
+        }
+
         return wetBulbs[^1];
     }
 

@@ -50,11 +50,15 @@ public sealed record DesignConditions
     public static DesignConditions FromRecord(HourlyWeather weather)
     {
         ArgumentNullException.ThrowIfNull(weather);
-        return FromHours(weather.DryBulbC, weather.WetBulbC, weather.DewPointC, weather.EnthalpyJPerKg, weather.Site.SitePressurePa);
+        return FromHours(weather.DryBulbC, weather.WetBulbC, weather.DewPointC, weather.EnthalpyJPerKg, weather.Site.SitePressurePa, weather.HumidityOver);
     }
 
-    /// <summary>Computes design conditions from hourly columns of equal length at a site pressure, Pa.</summary>
-    public static DesignConditions FromHours(double[] dryBulbC, double[] wetBulbC, double[] dewPointC, double[] enthalpyJPerKg, double sitePressurePa)
+    /// <summary>
+    /// Computes design conditions from hourly columns of equal length at a site pressure, Pa; the dew points are over
+    /// <paramref name="over"/> below 0 C (liquid water, the weather convention, by default).
+    /// </summary>
+    public static DesignConditions FromHours(double[] dryBulbC, double[] wetBulbC, double[] dewPointC, double[] enthalpyJPerKg, double sitePressurePa,
+        HumidityOver over = HumidityOver.Water)
     {
         int n = dryBulbC.Length;
         if (n == 0 || wetBulbC.Length != n || dewPointC.Length != n || enthalpyJPerKg.Length != n)
@@ -78,7 +82,7 @@ public sealed record DesignConditions
         {
             double d = Q(dp, 1 - percent / 100);
             var hours = CoincidentHours.AroundSorted(dp, d);
-            return new DehumidificationDesignPoint(percent, d, MoistAir.HumidityRatioFromDewPoint(d, sitePressurePa), hours.MeanOf(dewPointC, dryBulbC), hours.Count);
+            return new DehumidificationDesignPoint(percent, d, MoistAir.HumidityRatioFromDewPoint(d, sitePressurePa, over), hours.MeanOf(dewPointC, dryBulbC), hours.Count);
         }
 
         EnthalpyDesignPoint Enth(double percent)

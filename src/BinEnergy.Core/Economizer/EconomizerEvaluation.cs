@@ -147,7 +147,7 @@ public sealed class EconomizerEvaluation
             controls[c + 1] = settings.Controls[c];
         }
 
-        var run = new Run(model, controls, plant);
+        var run = new Run(model, controls, plant, weather.HumidityOver);
         int nc = controls.Length;
         int nb = bins.Rows.Count;
         var monthly = new ModeEnergySums[nc * 12];
@@ -170,7 +170,7 @@ public sealed class EconomizerEvaluation
             double w = stats.MeanHumidityRatio;
             double t = BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, stats);
             double h = stats.Hours > 0 ? MoistAir.Enthalpy(t, w) : double.NaN;
-            double dp = stats.Hours > 0 ? DewPointOf(w, p) : double.NaN;
+            double dp = stats.Hours > 0 ? DewPointOf(w, p, weather.HumidityOver) : double.NaN;
             rows[b] = new EconomizerBinRow(row.Index, row.Low, row.High, row.Mid, (int)stats.Hours, HumidityRatio.FromKilogramsPerKilogram(w),
                 SpecificEnthalpy.FromJoulesPerKilogram(h), Temperature.FromCelsius(dp))
             { EvaluatedAt = Temperature.FromCelsius(t) };
@@ -200,7 +200,8 @@ public sealed class EconomizerEvaluation
         return new EconomizerEvaluation(model, weather, occupiedHours, rows, results[0], results[1..], plant is not null);
     }
 
-    private static double DewPointOf(double w, double p) => w > 0 ? MoistAir.DewPoint(w, p) : Saturation.MinTemperatureC;
+    /// <summary>The dew point of a bin's mean humidity ratio, in the record's convention (so a dew-point high limit reads it as the hours do).</summary>
+    private static double DewPointOf(double w, double p, HumidityOver over) => w > 0 ? MoistAir.DewPoint(w, p, over) : Saturation.MinTemperatureC;
 
     /// <summary>One control's annual totals by each method, with its per-bin and per-month breakdowns.</summary>
     private static ByMethod<EconomizerTotals> Totals(int c, int nc, int nb, ModeEnergySums[] byBin, ModeEnergySums[] byBinJoint,
@@ -226,7 +227,7 @@ public sealed class EconomizerEvaluation
     }
 
     /// <summary>The model, the controls and the plant of one evaluation.</summary>
-    private sealed class Run(EconomizerModel model, EconomizerControl[] controls, PlantModel? plant)
+    private sealed class Run(EconomizerModel model, EconomizerControl[] controls, PlantModel? plant, HumidityOver over)
     {
         private readonly CurveClampCounter clamps = new();
 
@@ -298,7 +299,7 @@ public sealed class EconomizerEvaluation
 
             double w = stats.MeanHumidityRatio;
             double h = MoistAir.Enthalpy(t, w);
-            double dp = DewPointOf(w, model.SitePressurePa);
+            double dp = DewPointOf(w, model.SitePressurePa, over);
             double cop = Cop(t, stats.Hours, clamps);
             for (int c = 0; c < controls.Length; c++)
             {

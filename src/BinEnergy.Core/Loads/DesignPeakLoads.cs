@@ -27,8 +27,8 @@ internal static class DesignPeakLoads
             var dryBulb = Temperature.FromCelsius(t);
             var ratio = HumidityRatio.FromKilogramsPerKilogram(w);
             return new OutdoorAirPeak(condition, key, dryBulb, ratio,
-                Temperature.FromCelsius(MoistAir.WetBulb(t, w, p)),
-                Temperature.FromCelsius(w > 0 ? Math.Min(MoistAir.DewPoint(w, p), t) : double.NegativeInfinity),
+                Temperature.FromCelsius(HourlyStateSolver.WetBulb(t, w, p)),
+                Temperature.FromCelsius(w > 0 ? Math.Min(MoistAir.DewPoint(w, p, weather.HumidityOver), t) : double.NegativeInfinity),
                 with.OneHourAt(dryBulb, ratio, rho * v), without.OneHourAt(dryBulb, ratio, rho * v));
         }
 
@@ -39,7 +39,7 @@ internal static class DesignPeakLoads
         double coolW = HumidityRatioFromWetBulb(tc, cool.MeanCoincidentWetBulbC, p);
         var dehum = design.Dehumidification[0];
         double dehumT = Math.Max(dehum.MeanCoincidentDryBulbC, dehum.DewPointC);
-        double dehumW = MoistAir.HumidityRatioFromDewPoint(dehum.DewPointC, p);
+        double dehumW = dehum.HumidityRatio; // at the design dew point and site pressure, in the record's convention
         return new OutdoorAirPeaks(
             Peak("Heating 99.6 % dry-bulb", "heating_99_6", th, heatingW),
             Peak("Cooling 0.4 % dry-bulb, MCWB", "cooling_0_4", tc, coolW),

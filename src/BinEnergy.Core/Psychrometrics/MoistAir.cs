@@ -63,6 +63,10 @@ public static class MoistAir
     public static double HumidityRatioFromDewPoint(double dewPointC, double pressurePa) =>
         HumidityRatioFromVapourPressure(Saturation.VapourPressurePa(dewPointC), pressurePa);
 
+    /// <summary>Humidity ratio from a dew point taken over water or over ice below 0 C (see <see cref="HumidityOver"/>), then eq. 20.</summary>
+    public static double HumidityRatioFromDewPoint(double dewPointC, double pressurePa, HumidityOver over) =>
+        HumidityRatioFromVapourPressure(Saturation.VapourPressurePa(dewPointC, over), pressurePa);
+
     /// <summary>
     /// Humidity ratio from relative humidity (0 to 1): p_w = RH p_ws(t) (the definition of
     /// relative humidity, Handbook ch. 1, eq. 12), then eq. 20.
@@ -101,7 +105,7 @@ public static class MoistAir
     }
 
     /// <summary>Handbook ch. 1, eqs. 33 and 35, without checks (may be negative below the dry-air wet-bulb).</summary>
-    private static double HumidityRatioFromWetBulbUnchecked(double t, double tStar, double p)
+    internal static double HumidityRatioFromWetBulbUnchecked(double t, double tStar, double p)
     {
         double wsStar = Saturation.HumidityRatio(tStar, p);
         if (tStar >= 0.0)
@@ -121,17 +125,23 @@ public static class MoistAir
     /// and 6) equals the vapour pressure (eq. 20 inverted), found by
     /// Brent's method on ln p_ws over -100..200 C.
     /// </summary>
-    public static double DewPoint(double humidityRatio, double pressurePa)
+    public static double DewPoint(double humidityRatio, double pressurePa) => DewPoint(humidityRatio, pressurePa, HumidityOver.Ice);
+
+    /// <summary>Dew point in C from humidity ratio, over water or over ice below 0 C (see <see cref="HumidityOver"/>).</summary>
+    public static double DewPoint(double humidityRatio, double pressurePa, HumidityOver over)
     {
         double pw = VapourPressureFromHumidityRatio(humidityRatio, pressurePa);
-        return DewPointFromVapourPressure(pw);
+        return DewPointFromVapourPressure(pw, over);
     }
 
-    /// <summary>Dew point in C from vapour pressure in Pa (eqs. 5 and 6 inverted; Brent's method).</summary>
-    public static double DewPointFromVapourPressure(double vapourPressurePa)
+    /// <summary>Dew point in C from vapour pressure in Pa (eqs. 5 and 6 inverted; Brent's method), over ice below 0 C.</summary>
+    public static double DewPointFromVapourPressure(double vapourPressurePa) => DewPointFromVapourPressure(vapourPressurePa, HumidityOver.Ice);
+
+    /// <summary>Dew point in C from vapour pressure in Pa, over water or over ice below 0 C (eqs. 5 and 6 inverted; Brent's method).</summary>
+    public static double DewPointFromVapourPressure(double vapourPressurePa, HumidityOver over)
     {
-        double lnLow = Saturation.LnVapourPressure(Saturation.MinTemperatureC);
-        double lnHigh = Saturation.LnVapourPressure(Saturation.MaxTemperatureC);
+        double lnLow = Saturation.LnVapourPressure(Saturation.MinTemperatureC, over);
+        double lnHigh = Saturation.LnVapourPressure(Saturation.MaxTemperatureC, over);
         double target = Math.Log(vapourPressurePa);
         if (!(target >= lnLow && target <= lnHigh))
         {
@@ -139,7 +149,7 @@ public static class MoistAir
                 FormattableString.Invariant($"vapour pressure {vapourPressurePa:G4} Pa gives a dew point outside -100 to 200 C"));
         }
 
-        return Brent.FindRoot(t => Saturation.LnVapourPressure(t) - target,
+        return Brent.FindRoot(t => Saturation.LnVapourPressure(t, over) - target,
             Saturation.MinTemperatureC, Saturation.MaxTemperatureC, SolverAccuracyK, 200);
     }
 

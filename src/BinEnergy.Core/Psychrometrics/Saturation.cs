@@ -50,11 +50,26 @@ public static class Saturation
         return Math.Exp(LnVapourPressure(temperatureC));
     }
 
+    /// <summary>
+    /// Saturation vapour pressure in Pa over ice below the triple point (<see cref="HumidityOver.Ice"/>, as
+    /// <see cref="VapourPressurePa(double)"/>) or over liquid water at every temperature (<see cref="HumidityOver.Water"/>:
+    /// Handbook ch. 1, eq. 6, extended below 0 C to supercooled water).
+    /// </summary>
+    /// <exception cref="PsychrometricException">The temperature is outside -100..200 C.</exception>
+    public static double VapourPressurePa(double temperatureC, HumidityOver over)
+    {
+        _ = VapourPressurePa(temperatureC); // the range check
+        return Math.Exp(LnVapourPressure(temperatureC, over));
+    }
+
     /// <summary>Natural log of p_ws in Pa (Handbook ch. 1, eqs. 5 and 6), no range check.</summary>
-    internal static double LnVapourPressure(double temperatureC)
+    internal static double LnVapourPressure(double temperatureC) => LnVapourPressure(temperatureC, HumidityOver.Ice);
+
+    /// <summary>Natural log of p_ws in Pa, over ice below the triple point or over water at every temperature (eq. 6 extended), no range check.</summary>
+    internal static double LnVapourPressure(double temperatureC, HumidityOver over)
     {
         double t = temperatureC + 273.15;
-        if (temperatureC <= TriplePointC)
+        if (temperatureC <= TriplePointC && over == HumidityOver.Ice)
         {
             return C1 / t + C2 + t * (C3 + t * (C4 + t * (C5 + t * C6))) + C7 * Math.Log(t);
         }
@@ -66,10 +81,10 @@ public static class Saturation
     /// Derivative of ln p_ws with respect to temperature, 1/K: eqs. 5 and 6 differentiated term
     /// by term (for Newton steps in the hourly solvers), no range check.
     /// </summary>
-    internal static double LnVapourPressureDerivative(double temperatureC)
+    internal static double LnVapourPressureDerivative(double temperatureC, HumidityOver over = HumidityOver.Ice)
     {
         double t = temperatureC + 273.15;
-        if (temperatureC <= TriplePointC)
+        if (temperatureC <= TriplePointC && over == HumidityOver.Ice)
         {
             return -C1 / (t * t) + C3 + t * (2 * C4 + t * (3 * C5 + t * 4 * C6)) + C7 / t;
         }

@@ -49,6 +49,9 @@ public sealed record ColumnMap
     /// <summary>True or false to say whether the file is a typical year; null to detect it from the dates.</summary>
     public bool? TypicalYear { get; init; }
 
+    /// <summary>What the file's dew points and RH are relative to below 0 C (key <c>humidity_over</c>): liquid water unless the map says ice.</summary>
+    public Psychrometrics.HumidityOver HumidityOver { get; init; } = Psychrometrics.HumidityOver.Water;
+
     /// <summary>Names of the maps shipped with the project.</summary>
     public static IReadOnlyList<string> ShippedNames { get; } = typeof(ColumnMap).Assembly.GetManifestResourceNames()
         .Where(n => n.StartsWith(ResourcePrefix, StringComparison.Ordinal) && n.EndsWith(".toml", StringComparison.Ordinal))

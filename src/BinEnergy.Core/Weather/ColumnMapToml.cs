@@ -8,23 +8,13 @@ namespace BinEnergy.Core.Weather;
 internal static class ColumnMapToml
 {
     private static readonly string[] TopKeys =
-        ["name", "description", "header_line", "header_starts_with", "separator", "missing", "end_at_blank_line", "typical_year", "time", "columns", "metadata"];
+        ["name", "description", "header_line", "header_starts_with", "separator", "missing", "end_at_blank_line", "typical_year", "humidity_over", "time", "columns", "metadata"];
 
     private static readonly string[] TimeKeys = ["column", "format", "date_column", "date_format", "time_column", "time_format", "hour", "zone"];
 
     private static readonly string[] ColumnKeys = ["name", "unit", "scale", "offset"];
 
     private static readonly string[] MetadataKeys = ["line", "field", "pattern", "value", "from_longitude"];
-
-    internal static readonly Dictionary<string, WeatherQuantity> QuantityKeys = new(StringComparer.Ordinal)
-    {
-        ["drybulb"] = WeatherQuantity.DryBulb,
-        ["dewpoint"] = WeatherQuantity.DewPoint,
-        ["humidity_ratio"] = WeatherQuantity.HumidityRatio,
-        ["wetbulb"] = WeatherQuantity.WetBulb,
-        ["rh"] = WeatherQuantity.RelativeHumidity,
-        ["pressure"] = WeatherQuantity.Pressure,
-    };
 
     internal static readonly string[] MetadataNames = ["name", "elevation_m", "latitude", "longitude", "utc_offset_h"];
 
@@ -78,9 +68,9 @@ internal static class ColumnMapToml
         var columns = new Dictionary<WeatherQuantity, ColumnSpec>();
         foreach (var (key, value) in columnsTable)
         {
-            if (!QuantityKeys.TryGetValue(key, out var q))
+            if (WeatherQuantityFacts.ByKey(key) is not { } facts)
             {
-                throw Bad(source, "columns." + key, "unknown quantity" + Suggest(key, QuantityKeys.Keys));
+                throw Bad(source, "columns." + key, "unknown quantity" + Suggest(key, WeatherQuantityFacts.All.Select(f => f.Key)));
             }
 
             if (value is not TomlTable spec)
@@ -90,12 +80,12 @@ internal static class ColumnMapToml
 
             CheckKeys(spec, ColumnKeys, source, "columns." + key + ".");
             string unit = Required(spec, "unit", source, "columns." + key + ".").ToLowerInvariant();
-            if (!WeatherUnits.IsKnown(q, unit))
+            if (!facts.Units.ContainsKey(unit))
             {
-                throw Bad(source, "columns." + key + ".unit", $"'{unit}' is not a unit for {key}; use one of {string.Join(", ", WeatherUnits.Names(q))}");
+                throw Bad(source, "columns." + key + ".unit", $"'{unit}' is not a unit for {key}; use one of {string.Join(", ", facts.Units.Keys)}");
             }
 
-            columns[q] = new ColumnSpec(Required(spec, "name", source, "columns." + key + "."), unit,
+            columns[facts.Quantity] = new ColumnSpec(Required(spec, "name", source, "columns." + key + "."), unit,
                 Num(spec, "scale", source, "columns." + key + ".") ?? 1.0, Num(spec, "offset", source, "columns." + key + ".") ?? 0.0);
         }
 
@@ -148,6 +138,12 @@ internal static class ColumnMapToml
             _ => throw Bad(source, "typical_year", "use true, false or \"auto\""),
         } : null;
 
+        var humidityOver = (Str(root, "humidity_over", source, "") ?? "water") switch
+        {
+            "water" => Psychrometrics.HumidityOver.Water,
+            "ice" => Psychrometrics.HumidityOver.Ice,
+            _ => throw Bad(source, "humidity_over", "use \"water\" (dew points and RH over liquid water at every temperature, the usual weather convention) or \"ice\" (frost points below 0 C)"),
+        };
         int? headerLine = Int(root, "header_line", source, "");
         string? headerStarts = Str(root, "header_starts_with", source, "");
         if ((headerLine is null) == (headerStarts is null))
@@ -185,6 +181,7 @@ internal static class ColumnMapToml
             Metadata = metadata,
             EndAtBlankLine = root.TryGetValue("end_at_blank_line", out var eb) && eb is true,
             TypicalYear = typical,
+            HumidityOver = humidityOver,
         };
     }
 

@@ -11,92 +11,57 @@ namespace BinEnergy.Core.Weather;
 public sealed class HourlyWeather
 {
     /// <summary>
-    /// Builds a record from its primary columns; dew point, wet-bulb and enthalpy are derived.
+    /// Builds a record from its named columns; the dew point, wet-bulb and enthalpy are derived where not given.
     /// </summary>
     /// <param name="site">Site metadata, including the site pressure.</param>
-    /// <param name="times">Start of each hour in local standard time. For a typical-year file these carry
-    /// the calendar year chosen for weekdays (<paramref name="calendarYear"/>), not the source years.</param>
-    /// <param name="dryBulbC">Dry-bulb per hour, C.</param>
-    /// <param name="humidityRatio">Humidity ratio per hour, kg/kg.</param>
-    /// <param name="pressurePa">Station pressure per hour, Pa (the site pressure where the file has none).</param>
+    /// <param name="columns">The hourly columns, all of the same length.</param>
     /// <param name="quality">What the reader repaired or noticed.</param>
-    /// <param name="calendarYear">The year whose weekdays the record uses, and whether the file was a typical year.</param>
-    public HourlyWeather(
-        SiteInfo site,
-        DateTime[] times,
-        double[] dryBulbC,
-        double[] humidityRatio,
-        double[] pressurePa,
-        QualityReport quality,
-        CalendarInfo calendarYear)
-        : this(site, times, dryBulbC, humidityRatio, pressurePa, DewPoints(times.Length, dryBulbC, humidityRatio, pressurePa), null, null, quality, calendarYear)
+    /// <param name="calendar">The year whose weekdays the record uses, and whether the file was a typical year.</param>
+    public HourlyWeather(SiteInfo site, HourlyColumns columns, QualityReport quality, CalendarInfo calendar)
     {
-    }
-
-    /// <summary>
-    /// Builds a record whose dew points are already known, and perhaps its wet-bulbs and enthalpies (the reader solves
-    /// them with its other per-hour work): where null, the wet-bulb is solved from eqs. 33 and 35 and the enthalpy
-    /// computed from eq. 32.
-    /// </summary>
-    internal HourlyWeather(
-        SiteInfo site,
-        DateTime[] times,
-        double[] dryBulbC,
-        double[] humidityRatio,
-        double[] pressurePa,
-        double[] dewPointC,
-        double[]? wetBulbC,
-        double[]? enthalpyJPerKg,
-        QualityReport quality,
-        CalendarInfo calendarYear)
-    {
-        int n = times.Length;
-        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n || dewPointC.Length != n
-            || (wetBulbC is not null && wetBulbC.Length != n) || (enthalpyJPerKg is not null && enthalpyJPerKg.Length != n))
+        int n = columns.Times.Length;
+        if (new[] { columns.DryBulbC, columns.HumidityRatio, columns.PressurePa, columns.DewPointC, columns.WetBulbC, columns.EnthalpyJPerKg }
+            .Any(c => c is not null && c.Length != n))
         {
-            throw new ArgumentException("all hourly columns must have the same length");
+            throw new ArgumentException("all hourly columns must have the same length", nameof(columns));
         }
 
         Site = site;
-        Times = times;
-        DryBulbC = dryBulbC;
-        HumidityRatio = humidityRatio;
-        PressurePa = pressurePa;
-        DewPointC = dewPointC;
+        Times = columns.Times;
+        DryBulbC = columns.DryBulbC;
+        HumidityRatio = columns.HumidityRatio;
+        PressurePa = columns.PressurePa;
+        HumidityOver = columns.HumidityOver;
         Quality = quality;
-        Calendar = calendarYear;
-        if (wetBulbC is null)
-        {
-            wetBulbC = new double[n];
-            HourlyStateBatchSolver.WetBulbsOfRecord(dryBulbC, humidityRatio, pressurePa, dewPointC, wetBulbC);
-        }
-
-        WetBulbC = wetBulbC;
-        if (enthalpyJPerKg is null)
-        {
-            enthalpyJPerKg = new double[n];
-            HourlyStateBatchSolver.Enthalpies(dryBulbC, humidityRatio, enthalpyJPerKg);
-        }
-
-        EnthalpyJPerKg = enthalpyJPerKg;
+        Calendar = calendar;
+        DewPointC = columns.DewPointC ?? Hours(n, i => HourlyStateSolver.DewPoint(HumidityRatio[i], PressurePa[i], DryBulbC[i], HumidityOver));
+        WetBulbC = columns.WetBulbC ?? Hours(n, i => HourlyStateSolver.WetBulb(DryBulbC[i], HumidityRatio[i], PressurePa[i]));
+        EnthalpyJPerKg = columns.EnthalpyJPerKg ?? Hours(n, i => MoistAir.Enthalpy(DryBulbC[i], HumidityRatio[i]));
     }
 
-    /// <summary>Dew point of every hour from its humidity ratio (eq. 20 inverted, then eqs. 5 and 6), never above the dry-bulb.</summary>
-    private static double[] DewPoints(int n, double[] dryBulbC, double[] humidityRatio, double[] pressurePa)
+    private static double[] Hours(int n, Func<int, double> value)
     {
-        if (dryBulbC.Length != n || humidityRatio.Length != n || pressurePa.Length != n)
-        {
-            throw new ArgumentException("all hourly columns must have the same length");
-        }
-
-        var dewPoint = new double[n];
+        var result = new double[n];
         for (int i = 0; i < n; i++)
         {
-            dewPoint[i] = HourlyStateSolver.DewPoint(humidityRatio[i], pressurePa[i], dryBulbC[i]);
+            result[i] = value(i);
         }
 
-        return dewPoint;
+        return result;
     }
+
+    /// <summary>The record's columns, to build a changed copy from (e.g. <c>weather.Columns with { DryBulbC = ... }</c>, derived columns cleared).</summary>
+    public HourlyColumns Columns => new()
+    {
+        Times = Times,
+        DryBulbC = DryBulbC,
+        HumidityRatio = HumidityRatio,
+        PressurePa = PressurePa,
+        DewPointC = DewPointC,
+        WetBulbC = WetBulbC,
+        EnthalpyJPerKg = EnthalpyJPerKg,
+        HumidityOver = HumidityOver,
+    };
 
     public SiteInfo Site { get; }
 
@@ -118,7 +83,10 @@ public sealed class HourlyWeather
     /// <summary>Station pressure per hour, Pa.</summary>
     public double[] PressurePa { get; }
 
-    /// <summary>Dew point per hour, C (eqs. 5, 6 and 20 inverted).</summary>
+    /// <summary>What the dew points are relative to below 0 C (liquid water, the weather convention, unless the file said ice).</summary>
+    public HumidityOver HumidityOver { get; }
+
+    /// <summary>Dew point per hour, C (eqs. 5, 6 and 20 inverted), over <see cref="HumidityOver"/> below 0 C.</summary>
     public double[] DewPointC { get; }
 
     /// <summary>Thermodynamic wet-bulb per hour, C (eqs. 33 and 35 solved).</summary>
@@ -142,8 +110,18 @@ public sealed class HourlyWeather
         ArgumentOutOfRangeException.ThrowIfNegative(start);
         ArgumentOutOfRangeException.ThrowIfGreaterThan(start + count, Count);
         double[] Cut(double[] column) => column.AsSpan(start, count).ToArray();
-        return new HourlyWeather(Site, Times.AsSpan(start, count).ToArray(), Cut(DryBulbC), Cut(HumidityRatio), Cut(PressurePa), Cut(DewPointC),
-            Cut(WetBulbC), Cut(EnthalpyJPerKg), Quality, Calendar)
+        var columns = new HourlyColumns
+        {
+            Times = Times.AsSpan(start, count).ToArray(),
+            DryBulbC = Cut(DryBulbC),
+            HumidityRatio = Cut(HumidityRatio),
+            PressurePa = Cut(PressurePa),
+            DewPointC = Cut(DewPointC),
+            WetBulbC = Cut(WetBulbC),
+            EnthalpyJPerKg = Cut(EnthalpyJPerKg),
+            HumidityOver = HumidityOver,
+        };
+        return new HourlyWeather(Site, columns, Quality, Calendar)
         {
             HourlyPressureFromRecord = HourlyPressureFromRecord,
         };

@@ -41,6 +41,11 @@ public static class OpenLayoutWriter
             writer.WriteLine(string.Create(c, $"# utc_offset_h: {off:0.##}"));
         }
 
+        if (weather.HumidityOver == HumidityOver.Ice)
+        {
+            writer.WriteLine("# humidity_over: ice");
+        }
+
         foreach (var line in commentLines ?? [])
         {
             writer.Write("# ");
@@ -50,7 +55,9 @@ public static class OpenLayoutWriter
         writer.WriteLine(Header);
         for (int i = 0; i < weather.Count; i++)
         {
-            double rh = MoistAir.RelativeHumidity(weather.DryBulbC[i], weather.HumidityRatio[i], weather.PressurePa[i]) * 100.0;
+            // RH in the record's own convention, as the dew point is (over liquid water unless the record says ice).
+            double rh = MoistAir.VapourPressureFromHumidityRatio(weather.HumidityRatio[i], weather.PressurePa[i])
+                / Saturation.VapourPressurePa(weather.DryBulbC[i], weather.HumidityOver) * 100.0;
             writer.WriteLine(string.Create(c,
                 $"{weather.Times[i]:yyyy-MM-ddTHH:mm},{weather.DryBulbC[i]:0.###},{weather.DewPointC[i]:0.###},{Math.Min(rh, 100.0):0.##},{weather.PressurePa[i] / 1000.0:0.####}"));
         }

@@ -27,14 +27,6 @@ public static class QualityKeys
     /// <summary>Hours where a second humidity measure disagrees with the one used: the key is this prefix plus the measure, e.g. <c>disagrees_rh</c>.</summary>
     public const string DisagreesPrefix = "disagrees_";
 
-    /// <summary>The short role name of a quantity in keys and messages.</summary>
-    public static string Role(WeatherQuantity q) => q switch
-    {
-        WeatherQuantity.DryBulb => "drybulb",
-        WeatherQuantity.DewPoint => "dewpoint",
-        WeatherQuantity.HumidityRatio => "humidity_ratio",
-        WeatherQuantity.WetBulb => "wetbulb",
-        WeatherQuantity.RelativeHumidity => "rh",
-        _ => "pressure",
-    };
+    /// <summary>The short role name of a quantity in keys and messages (its <see cref="WeatherQuantityFacts.Key"/>).</summary>
+    public static string Role(WeatherQuantity q) => WeatherQuantityFacts.Of(q).Key;
 }

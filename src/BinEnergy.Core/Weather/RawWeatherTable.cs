@@ -5,35 +5,39 @@ namespace BinEnergy.Core.Weather;
 /// each row as written, its line, the values in internal units (NaN where missing) and the
 /// metadata. Internal to the reader.
 /// </summary>
-internal sealed class RawWeatherTable
+internal sealed class RawWeatherTable(string file, ColumnMap map, bool openLayout, string[] headers, int headerLine)
 {
-    public RawWeatherTable(string file, ColumnMap map, bool openLayout)
-    {
-        File = file;
-        Map = map;
-        IsOpenLayout = openLayout;
-    }
+    private readonly List<DateTime> times = new(8784);
+    private readonly List<int> writtenYears = new(8784);
+    private readonly List<int> lines = new(8784);
+    private readonly Dictionary<WeatherQuantity, List<double>> values = [];
 
     /// <summary>The file as the user named it.</summary>
-    public string File { get; }
+    public string File { get; } = file;
 
     /// <summary>The map the file was read with (for the open layout, one built from its header).</summary>
-    public ColumnMap Map { get; }
+    public ColumnMap Map { get; } = map;
 
     /// <summary>True for the project's open layout.</summary>
-    public bool IsOpenLayout { get; }
+    public bool IsOpenLayout { get; } = openLayout;
 
-    /// <summary>Time of each row as written ("24:00" resolved to midnight of the next day), before any shift; the first <see cref="Count"/> entries.</summary>
-    public DateTime[] Times { get; private set; } = [];
+    /// <summary>The column names as the header line writes them (trimmed).</summary>
+    public string[] Headers { get; } = headers;
 
-    /// <summary>The year of each row's written date (for "24:00" the date before midnight); the first <see cref="Count"/> entries.</summary>
-    public int[] WrittenYears { get; private set; } = [];
+    /// <summary>1-based line of the column names.</summary>
+    public int HeaderLine { get; } = headerLine;
 
-    /// <summary>1-based file line of each row; the first <see cref="Count"/> entries.</summary>
-    public int[] Lines { get; private set; } = [];
+    /// <summary>Time of each row as written ("24:00" resolved to midnight of the next day), before any shift.</summary>
+    public IReadOnlyList<DateTime> Times => times;
 
-    /// <summary>Values per quantity in internal units (C, %, kg/kg, Pa), NaN where missing; the first <see cref="Count"/> entries.</summary>
-    public Dictionary<WeatherQuantity, double[]> Values { get; } = [];
+    /// <summary>The year of each row's written date (for "24:00" the date before midnight).</summary>
+    public IReadOnlyList<int> WrittenYears => writtenYears;
+
+    /// <summary>1-based file line of each row.</summary>
+    public IReadOnlyList<int> Lines => lines;
+
+    /// <summary>Values per quantity in internal units (C, %, kg/kg, Pa), NaN where missing.</summary>
+    public IReadOnlyDictionary<WeatherQuantity, List<double>> Values => values;
 
     /// <summary>The file's own name for each quantity's column.</summary>
     public Dictionary<WeatherQuantity, string> ColumnNames { get; } = [];
@@ -47,15 +51,17 @@ internal sealed class RawWeatherTable
     /// <summary>Repairs and notices collected while parsing.</summary>
     public QualityReport Quality { get; } = new();
 
-    /// <summary>The rows' moist-air states as the parser solved them, for the builder to use where they hold; null when not solved.</summary>
-    public RowStates? States { get; set; }
-
     /// <summary>Number of rows.</summary>
-    public int Count { get; private set; }
+    public int Count => times.Count;
 
-    /// <summary>The rows as parsed: arrays at least <paramref name="count"/> long (the parser sizes them from the line count).</summary>
-    public void SetRows(DateTime[] times, int[] writtenYears, int[] lines, int count)
+    /// <summary>A new, empty column for a quantity; the parser adds one value to it per row.</summary>
+    public List<double> AddColumn(WeatherQuantity q) => values[q] = new List<double>(8784);
+
+    /// <summary>A row's time, written year and line (its values go to the columns).</summary>
+    public void AddRow(DateTime time, int writtenYear, int line)
     {
-        (Times, WrittenYears, Lines, Count) = (times, writtenYears, lines, count);
+        times.Add(time);
+        writtenYears.Add(writtenYear);
+        lines.Add(line);
     }
 }

@@ -24,6 +24,12 @@ public sealed record WeatherReadOptions
     /// <summary>The year whose weekdays a typical-year record uses (default 2018, a non-leap year starting on a Monday).</summary>
     public int CalendarYear { get; init; } = CalendarInfo.DefaultTypicalYear;
 
+    /// <summary>
+    /// What the file's dew points and RH are relative to below 0 C, overriding the file's own statement (open-layout
+    /// metadata <c>humidity_over</c> or the map's key); null: the file's, else liquid water (the weather convention).
+    /// </summary>
+    public Psychrometrics.HumidityOver? HumidityOver { get; init; }
+
     /// <summary>Options for the open layout with the defaults.</summary>
     public static WeatherReadOptions Default { get; } = new();
 

@@ -26,7 +26,7 @@ public static class WeatherReader
     {
         options ??= WeatherReadOptions.Default;
         options.Validate();
-        var raw = WeatherFileParser.Parse(data, fileName, options.Map, statesFor: options);
+        var raw = WeatherFileParser.Parse(data, fileName, options.Map);
         return WeatherRecordBuilder.Build(raw, options);
     }
 }

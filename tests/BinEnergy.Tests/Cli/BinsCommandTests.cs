@@ -23,7 +23,7 @@ public class BinsCommandTests
         year.DryBulbC[100] = 10.0;
         var weather = SyntheticWeather.FromColumns(year.DryBulbC, year.HumidityRatio, 97_700, "Fernhollow");
         var site = weather.Site with { ElevationM = 300 };
-        var withSite = new HourlyWeather(site, weather.Times, weather.DryBulbC, weather.HumidityRatio, weather.PressurePa, weather.Quality, weather.Calendar);
+        var withSite = new HourlyWeather(site, weather.Columns, weather.Quality, weather.Calendar);
         using var writer = new StreamWriter(path + ".tmp");
         OpenLayoutWriter.Write(withSite, writer, ["invented test climate, not a real place"]);
         writer.Close();

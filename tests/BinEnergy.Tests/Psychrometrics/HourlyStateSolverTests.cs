@@ -3,8 +3,8 @@ using BinEnergy.Core.Psychrometrics;
 namespace BinEnergy.Tests.Psychrometrics;
 
 /// <summary>
-/// The reader's solvers (the Newton dew point and the vectorised batch wet-bulb) must find the same roots as the
-/// Brent-based <see cref="MoistAir"/> functions.
+/// The reader's solvers (the Newton dew point and wet-bulb) must find the same roots as the Brent-based
+/// <see cref="MoistAir"/> functions, here over the weather range and in <c>RealWeatherFileTests</c> on every hour of the real files.
 /// </summary>
 public sealed class HourlyStateSolverTests
 {
@@ -24,7 +24,7 @@ public sealed class HourlyStateSolverTests
                     // Near -40 C the Brent solver stops on |f| < 1e-7 kg/kg, up to 2e-4 K from the root; the Newton root
                     // must satisfy eqs. 33/35 at least as well, and lie within 1e-3 K.
                     double brent = MoistAir.WetBulb(t, w, p);
-                    double fast = BatchWetBulb(t, w, p, dp);
+                    double fast = HourlyStateSolver.WetBulb(t, w, p);
                     Assert.True(Math.Abs(fast - brent) < 1e-3, $"t {t} rh {rh} p {p}: fast {fast} brent {brent}");
                     double residual(double x) => Math.Abs(x >= t ? 0 : MoistAir.HumidityRatioFromWetBulb(t, x, p) - w);
                     // Margin 4e-10 kg/kg = 1e-6 K of wet-bulb (h_fg / c_p = 2,486 K per kg/kg): main's scaled Brent
@@ -45,14 +45,6 @@ public sealed class HourlyStateSolverTests
         double p = 101_325;
         double w = MoistAir.HumidityRatioFromWetBulb(30, 20, p);
         Assert.InRange(w, 0.0099, 0.0107);
-        Assert.Equal(20, BatchWetBulb(30, w, p, HourlyStateSolver.DewPoint(w, p, 30)), 5);
-    }
-
-    /// <summary>One state through the batch solver, as the only hour of a record.</summary>
-    internal static double BatchWetBulb(double t, double w, double p, double dewPoint)
-    {
-        var result = new double[1];
-        HourlyStateBatchSolver.WetBulbs([t], [w], [p], [dewPoint], result);
-        return result[0];
+        Assert.Equal(20, HourlyStateSolver.WetBulb(30, w, p), 5);
     }
 }

@@ -18,8 +18,8 @@ internal static class SyntheticWeather
         var s = start ?? Start;
         var times = Enumerable.Range(0, dryBulbC.Length).Select(i => s.AddHours(i)).ToArray();
         var site = new SiteInfo(name, 0, null, null, null, pressurePa, SitePressureSource.RecordMean);
-        return new HourlyWeather(site, times, dryBulbC, humidityRatio, Enumerable.Repeat(pressurePa, dryBulbC.Length).ToArray(),
-            new QualityReport(), new CalendarInfo(s.Year, false, "invented test record"));
+        var columns = new HourlyColumns { Times = times, DryBulbC = dryBulbC, HumidityRatio = humidityRatio, PressurePa = Enumerable.Repeat(pressurePa, dryBulbC.Length).ToArray() };
+        return new HourlyWeather(site, columns, new QualityReport(), new CalendarInfo(s.Year, false, "invented test record"));
     }
 
     /// <summary>

@@ -78,7 +78,8 @@ public class WeatherSynthesizerTests
         for (int i = 0; i < w.Count; i++)
         {
             Assert.True(w.DewPointC[i] <= w.DryBulbC[i], $"hour {i}: dew point {w.DewPointC[i]} above dry-bulb {w.DryBulbC[i]}");
-            Assert.True(w.HumidityRatio[i] <= Saturation.HumidityRatio(w.DryBulbC[i], w.PressurePa[i]) * (1 + 1e-9), $"hour {i} is supersaturated");
+            // Saturation in the record's convention: over liquid water, also below 0 C (dew points are over water).
+            Assert.True(w.HumidityRatio[i] <= MoistAir.HumidityRatioFromDewPoint(w.DryBulbC[i], w.PressurePa[i], w.HumidityOver) * (1 + 1e-9), $"hour {i} is supersaturated");
         }
 
         var text = HourlyText.Parse(SynthesizedYearWriter.ToText(result, name + "-monthly.csv"));

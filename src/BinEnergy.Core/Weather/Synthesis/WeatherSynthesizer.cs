@@ -308,7 +308,7 @@ public static class WeatherSynthesizer
         for (int i = 0; i < n; i++)
         {
             times[i] = start.AddHours(i);
-            w[i] = MoistAir.HumidityRatioFromDewPoint(dewPoint[i], pressure);
+            w[i] = MoistAir.HumidityRatioFromDewPoint(dewPoint[i], pressure, HumidityOver.Water);
             p[i] = pressure;
         }
 
@@ -319,7 +319,8 @@ public static class WeatherSynthesizer
             $"synthesized year; dates and weekdays of {year}, a non-leap year");
         // The dew points are known exactly here, so they are passed in rather than solved back
         // from the humidity ratios: the written file then depends on no iterative solver.
-        return new HourlyWeather(site, times, dryBulb, w, p, dewPoint, null, null, quality, calendar);
+        var columns = new HourlyColumns { Times = times, DryBulbC = dryBulb, HumidityRatio = w, PressurePa = p, DewPointC = dewPoint, HumidityOver = HumidityOver.Water };
+        return new HourlyWeather(site, columns, quality, calendar);
     }
 
     private static MonthCheck[] Measure(HourlyWeather weather, IReadOnlyList<MonthStatistics> months, double[] midCourse)
