@@ -60,7 +60,7 @@ public class WeatherReadBenchmark
     {
         for (int i = 0; i < record.Count; i++)
         {
-            wetBulbs[i] = HourlyStateSolver.WetBulb(record.DryBulbC[i], record.HumidityRatio[i], record.PressurePa[i]);
+            wetBulbs[i] = HourlyStateSolver.WetBulb(record.DryBulbC[i], record.HumidityRatio[i], record.PressurePa[i], record.DewPointC[i]);
         }
 
         return wetBulbs[^1];

@@ -48,47 +48,73 @@ internal static class HourlyStateSolver
 
     /// <summary>
     /// Thermodynamic wet-bulb in C (eqs. 33 and 35 solved for t*), the same root as <see cref="MoistAir.WetBulb"/>:
-    /// Newton between the frost or dew point and the dry-bulb where that bracket lies on one side of 0 C (the root is
-    /// unique there); elsewhere, or where Newton fails, the reference solver itself. Air at or above saturation at its
-    /// dry-bulb (over ice below 0 C: a weather record's RH over water can reach past it) has its dry-bulb as wet-bulb.
+    /// Newton between a lower bound (the dew or frost point) and the dry-bulb where that bracket lies on one side of
+    /// 0 C (the root is unique there); elsewhere, or where Newton fails, the reference solver itself. Air at or above
+    /// saturation at its dry-bulb (over ice below 0 C: a weather record's RH over water can reach past it) has its
+    /// dry-bulb as wet-bulb.
     /// </summary>
-    public static double WetBulb(double dryBulbC, double humidityRatio, double pressurePa)
+    /// <param name="dryBulbC">Dry-bulb, C.</param>
+    /// <param name="humidityRatio">Humidity ratio, kg/kg.</param>
+    /// <param name="pressurePa">Total pressure, Pa.</param>
+    /// <param name="dewPointC">The dew point over water or over ice (either is a lower bound of the wet-bulb); null: solved here.</param>
+    public static double WetBulb(double dryBulbC, double humidityRatio, double pressurePa, double? dewPointC = null)
     {
-        if (humidityRatio >= Saturation.HumidityRatio(dryBulbC, pressurePa))
+        double pws = Math.Exp(Saturation.LnVapourPressure(dryBulbC));
+        if (humidityRatio >= MoistAir.MolecularMassRatio * pws / (pressurePa - pws))
         {
-            return dryBulbC;
+            return dryBulbC; // at or above saturation (eq. 23)
         }
 
-        double low = DewPoint(humidityRatio, pressurePa, dryBulbC); // over ice below 0 C: the bracket MoistAir.WetBulb uses
+        double low = Math.Min(dewPointC ?? DewPoint(humidityRatio, pressurePa, dryBulbC), dryBulbC);
         if (dryBulbC - low < 1e-3 || (low < 0.0 && dryBulbC > 0.0))
         {
             return MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
         }
 
-        bool water = low >= 0.0;
-        // Eq. 33 (water) or 35 (ice): W(t*) = (A(t*) W_s* - 1.006 (t - t*)) / D(t*), A = a0 - a1 t*, D = d0 + 1.86 t - d1 t*.
-        double a0 = water ? 2501.0 : 2830.0, a1 = water ? 2.326 : 0.24, d0 = water ? 2501.0 : 2830.0, d1 = water ? 4.186 : 2.1;
-        double Residual(double ts)
+        var residual = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: low >= 0.0);
+
+        // First guess: a third of the way down from the dry-bulb to the dew point (common practice, a rough rule).
+        return NewtonRaphson.TryFindRoot(residual.Value, residual.Slope, dryBulbC - (dryBulbC - low) / 3.0, low, dryBulbC, Accuracy * 1e-3, 50, out double root)
+            ? root
+            : MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
+    }
+
+    /// <summary>
+    /// Eq. 33 (wet bulb over water) or 35 (ice bulb) as a residual in t*: W(t*) - W with W(t*) = (A W_s* - 1.006 (t - t*)) / D,
+    /// A = a0 - a1 t*, D = a0 + 1.86 t - d1 t*, and its derivative; the saturation state of the last t* is kept, as
+    /// Newton asks for the value and the slope at the same point.
+    /// </summary>
+    private sealed class WetBulbResidual(double t, double w, double p, bool water)
+    {
+        private readonly double a0 = water ? 2501.0 : 2830.0, a1 = water ? 2.326 : 0.24, d1 = water ? 4.186 : 2.1;
+        private double at = double.NaN, ws, dws;
+
+        public double Value(double ts)
         {
-            double pws = Math.Exp(Saturation.LnVapourPressure(ts));
-            double ws = MoistAir.MolecularMassRatio * pws / (pressurePa - pws);
-            return ((a0 - a1 * ts) * ws - 1.006 * (dryBulbC - ts)) / (d0 + 1.86 * dryBulbC - d1 * ts) - humidityRatio;
+            Saturate(ts);
+            return ((a0 - a1 * ts) * ws - 1.006 * (t - ts)) / (a0 + 1.86 * t - d1 * ts) - w;
         }
 
-        double Slope(double ts)
+        public double Slope(double ts)
         {
-            double pws = Math.Exp(Saturation.LnVapourPressure(ts));
-            double ws = MoistAir.MolecularMassRatio * pws / (pressurePa - pws);
-            double dws = MoistAir.MolecularMassRatio * pressurePa * pws * Saturation.LnVapourPressureDerivative(ts) / ((pressurePa - pws) * (pressurePa - pws));
-            double n = (a0 - a1 * ts) * ws - 1.006 * (dryBulbC - ts);
-            double d = d0 + 1.86 * dryBulbC - d1 * ts;
+            Saturate(ts);
+            double n = (a0 - a1 * ts) * ws - 1.006 * (t - ts);
+            double d = a0 + 1.86 * t - d1 * ts;
             return ((-a1 * ws + (a0 - a1 * ts) * dws + 1.006) * d + d1 * n) / (d * d);
         }
 
-        // First guess: a third of the way down from the dry-bulb to the dew point (common practice, a rough rule).
-        double guess = dryBulbC - (dryBulbC - low) / 3.0;
-        return NewtonRaphson.TryFindRoot(Residual, Slope, guess, low, dryBulbC, Accuracy * 1e-3, 50, out double root)
-            ? root
-            : MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
+        /// <summary>W_s* (eq. 23) and its derivative at t*.</summary>
+        private void Saturate(double ts)
+        {
+            if (ts == at)
+            {
+                return;
+            }
+
+            double pws = Math.Exp(Saturation.LnVapourPressure(ts));
+            ws = MoistAir.MolecularMassRatio * pws / (p - pws);
+            dws = MoistAir.MolecularMassRatio * p * pws * Saturation.LnVapourPressureDerivative(ts) / ((p - pws) * (p - pws));
+            at = ts;
+        }
     }
 }

@@ -35,7 +35,7 @@ public sealed class HourlyWeather
         Quality = quality;
         Calendar = calendar;
         DewPointC = columns.DewPointC ?? Hours(n, i => HourlyStateSolver.DewPoint(HumidityRatio[i], PressurePa[i], DryBulbC[i], HumidityOver));
-        WetBulbC = columns.WetBulbC ?? Hours(n, i => HourlyStateSolver.WetBulb(DryBulbC[i], HumidityRatio[i], PressurePa[i]));
+        WetBulbC = columns.WetBulbC ?? Hours(n, i => HourlyStateSolver.WetBulb(DryBulbC[i], HumidityRatio[i], PressurePa[i], DewPointC[i]));
         EnthalpyJPerKg = columns.EnthalpyJPerKg ?? Hours(n, i => MoistAir.Enthalpy(DryBulbC[i], HumidityRatio[i]));
     }
 

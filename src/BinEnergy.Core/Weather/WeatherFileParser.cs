@@ -21,8 +21,6 @@ internal static class WeatherFileParser
     /// <summary>The open layout's metadata keys (DESIGN 5.1).</summary>
     private static readonly string[] OpenMetadataKeys = ["name", "elevation_m", "elevation_ft", "latitude", "longitude", "utc_offset_h", "typical_year", "humidity_over"];
 
-    /// <summary>The open layout's time formats (ISO 8601 local standard time, a space allowed for the T).</summary>
-    private static readonly string[] IsoFormats = ["yyyy-MM-ddTHH:mm", "yyyy-MM-ddTHH:mm:ss", "yyyy-MM-dd HH:mm", "yyyy-MM-dd HH:mm:ss"];
 
     /// <summary>Reads the whole file as bytes, un-gzipping when it is gzip data.</summary>
     public static byte[] LoadBytes(string path)
@@ -108,7 +106,7 @@ internal static class WeatherFileParser
         ReadMapMetadata(map, preamble, table, file);
         var layout = new RowLayout(table, FindColumn(headers, map.Time.Column, WeatherErrorKind.MissingTimeColumn, file, headerLine, map, "time"),
             map.Time.TimeColumn is string tc ? FindColumn(headers, tc, WeatherErrorKind.MissingTimeColumn, file, headerLine, map, "time of day") : -1,
-            NumberColumns(table), map.MissingCodes.Where(c => c.Length > 0).Select(c => c.Trim()).Concat(DefaultMissing).ToArray());
+            NumberColumns(table), map.MissingCodes.Where(c => c.Length > 0).Select(c => c.Trim()).Concat(DefaultMissing).Select(Encoding.UTF8.GetBytes).ToArray());
         int trailing = ReadRows(reader, layout);
         if (table.Count == 0)
         {
@@ -268,8 +266,10 @@ internal static class WeatherFileParser
     }
 
     /// <summary>What the row loop needs to know about the file, fixed once the column names are read.</summary>
-    private sealed record RowLayout(RawWeatherTable Table, int TimeIndex, int ClockIndex, NumberColumn[] Columns, string[] Missing)
+    private sealed record RowLayout(RawWeatherTable Table, int TimeIndex, int ClockIndex, NumberColumn[] Columns, byte[][] Missing)
     {
+        public SeenTimes Seen { get; } = new();
+
         public string File => Table.File;
 
         public ColumnMap Map => Table.Map;
@@ -333,19 +333,21 @@ internal static class WeatherFileParser
 
     /// <summary>
     /// A number field in the internal unit: NaN for a missing-value code or an empty field; an error for anything but a
-    /// finite number in the physical range. RH of 100 to 103 % is set to 100 % and counted (DESIGN 5.4).
+    /// finite number in the physical range. RH of 100 to 103 % is set to 100 % and counted (DESIGN 5.4). Read from the
+    /// field's UTF-8 bytes; its text is made only for a message.
     /// </summary>
     private static double Number(CsvReader reader, RowLayout layout, NumberColumn column, int line)
     {
-        string text = reader.GetString(column.Index).Trim();
-        if (text.Length == 0 || Array.IndexOf(layout.Missing, text) >= 0)
+        var span = reader.GetSpan(column.Index).Trim(" \t"u8);
+        if (span.IsEmpty || IsMissing(span, layout.Missing))
         {
             return double.NaN;
         }
 
         // A comma inside a (quoted) number would be read as a thousands separator: refuse it first.
-        if (text.Contains(',') || !double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double raw) || !double.IsFinite(raw))
+        if (span.Contains((byte)',') || !reader.TryParse<double>(column.Index, out double raw) || !double.IsFinite(raw))
         {
+            string text = Encoding.UTF8.GetString(span);
             throw new WeatherDataException(WeatherErrorKind.NotANumber, layout.File, $"the {column.Facts.Name} is not a number", text.Contains(',')
                 ? "Write decimals with a dot (12.5, not 12,5)"
                 : "Write a number, or leave the field empty (or use a missing-value code" + (layout.Table.IsOpenLayout ? " such as NA" : " the map lists") + ") where the value is missing",
@@ -355,7 +357,7 @@ internal static class WeatherFileParser
         double v = raw * column.Factor + column.Offset;
         if (!(v >= column.Facts.Low && v <= column.Facts.High))
         {
-            throw OutOfRange(layout.Table, column.Facts, layout.Headers[column.Index], line, raw, v, text);
+            throw OutOfRange(layout.Table, column.Facts, layout.Headers[column.Index], line, raw, v, Encoding.UTF8.GetString(span));
         }
 
         if (v > 100.0 && column.Facts.Quantity == WeatherQuantity.RelativeHumidity)
@@ -367,46 +369,81 @@ internal static class WeatherFileParser
         return v;
     }
 
-    /// <summary>The time of a row of the open layout: ISO 8601 local standard time, hour 24 allowed for the midnight that ends a day.</summary>
-    private static DateTime IsoTime(CsvReader reader, RowLayout layout, int line, out int writtenYear)
+    private static bool IsMissing(ReadOnlySpan<byte> field, byte[][] codes)
     {
-        string text = reader.GetString(layout.TimeIndex);
-        foreach (string format in IsoFormats)
+        foreach (var code in codes)
         {
-            if (TryParseExact24(text, format, out var time, out bool was24))
+            if (field.SequenceEqual(code))
             {
-                writtenYear = was24 ? time.AddDays(-1).Year : time.Year;
-                return time;
+                return true;
             }
         }
 
-        throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], text, "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
+        return false;
     }
 
-    /// <summary>The time of a row in a map's format (one or two columns).</summary>
+    /// <summary>The time of a row of the open layout (<see cref="Weather.IsoTime"/>).</summary>
+    private static DateTime IsoTime(CsvReader reader, RowLayout layout, int line, out int writtenYear)
+    {
+        if (!Weather.IsoTime.TryParse(reader.GetSpan(layout.TimeIndex).Trim(" \t"u8), out var time, out writtenYear))
+        {
+            throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], reader.GetString(layout.TimeIndex), "yyyy-MM-ddTHH:mm (ISO 8601, local standard time)");
+        }
+
+        return time;
+    }
+
+    /// <summary>
+    /// The time of a row in a map's format (one or two columns). A file repeats each date for the hours of its day and
+    /// has few distinct clock times, so the last date and the clock times read are kept (<see cref="RowLayout.Seen"/>).
+    /// </summary>
     private static DateTime MappedTime(CsvReader reader, RowLayout layout, int line, out int writtenYear)
     {
         var timeLayout = layout.Map.Time;
+        var seen = layout.Seen;
         string text = reader.GetString(layout.TimeIndex);
-        if (!TryParseExact24(text, timeLayout.Format, out var date, out bool was24))
+        if (text != seen.DateText)
         {
-            throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], text, timeLayout.Format);
+            if (!TryParseExact24(text, timeLayout.Format, out var parsed, out bool was24))
+            {
+                throw BadTime(layout.File, line, layout.Headers[layout.TimeIndex], text, timeLayout.Format);
+            }
+
+            (seen.DateText, seen.Date, seen.DateWas24) = (text, parsed, was24);
         }
 
-        writtenYear = was24 ? date.AddDays(-1).Year : date.Year;
+        var date = seen.Date;
+        writtenYear = seen.DateWas24 ? date.AddDays(-1).Year : date.Year;
         if (layout.ClockIndex < 0)
         {
             return date;
         }
 
         string clock = reader.GetString(layout.ClockIndex);
-        if (!TryParseExact24("2001-01-01 " + clock, "yyyy-MM-dd " + timeLayout.TimeFormat, out var tod, out _))
+        if (!seen.Clocks.TryGetValue(clock, out var timeOfDay))
         {
-            throw BadTime(layout.File, line, layout.Headers[layout.ClockIndex], clock, timeLayout.TimeFormat!);
+            if (!TryParseExact24("2001-01-01 " + clock, "yyyy-MM-dd " + timeLayout.TimeFormat, out var tod, out _))
+            {
+                throw BadTime(layout.File, line, layout.Headers[layout.ClockIndex], clock, timeLayout.TimeFormat!);
+            }
+
+            seen.Clocks[clock] = timeOfDay = tod - new DateTime(2001, 1, 1);
         }
 
         writtenYear = date.Year;
-        return date.Date + (tod - new DateTime(2001, 1, 1));
+        return date.Date + timeOfDay;
+    }
+
+    /// <summary>The last date text a map's rows gave and what it read as, and the clock times read so far.</summary>
+    private sealed class SeenTimes
+    {
+        public string? DateText { get; set; }
+
+        public DateTime Date { get; set; }
+
+        public bool DateWas24 { get; set; }
+
+        public Dictionary<string, TimeSpan> Clocks { get; } = new(StringComparer.Ordinal);
     }
 
     private static WeatherDataException WrongFieldCount(CsvReader reader, RowLayout layout, int fc, int line)
@@ -536,13 +573,9 @@ internal static class WeatherFileParser
         if (k >= 0 && text.Length == format.Length && text.AsSpan(k, 2).SequenceEqual("24"))
         {
             string zero = string.Concat(text.AsSpan(0, k), "00", text.AsSpan(k + 2));
-            if (DateTime.TryParseExact(zero, format, CultureInfo.InvariantCulture, DateTimeStyles.None, out value) && value.TimeOfDay.Hours == 0 && value.Minute == 0)
+            if (DateTime.TryParseExact(zero, format, CultureInfo.InvariantCulture, DateTimeStyles.None, out value) && value.TimeOfDay == TimeSpan.Zero
+                && value.Date < DateTime.MaxValue.Date)
             {
-                if (value.Date == DateTime.MaxValue.Date)
-                {
-                    return false; // 9999-12-31 24:00 is past the calendar's range
-                }
-
                 value = value.AddDays(1);
                 was24 = true;
                 return true;
