@@ -35,6 +35,12 @@ public class WeatherFileSettings : CommonSettings
     [StudyKey("climate", "calendar_year")]
     public int? CalendarYear { get; init; }
 
+    [CommandOption("--humidity-over <WATER|ICE>")]
+    [Description("What the file's dew points and RH are relative to below 0 C: water (liquid water, the usual weather convention) or ice (frost points). Default: the file's own statement, else water.")]
+    [TypeConverter(typeof(ChoiceConverter<Core.Psychrometrics.HumidityOver>))]
+    [StudyKey("climate", "humidity_over")]
+    public Core.Psychrometrics.HumidityOver? HumidityOver { get; init; }
+
     /// <summary>The weather file and how it is read, for headings.</summary>
     internal string Source(WeatherReadOptions options) => Weather + " (" + (options.Map?.Source ?? "open layout") + ")";
 
@@ -68,5 +74,6 @@ public class WeatherFileSettings : CommonSettings
         ElevationM = Elevation is double z ? Length.From(z, Units).Metres : null,
         AllowDroppingLongGaps = DropLongGaps,
         CalendarYear = CalendarYear ?? CalendarInfo.DefaultTypicalYear,
+        HumidityOver = HumidityOver,
     };
 }

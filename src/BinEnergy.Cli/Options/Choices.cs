@@ -23,6 +23,7 @@ internal static class Choices
         [typeof(DaylightSaving)] = ("--daylight-saving", "a daylight-saving rule",
             new[] { ("none", DaylightSaving.None), ("north-america", DaylightSaving.NorthAmerica), ("europe", DaylightSaving.Europe) }),
         [typeof(DegreeDayMethod)] = ("--degree-days", "a degree-day method", DegreeDayMethods.All.Select(m => (DegreeDayMethods.Name(m), m)).ToArray()),
+        [typeof(HumidityOver)] = ("--humidity-over", "a humidity convention", new[] { ("water", HumidityOver.Water), ("ice", HumidityOver.Ice) }),
         [typeof(BinSplit)] = ("--by", "a split", new[] { ("month", BinSplit.Month), ("block", BinSplit.TimeOfDayBlock) }),
     };
 

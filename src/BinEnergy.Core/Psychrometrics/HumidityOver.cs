@@ -19,3 +19,15 @@ public enum HumidityOver
     /// </summary>
     Ice,
 }
+
+/// <summary>The humidity conventions in words, for messages and outputs.</summary>
+public static class HumidityConventions
+{
+    /// <summary>The reading of a dew point under a convention, e.g. "over liquid water".</summary>
+    public static string Words(HumidityOver over) => over == HumidityOver.Water ? "over liquid water" : "as frost points (over ice)";
+
+    /// <summary>A record's convention in one sentence.</summary>
+    public static string Describe(HumidityOver over) => over == HumidityOver.Water
+        ? "over liquid water at every temperature (the usual weather convention; humidity_over = \"ice\" reads frost points)"
+        : "below 0 C, dew points as frost points and RH over ice (humidity_over = \"ice\")";
+}

@@ -13,4 +13,7 @@ public sealed record StudyClimate(string Name, string WeatherPath, string? Map, 
 
     /// <summary>The year whose weekdays a typical-year file uses, or null for the default.</summary>
     public int? CalendarYear { get; init; }
+
+    /// <summary>What the file's dew points and RH are relative to below 0 C, or null for the file's own statement.</summary>
+    public Psychrometrics.HumidityOver? HumidityOver { get; init; }
 }

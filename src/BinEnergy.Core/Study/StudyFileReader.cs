@@ -391,6 +391,12 @@ public static class StudyFileReader
                 {
                     DropLongGaps = s.Bool("drop_long_gaps") ?? false,
                     CalendarYear = s.Number("calendar_year") is double y ? (int)Math.Round(y) : null,
+                    HumidityOver = s.Text("humidity_over") switch
+                    {
+                        "water" => Psychrometrics.HumidityOver.Water,
+                        "ice" => Psychrometrics.HumidityOver.Ice,
+                        _ => null,
+                    },
                 });
             }
 

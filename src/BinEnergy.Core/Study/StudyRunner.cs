@@ -55,6 +55,7 @@ public static class StudyRunner
             ElevationM = climate.ElevationM,
             AllowDroppingLongGaps = climate.DropLongGaps,
             CalendarYear = climate.CalendarYear ?? CalendarInfo.DefaultTypicalYear,
+            HumidityOver = climate.HumidityOver,
         };
         return WeatherReader.Read(climate.WeatherPath, options);
     }

@@ -46,6 +46,8 @@ internal static class StudySchema
             Bool("drop_long_gaps", "Leave hours in gaps longer than 6 h out (counted and reported) instead of stopping with an error.", "false"),
             new KeyDefinition("calendar_year", ValueKind.Number, Unitless("calendar_year"), "Year whose weekdays a typical-year file uses.")
             { Min = 1900, Max = 2200, DefaultText = "2018 (a non-leap year starting on a Monday)", RangeHint = "a year from 1900 to 2200" },
+            Choice("humidity_over", ["water", "ice"], "the file's (water unless its map or metadata says ice)",
+                "What the file's dew points and RH are relative to below 0 C: liquid water (the usual weather convention) or ice (frost points)."),
         ], false, "One climate (weather file); repeat [[climate]] for several."),
 
         new("schedule", false,

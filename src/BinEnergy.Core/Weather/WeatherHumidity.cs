@@ -120,12 +120,9 @@ internal static class WeatherHumidity
         double used = Misfit(over), alternative = Misfit(other);
         if (alternative <= used - 0.5 && alternative < 1.0)
         {
-            quality.Warn(Inv($"the file's RH column fits its dew points read {Words(other)} better than {Words(over)}, as they are read (mean |difference| {alternative:0.00} vs {used:0.00} points over {hours.Length} hours with a dew point below 0 C): if the source reports dew points {Words(other)}, set humidity_over = \"{other.ToString().ToLowerInvariant()}\" (column map, study climate or --humidity-over)"));
+            quality.Warn(Inv($"the file's RH column fits its dew points better read {HumidityConventions.Words(other)} than {HumidityConventions.Words(over)}, the reading used (mean |difference| {alternative:0.00} vs {used:0.00} RH points over {hours.Length:N0} hours with a dew point below 0 C): if the source reports them {HumidityConventions.Words(other)}, set humidity_over = \"{other.ToString().ToLowerInvariant()}\" (column map, study climate or --humidity-over)"));
         }
     }
-
-    /// <summary>A convention in words.</summary>
-    public static string Words(HumidityOver over) => over == HumidityOver.Water ? "over liquid water" : "as frost points (over ice)";
 
     /// <summary>The other humidity measures, checked against the record's states (DESIGN 5.1): disagreements are counted, not repaired.</summary>
     public static void CheckOtherMeasures(HourlyWeather weather, HourlyGrid grid, RawWeatherTable raw, bool typical)

@@ -106,7 +106,7 @@ public sealed record WeatherQuantityFacts(
     {
         var lines = new List<string>
         {
-            "| map key | quantity | open-layout columns | map units | physical range | |",
+            "| map key | quantity | open-layout columns | map units | physical range | description |",
             "|---|---|---|---|---|---|",
         };
         foreach (var f in All)

@@ -11,7 +11,7 @@ public static class AirDocument
 {
     /// <summary>The handbook's definitions the command uses.</summary>
     public const string HumidityDefinition =
-        "ASHRAE Handbook—Fundamentals 2017, ch. 1: saturation over liquid water at and above 0 C and over ice below 0 C (a dew point below 0 C is a frost point here)";
+        "ASHRAE Handbook—Fundamentals 2017, ch. 1: saturation over liquid water at and above 0 C and over ice below 0 C (a dew point below 0 C is a frost point here; weather files are read over liquid water at every temperature unless humidity_over = \"ice\")";
 
     /// <summary>The document of one state; <paramref name="pressureSource"/> says where the pressure came from.</summary>
     public static ResultDocument Build(AirState state, DisplayUnits u, string pressureSource)

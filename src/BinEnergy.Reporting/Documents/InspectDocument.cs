@@ -1,5 +1,6 @@
 using System.Globalization;
 using BinEnergy.Core.Climate;
+using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Weather;
 using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Tables;
@@ -41,6 +42,7 @@ public static class InspectDocument
             .Text("site_pressure_source", "Site pressure from", w => PressureSource(w.Site.PressureSource))
             .Text("hourly_pressure_source", "Each hour's pressure from", w => w.HourlyPressureFromRecord ? "the pressure column of the file" : "the site pressure (the file has no pressure column)")
             .Number("pressure_mean", u.Pressure, "Mean hourly pressure", w => w.PressurePa.Average())
+            .Text("humidity_over", "Dew points and RH", w => HumidityConventions.Describe(w.HumidityOver))
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Title = "Weather record", Layout = TableLayout.Record }, [weather]));
 
         doc.Add(new ColumnSet<ClimateSummary>()

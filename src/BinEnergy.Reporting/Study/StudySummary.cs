@@ -43,6 +43,7 @@ public static class StudySummary
             .Text("climate", "Climate", x => x.Case.Case.Climate.Name)
             .Text("site", "Site in the file", x => x.Case.Weather.Site.Name, detail: true)
             .Integer("hours_in_record", "Hours", x => x.Case.Weather.Count, detail: true)
+            .Text("humidity_over", "Dew points over", x => x.Case.Weather.HumidityOver == Core.Psychrometrics.HumidityOver.Water ? "water" : "ice", detail: true)
             .Number("elevation", u.Length, "Elevation", x => x.Case.Weather.Site.ElevationM ?? double.NaN)
             .Number("site_pressure", u.Pressure, "Site pressure", x => x.Case.Weather.Site.SitePressurePa)
             .Number("dry_air_density", u.Density, "Dry-air density", x => x.Case.OutdoorAir.Assumptions.DryAirDensity)

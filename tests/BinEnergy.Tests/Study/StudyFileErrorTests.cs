@@ -51,6 +51,7 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("the same value in two units", "cool_to_f = 75", "heat_to_c = 21", "key ventilation.heat_to_c", "heat_to_f (line 19) already sets this value; give it once, in one unit");
         Replace("balance point below absolute plausibility", "balance_point_f = 55", "balance_point_f = -400", "key economizer.balance_point_f", "-400 F is out of range");
         Replace("price that is negative", "price_gas_per_therm = 1.10", "price_gas_per_therm = -1.10", "key plant.price_gas_per_therm", "out of range (negative values have no physical meaning here): expected zero or more");
+        Replace("misspelled humidity convention", "# elevation_ft = 40", "humidity_over = \"frost\"", "key climate.humidity_over", "\"frost\" is not one of \"water\", \"ice\"");
         Replace("a key above every table", "[study]", "name = \"x\"\n[study]", "key name", "keys must be inside a table");
 
         // Demand-controlled ventilation: the profile resets the people part of the people-and-area rates.

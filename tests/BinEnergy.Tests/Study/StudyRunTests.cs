@@ -447,6 +447,43 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void HumidityOver_FromTheStudyFile_ReadsFrostPoints_AndIsNamedInTheSummary()
+    {
+        // A real station whose file reports frost points below 0 C (its RH column fits that reading: 0.00 points mean
+        // difference against 2.37 over water, RealWeatherFileTests), read both ways as two climates of one study.
+        File.Copy(Weather.TestData.Open("703165TY.csv"), Path.Combine(folder, "sand-point.csv.gz"), overwrite: true);
+        string text = ExampleStudy.Text
+            .Replace("name = \"harbor\"\n", "name = \"frost-points\"\n", StringComparison.Ordinal)
+            .Replace("weather = \"harbor.csv\"", "weather = \"sand-point.csv.gz\"\nmap = \"tmy3\"\nhumidity_over = \"ice\"\n\n[[climate]]\nname = \"default\"\nweather = \"sand-point.csv.gz\"\nmap = \"tmy3\"", StringComparison.Ordinal)
+            .Replace("# min_rh_pct = 30", "min_rh_pct = 30", StringComparison.Ordinal);
+        string path = StudyPath(text, "sand-point.toml");
+        var study = Core.Study.StudyFileReader.Read(path);
+        Assert.Equal([HumidityOver.Ice, (HumidityOver?)null], study.Climates.Select(c => c.HumidityOver));
+        var ice = Core.Study.StudyRunner.ReadWeather(study.Climates[0]);
+        var water = Core.Study.StudyRunner.ReadWeather(study.Climates[1]);
+        Assert.Equal(HumidityOver.Ice, ice.HumidityOver);
+        Assert.Equal(HumidityOver.Water, water.HumidityOver);
+        int hour = Array.FindIndex(ice.DewPointC, d => d < -5);
+        Assert.Equal(MoistAir.HumidityRatioFromDewPoint(ice.DewPointC[hour], ice.PressurePa[hour], HumidityOver.Ice), ice.HumidityRatio[hour], 1e-12);
+        Assert.True(water.HumidityRatio[hour] > ice.HumidityRatio[hour]); // the same dew point over water: more water in the air
+        Assert.Contains(water.Quality.Warnings, x => x.Contains("humidity_over = \"ice\"", StringComparison.Ordinal));
+        Assert.DoesNotContain(ice.Quality.Warnings, x => x.Contains("humidity_over", StringComparison.Ordinal));
+
+        string out1 = Path.Combine(folder, "out-humidity-over");
+        var (code, _, err) = Cli("run", path, "--out", out1);
+        Assert.True(code == 0, err);
+        using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
+        var byClimate = summary.RootElement.GetProperty("climates").EnumerateArray()
+            .GroupBy(c => c.GetProperty("climate").GetString()!).ToDictionary(g => g.Key, g => g.First().GetProperty("humidity_over").GetString());
+        Assert.Equal("ice", byClimate["frost-points"]);
+        Assert.Equal("water", byClimate["default"]);
+        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "hourly" && r["variant"] == "minimum")
+            .ToDictionary(r => r["climate"], r => D(r["humidification_kbtu"]));
+        // Frost points mean drier air, so more humidification to 30 % RH.
+        Assert.True(annual["frost-points"] > annual["default"], $"humidification {annual["frost-points"]} (frost points) vs {annual["default"]} (over water)");
+    }
+
+    [Fact]
     public void DegreeDayMethod_FromTheStudyFile_IsUsedAndNamedInSummaryAndReport()
     {
         string out1 = Path.Combine(folder, "out-degree-days");
