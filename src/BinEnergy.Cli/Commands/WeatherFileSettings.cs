@@ -41,6 +41,10 @@ public class WeatherFileSettings : CommonSettings
     [StudyKey("climate", "humidity_over")]
     public Core.Psychrometrics.HumidityOver? HumidityOver { get; init; }
 
+    [CommandOption("--max-input-mb <MB>")]
+    [Description("Largest weather file read, and the largest its gzip data may decompress to, MB. Default 1024 (about 1,000 station-years).")]
+    public double? MaxInputMb { get; init; }
+
     /// <summary>The weather file and how it is read, for headings.</summary>
     internal string Source(WeatherReadOptions options) => Weather + " (" + (options.Map?.Source ?? "open layout") + ")";
 
@@ -59,6 +63,11 @@ public class WeatherFileSettings : CommonSettings
             return Spectre.Console.ValidationResult.Error(FormattableString.Invariant($"--elevation {z} is outside -500 to 9,000 m (-1,640 to 29,500 ft)"));
         }
 
+        if (MaxInputMb is double mb && !(mb >= 0.001 && mb <= 1_000_000))
+        {
+            return Spectre.Console.ValidationResult.Error(FormattableString.Invariant($"--max-input-mb {mb} is outside 0.001 to 1,000,000 MB"));
+        }
+
         if (CalendarYear is int y && (y < 1900 || y > 2200))
         {
             return Spectre.Console.ValidationResult.Error($"--calendar-year {y} is outside 1900 to 2200");
@@ -75,5 +84,6 @@ public class WeatherFileSettings : CommonSettings
         AllowDroppingLongGaps = DropLongGaps,
         CalendarYear = CalendarYear ?? CalendarInfo.DefaultTypicalYear,
         HumidityOver = HumidityOver,
+        MaxBytes = MaxInputMb is double mb ? (long)(mb * 1048576) : Core.Errors.InputFiles.DefaultMaxBytes,
     };
 }

@@ -18,13 +18,19 @@ public static class StudyFileReader
     /// <exception cref="StudyFileException">The file is missing, not TOML, or not a valid study.</exception>
     public static StudyDefinition Read(string path)
     {
-        if (!System.IO.File.Exists(path))
+        if (!System.IO.File.Exists(path) && !Directory.Exists(path))
         {
             throw new StudyFileException(path, null, null, "the study file does not exist; check the path");
         }
 
-        string text = System.IO.File.ReadAllText(path);
-        return Parse(text, path, Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".");
+        // A study is a few kilobytes: 16 MiB is far more than any needs, and stops a device or a wrong file early.
+        var (text, problem) = Errors.InputFiles.ReadText(path, 16L << 20, "a smaller study file");
+        if (problem is not null)
+        {
+            throw new StudyFileException(path, null, null, "the study file " + problem.Text + "; " + char.ToLowerInvariant(problem.Fix[0]) + problem.Fix[1..]);
+        }
+
+        return Parse(text!, path, Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".");
     }
 
     /// <summary>

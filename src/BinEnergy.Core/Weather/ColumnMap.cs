@@ -83,14 +83,22 @@ public sealed record ColumnMap
             return Parse(shipped, "shipped map " + nameOrPath.ToLowerInvariant(), nameOrPath.ToLowerInvariant());
         }
 
-        if (!File.Exists(nameOrPath))
+        if (!File.Exists(nameOrPath) && !Directory.Exists(nameOrPath))
         {
             throw new WeatherDataException(WeatherErrorKind.MapNotFound, nameOrPath,
                 "no shipped column map has this name and no map file is at this path",
                 "Use one of the shipped maps (" + string.Join(", ", ShippedNames) + ") or the path of a TOML map file (see docs/weather.md)");
         }
 
-        return Parse(File.ReadAllText(nameOrPath), nameOrPath, Path.GetFileNameWithoutExtension(nameOrPath));
+        // A map is a few hundred bytes: 1 MiB is far more than any needs, and stops a device or a wrong file early.
+        var (text, problem) = Errors.InputFiles.ReadText(nameOrPath, 1L << 20, "a smaller map file");
+        if (problem is not null)
+        {
+            throw new WeatherDataException(problem.Kind == Errors.InputFiles.ProblemKind.Path ? WeatherErrorKind.MapNotFound : WeatherErrorKind.BadMap, nameOrPath,
+                "the column map " + problem.Text, problem.Kind == Errors.InputFiles.ProblemKind.TooLarge ? "A column map is a short TOML file (see docs/weather.md); check the path" : problem.Fix);
+        }
+
+        return Parse(text!, nameOrPath, Path.GetFileNameWithoutExtension(nameOrPath));
     }
 
     /// <summary>Parses a map from TOML text; <paramref name="source"/> names it in messages.</summary>

@@ -6,6 +6,9 @@ public enum WeatherErrorKind
     /// <summary>The weather file does not exist or cannot be opened.</summary>
     FileNotFound,
 
+    /// <summary>The file, or its decompressed data, is above the size limit.</summary>
+    FileTooLarge,
+
     /// <summary>The file has no bytes (or only blank lines).</summary>
     EmptyFile,
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using System.IO.Compression;
 using System.Text;
 using System.Text.RegularExpressions;
+using BinEnergy.Core.Errors;
 using CsvHelper;
 
 namespace BinEnergy.Core.Weather;
@@ -22,53 +23,32 @@ internal static class WeatherFileParser
     private static readonly string[] OpenMetadataKeys = ["name", "elevation_m", "elevation_ft", "latitude", "longitude", "utc_offset_h", "typical_year", "humidity_over"];
 
 
-    /// <summary>Reads the whole file as bytes, un-gzipping when it is gzip data.</summary>
-    public static byte[] LoadBytes(string path)
+    /// <summary>
+    /// Reads the whole file as bytes, un-gzipping when it is gzip data, within the bounds of <see cref="InputFiles"/>: a
+    /// regular file of at most <paramref name="maxBytes"/>, also once decompressed.
+    /// </summary>
+    public static byte[] LoadBytes(string path, long maxBytes = InputFiles.DefaultMaxBytes)
     {
-        byte[] data;
-        try
+        var (data, problem, gzip) = InputFiles.Read(path, maxBytes, WeatherReadOptions.LimitOption, decompress: true);
+        if (problem is not null)
         {
-            data = File.ReadAllBytes(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new WeatherDataException(WeatherErrorKind.FileNotFound, path, "the weather file cannot be opened: " + e.Message.TrimEnd('.'),
-                "Check the path and that the file can be read", inner: e);
-        }
-
-        bool gzipMagic = data.Length >= 2 && data[0] == 0x1f && data[1] == 0x8b;
-        if (!gzipMagic)
-        {
-            if (path.EndsWith(".gz", StringComparison.OrdinalIgnoreCase) && data.Length > 0)
+            throw problem.Kind switch
             {
-                throw new WeatherDataException(WeatherErrorKind.BadCompression, path, "the name ends in .gz but the file is not gzip data",
-                    "Compress it with gzip, or remove the .gz from its name");
-            }
-
-            return data;
+                InputFiles.ProblemKind.Empty => new WeatherDataException(WeatherErrorKind.EmptyFile, path, problem.Text,
+                    "An open-layout weather file starts with optional '# key: value' lines, then the line " + OpenLayoutWriter.Header + ", then one row per hour; " + char.ToLowerInvariant(problem.Fix[0]) + problem.Fix[1..]),
+                InputFiles.ProblemKind.Damaged => new WeatherDataException(WeatherErrorKind.BadCompression, path, problem.Text, problem.Fix),
+                InputFiles.ProblemKind.TooLarge => new WeatherDataException(WeatherErrorKind.FileTooLarge, path, problem.Text, problem.Fix),
+                _ => new WeatherDataException(WeatherErrorKind.FileNotFound, path, "the weather file cannot be opened: " + problem.Text, problem.Fix),
+            };
         }
 
-        try
+        if (path.EndsWith(".gz", StringComparison.OrdinalIgnoreCase) && !gzip)
         {
-            using var input = new MemoryStream(data);
-            using var gz = new GZipStream(input, CompressionMode.Decompress);
-            using var output = new MemoryStream(data.Length * 4);
-            gz.CopyTo(output);
-
-            // The gzip trailer ends with the uncompressed size mod 2^32 (RFC 1952, ISIZE): a file cut short fails this check.
-            uint size = data.Length >= 18 ? BitConverter.ToUInt32(data, data.Length - 4) : uint.MaxValue;
-            if (size != (uint)output.Length)
-            {
-                throw new InvalidDataException("the size in the gzip trailer does not match the data");
-            }
-
-            return output.ToArray();
+            throw new WeatherDataException(WeatherErrorKind.BadCompression, path, "the name ends in .gz but the file is not gzip data",
+                "Compress it with gzip, or remove the .gz from its name");
         }
-        catch (InvalidDataException e)
-        {
-            throw new WeatherDataException(WeatherErrorKind.BadCompression, path, "the gzip data is damaged or truncated (" + e.Message.TrimEnd('.') + ")",
-                "Download or compress the file again", inner: e);
-        }
+
+        return data!;
     }
 
     /// <summary>Parses a file's bytes with a map (null: the open layout).</summary>

@@ -30,6 +30,12 @@ public sealed record WeatherReadOptions
     /// </summary>
     public Psychrometrics.HumidityOver? HumidityOver { get; init; }
 
+    /// <summary>The largest weather file read, and the largest its gzip data may decompress to, bytes (default 1 GiB).</summary>
+    public long MaxBytes { get; init; } = Errors.InputFiles.DefaultMaxBytes;
+
+    /// <summary>The option that raises <see cref="MaxBytes"/>, named in the message.</summary>
+    internal const string LimitOption = "--max-input-mb";
+
     /// <summary>Options for the open layout with the defaults.</summary>
     public static WeatherReadOptions Default { get; } = new();
 
@@ -44,6 +50,11 @@ public sealed record WeatherReadOptions
         if (CalendarYear < 1900 || CalendarYear > 2200)
         {
             throw new ArgumentOutOfRangeException(nameof(CalendarYear), CalendarYear, "the calendar year must be between 1900 and 2200");
+        }
+
+        if (MaxBytes < 1)
+        {
+            throw new ArgumentOutOfRangeException(nameof(MaxBytes), MaxBytes, "the size limit must be at least one byte");
         }
 
         if (ElevationM is double z && !(z >= -500 && z <= 9000))

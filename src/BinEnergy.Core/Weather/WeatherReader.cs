@@ -17,7 +17,7 @@ public static class WeatherReader
     {
         options ??= WeatherReadOptions.Default;
         options.Validate();
-        return Read(WeatherFileParser.LoadBytes(path), path, options);
+        return Read(WeatherFileParser.LoadBytes(path, options.MaxBytes), path, options);
     }
 
     /// <summary>Reads weather from bytes already in memory (already un-gzipped); <paramref name="fileName"/> names it in messages.</summary>

@@ -46,17 +46,13 @@ public static partial class MonthlyClimateReader
     /// <exception cref="MonthlyClimateException">The file is missing, unreadable or holds impossible values.</exception>
     public static MonthlyClimate Read(string path)
     {
-        string text;
-        try
+        var (text, problem) = Errors.InputFiles.ReadText(path, 16L << 20, "a smaller file (a monthly-statistics file is 12 rows)");
+        if (problem is not null)
         {
-            text = File.ReadAllText(path);
-        }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-        {
-            throw new MonthlyClimateException(path, null, null, $"cannot be read ({e.Message}); check the path given to --monthly");
+            throw new MonthlyClimateException(path, null, null, $"cannot be read ({problem.Text}); check the path given to --monthly");
         }
 
-        return Parse(text, path);
+        return Parse(text!, path);
     }
 
     /// <summary>Parses the text of a file; <paramref name="fileName"/> is used in error messages.</summary>
