@@ -17,15 +17,14 @@ internal static class HourlyStateSolver
     /// </summary>
     private const double Accuracy = 1e-6;
 
-    /// <summary>Dew point in C from vapour pressure in Pa (eqs. 5 and 6 inverted), over water or over ice below 0 C.</summary>
+    /// <summary>Dew point in C from vapour pressure in Pa (eqs. 5 and 6 inverted), over water or over ice below 0 C; -100 C (the equations' lower end) for less vapour.</summary>
     public static double DewPointFromVapourPressure(double vapourPressurePa, HumidityOver over = HumidityOver.Ice)
     {
-        if (!(vapourPressurePa > 0))
-        {
-            return Saturation.MinTemperatureC;
-        }
-
         double target = Math.Log(vapourPressurePa);
+        if (!(target > Saturation.LnVapourPressure(Saturation.MinTemperatureC, over)))
+        {
+            return Saturation.MinTemperatureC; // dry air, or so little vapour that its dew point is below the equations' -100 C
+        }
 
         // First guess: the Magnus form over water, p_ws = 611.2 exp(17.62 t / (243.12 + t)) (WMO 2008, Guide to
         // Meteorological Instruments, annex 4.B); within about 1 K of eqs. 5 and 6 between -40 and 50 C.

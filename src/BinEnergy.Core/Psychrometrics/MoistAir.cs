@@ -168,7 +168,9 @@ public static class MoistAir
                 FormattableString.Invariant($"humidity ratio {humidityRatio:0.######} kg/kg is above saturation ({ws:0.######}) at {dryBulbC:0.##} C"));
         }
 
-        double low = humidityRatio > 0 ? DewPoint(humidityRatio, pressurePa) : Saturation.MinTemperatureC;
+        // The bracket's low end: the frost or dew point, or -100 C (the equations' end) for air with less vapour than that.
+        double pw = VapourPressureFromHumidityRatio(humidityRatio, pressurePa);
+        double low = pw > Saturation.VapourPressurePa(Saturation.MinTemperatureC) ? DewPointFromVapourPressure(pw) : Saturation.MinTemperatureC;
         low = Math.Min(low, dryBulbC);
         if (dryBulbC - low < SolverAccuracyK)
         {
