@@ -39,18 +39,24 @@ public static class CliApp
             CommandRegistry.Register(config, new CommandOutput(console, stdout, stderr));
         });
 
+        string? command = args.FirstOrDefault(a => CommandRegistry.SettingsTypes.ContainsKey(a));
         try
         {
+            if (Array.IndexOf(args, "-") >= 0)
+            {
+                throw new UsageException("'-' (standard input) is not read: give the path of a file (save a stream to a file first)");
+            }
+
             return app.Run(args);
         }
         catch (CommandParseException e)
         {
-            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message));
+            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : UsageMessages.Explain(e.Message, command, args));
             return ExitCodes.Usage;
         }
         catch (CommandRuntimeException e)
         {
-            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : Explain(e.Message));
+            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : UsageMessages.Explain(e.Message, command, args));
             return ExitCodes.Usage;
         }
         catch (UsageException e)
@@ -92,17 +98,5 @@ public static class CliApp
         }
 
         return null;
-    }
-
-    /// <summary>Rewords the parser's type-conversion message into plain language.</summary>
-    private static string Explain(string message)
-    {
-        var m = System.Text.RegularExpressions.Regex.Match(message, "^Failed to convert '(.*)' to (.*)\\.$");
-        if (!m.Success)
-        {
-            return message + " (see binenergy --help)";
-        }
-
-        return $"'{m.Groups[1].Value}' is not a valid value for that option: a number is expected, with a dot as the decimal separator (see --help)";
     }
 }

@@ -6,60 +6,77 @@ namespace BinEnergy.Cli;
 /// <summary>The list of commands. Each command lives in its own file under Commands/.</summary>
 internal static class CommandRegistry
 {
+    /// <summary>Each command's settings type, by name (for messages about its options).</summary>
+    public static Dictionary<string, Type> SettingsTypes { get; } = new(StringComparer.Ordinal);
+
     public static void Register(IConfigurator config, CommandOutput output)
     {
-        config.AddCommand<AirCommand>("air")
+        ICommandConfigurator Add<T>(string name)
+            where T : class, ICommand
+        {
+            for (var t = typeof(T); t is not null; t = t.BaseType)
+            {
+                if (t.IsGenericType && t.GetGenericTypeDefinition() == typeof(Command<>))
+                {
+                    SettingsTypes[name] = t.GetGenericArguments()[0];
+                }
+            }
+
+            return config.AddCommand<T>(name);
+        }
+
+        Add<AirCommand>("air")
             .WithData(output)
             .WithDescription("Properties of one moist-air state and its airflow factors at the site.")
             .WithExample("air", "--drybulb", "95", "--wetbulb", "75", "--elevation", "5000")
             .WithExample("air", "--drybulb", "30", "--rh", "40", "--units", "si", "--json");
 
-        config.AddCommand<InspectCommand>("inspect")
+        Add<InspectCommand>("inspect")
             .WithData(output)
             .WithDescription("Reads a weather file: hours, site, pressure, dry-bulb, degree-days, design conditions and data repairs.")
             .WithExample("inspect", "weather.csv")
             .WithExample("inspect", "725300TYA.CSV", "--map", "tmy3", "--units", "si", "--json");
 
-        config.AddCommand<ConvertCommand>("convert")
+        Add<ConvertCommand>("convert")
             .WithData(output)
             .WithDescription("Reads a weather file through a column map and writes it in the open CSV layout.")
             .WithExample("convert", "725300TYA.CSV", "--map", "tmy3", "--out", "chicago.csv");
 
-        config.AddCommand<BinsCommand>("bins")
+        Add<BinsCommand>("bins")
             .WithData(output)
             .WithDescription("The dry-bulb bin table of a weather file: hours (occupied and not), mean coincident humidity ratio, wet-bulb and enthalpy.")
-            .WithExample("bins", "weather.csv", "--occupied", "Mon-Fri 07:00-19:00; Sat 08:00-13:00")
+            .WithExample("bins", "weather.csv", "--occupied", "\"Mon-Fri 07:00-19:00; Sat 08:00-13:00\"")
             .WithExample("bins", "725300TYA.CSV", "--map", "tmy3", "--by", "month", "--csv")
             .WithExample("bins", "weather.csv", "--joint", "--units", "si", "--json");
 
-        config.AddCommand<OutdoorAirCommand>("outdoor-air")
+        Add<OutdoorAirCommand>("outdoor-air")
             .WithData(output)
             .WithDescription("Annual outdoor-air heating, cooling and dehumidification of one airflow: bin method, hourly check, peaks, assumptions.")
             .WithExample("outdoor-air", "weather.csv", "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60")
-            .WithExample("outdoor-air", "723650TYA.CSV", "--map", "tmy3", "--airflow", "2000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--occupied", "Mon-Fri 07:00-19:00", "--recovery-sensible", "0.75", "--recovery-pressure", "0.8")
+            .WithExample("outdoor-air", "723650TYA.CSV", "--map", "tmy3", "--airflow", "2000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--occupied", "\"Mon-Fri 07:00-19:00\"", "--recovery-sensible", "0.75", "--recovery-pressure", "0.8")
             .WithExample("outdoor-air", "weather.csv", "--airflow", "500", "--heat-to", "21", "--cool-to", "24", "--max-rh", "60", "--units", "si", "--json");
 
-        config.AddCommand<EconomizerCommand>("economizer")
+        Add<EconomizerCommand>("economizer")
             .WithData(output)
             .WithDescription("Economizer controls side by side with the baseline (no economizer): hours per mode, coil energy and savings, by bin and hourly.")
             .WithExample("economizer", "weather.csv", "--supply-airflow", "10000", "--min-outdoor-airflow", "2000", "--supply-temp", "55",
                 "--return-temp", "75", "--return-rh", "50", "--design-load", "216000", "--design-outdoor", "95", "--balance-point", "45")
             .WithExample("economizer", "722040TYA.CSV", "--map", "tmy3", "--units", "si", "--supply-airflow", "4700", "--supply-airflow-min", "1900",
                 "--min-outdoor-airflow", "950", "--supply-temp", "13", "--return-temp", "24", "--return-rh", "50", "--design-load", "63",
-                "--design-outdoor", "35", "--balance-point", "7", "--occupied", "Mon-Fri 07:00-19:00", "--json");
+                "--design-outdoor", "35", "--balance-point", "7", "--occupied", "\"Mon-Fri 07:00-19:00\"", "--json");
 
-        config.AddCommand<SynthCommand>("synth")
+        Add<SynthCommand>("synth")
             .WithData(output)
             .WithDescription("Synthesize an hourly weather year (open layout) from monthly statistics and a seed.")
             .WithExample("synth", "--monthly", "weather-samples/port-verrin-monthly.csv", "--seed", "1", "--out", "port-verrin.csv");
 
-        config.AddCommand<RunCommand>("run")
+        Add<RunCommand>("run")
             .WithData(output)
             .WithDescription("Run a study file: every climate x variant, into tables (Parquet, CSV) and summary.json.")
             .WithExample("run", "harbor-study.toml")
             .WithExample("run", "harbor-study.toml", "--out", "reports/harbor", "--hourly", "--force");
 
-        config.AddCommand<DemoCommand>("demo")
+        Add<DemoCommand>("demo")
             .WithData(output)
             .WithDescription("Runs the bundled demo study (invented climates, four ventilation options, economizer comparison) into reports/demo/.")
             .WithExample("demo")

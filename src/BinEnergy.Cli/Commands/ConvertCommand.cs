@@ -36,7 +36,7 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
 
         if (File.Exists(target) && !settings.Force)
         {
-            throw new UsageException($"{settings.Out} exists; add --force to replace it, or choose another --out");
+            throw new Reporting.Tables.OutputFolderException($"{settings.Out} exists; add --force to replace it, or choose another --out");
         }
 
         var options = settings.ReadOptions();
@@ -62,7 +62,7 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
 
         if (!TextFile.WriteAtomically(target, settings.Force, w => OpenLayoutWriter.Write(weather, w, comments)))
         {
-            throw new UsageException($"{settings.Out} exists; add --force to replace it, or choose another --out");
+            throw new Reporting.Tables.OutputFolderException($"{settings.Out} exists; add --force to replace it, or choose another --out");
         }
 
         output.Write(ConvertDocument.Build(weather, settings.Out), settings);

@@ -28,7 +28,7 @@ public sealed class DemoCommand : Command<DemoCommand.Settings>
         bool force = settings.Out is null;
         if (!force && Directory.Exists(folder) && Directory.EnumerateFileSystemEntries(folder).Any())
         {
-            throw new UsageException($"{folder} already exists and is not empty: choose an empty --out folder (the default reports/demo/ is replaced on every demo)");
+            throw new Reporting.Tables.OutputFolderException($"{folder} already exists and is not empty: choose an empty --out folder (the default reports/demo/ is replaced on every demo)");
         }
 
         output.Error.WriteLine($"Running the demo study {study} (invented climates and building; see weather-samples/README.md).");

@@ -65,7 +65,7 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
         var result = WeatherSynthesizer.Synthesize(climate, seed, settings.Year);
         if (!TextFile.WriteAtomically(fullOut, settings.Force, w => SynthesizedYearWriter.Write(result, monthly, w)))
         {
-            throw new UsageException($"{outPath} exists; add --force to replace it, or choose another --out");
+            throw new Reporting.Tables.OutputFolderException($"{outPath} exists; add --force to replace it, or choose another --out");
         }
 
         output.Write(SynthDocument.Build(result, climate, outPath, settings.DisplayUnits), settings);

@@ -1,0 +1,80 @@
+using System.Reflection;
+using System.Text.RegularExpressions;
+using Spectre.Console.Cli;
+
+namespace BinEnergy.Cli;
+
+/// <summary>The command-line parser's messages in plain words: the nearest option for a misspelled one, what a value should look like, and the command's own help.</summary>
+internal static partial class UsageMessages
+{
+    /// <summary>A parse or conversion message reworded; <paramref name="command"/> is the command the arguments name, if any.</summary>
+    public static string Explain(string message, string? command, string[] args)
+    {
+        string help = command is null ? "(see binenergy --help)" : $"(see binenergy {command} --help)";
+        if (UnknownOption().Match(message) is { Success: true } unknown)
+        {
+            string name = unknown.Groups[1].Value;
+            string? near = command is null ? null : Nearest(name, OptionNames(CommandRegistry.SettingsTypes[command]));
+            return $"--{name} is not an option of {(command is null ? "binenergy" : "binenergy " + command)}" + (near is null ? "" : $"; did you mean --{near}?") + " " + help;
+        }
+
+        if (FailedToConvert().Match(message) is { Success: true } convert)
+        {
+            string value = convert.Groups[1].Value;
+            int at = Array.IndexOf(args, value);
+            string option = at > 0 && args[at - 1].StartsWith("--", StringComparison.Ordinal) ? args[at - 1] : "";
+            var property = command is null || option.Length == 0 ? null : CommandRegistry.SettingsTypes[command].GetProperties()
+                .FirstOrDefault(p => p.GetCustomAttribute<CommandOptionAttribute>()?.LongNames.Contains(option[2..]) == true);
+            var type = property is null ? null : Nullable.GetUnderlyingType(property.PropertyType) ?? property.PropertyType;
+            string expected = (type?.Name ?? convert.Groups[2].Value) switch
+            {
+                "UInt64" or "UInt32" or "UInt16" or "Byte" => "a whole number, 0 or more",
+                "Int64" or "Int32" or "Int16" => "a whole number",
+                "Double" or "Single" or "Decimal" => "a number, with a dot as the decimal separator",
+                var other => "a " + other,
+            };
+            return $"{(option.Length > 0 ? option + " " : "")}{value}: '{value}' is not {expected} {help}";
+        }
+
+        return message.TrimEnd('.') + " " + help;
+    }
+
+    /// <summary>The long option names a settings type declares (with those of its base types).</summary>
+    internal static IEnumerable<string> OptionNames(Type settings) =>
+        settings.GetProperties(BindingFlags.Public | BindingFlags.Instance)
+            .SelectMany(p => p.GetCustomAttribute<CommandOptionAttribute>()?.LongNames ?? []);
+
+    /// <summary>The known name nearest <paramref name="name"/>: within two edits, or one that starts with it.</summary>
+    internal static string? Nearest(string name, IEnumerable<string> known)
+    {
+        var best = known.Select(k => (Name: k, Distance: Distance(name.ToLowerInvariant(), k)))
+            .Where(c => c.Distance <= Math.Max(1, Math.Min(2, name.Length / 3)) || c.Name.StartsWith(name, StringComparison.OrdinalIgnoreCase))
+            .OrderBy(c => c.Distance).ThenBy(c => c.Name, StringComparer.Ordinal).FirstOrDefault();
+        return best.Name;
+    }
+
+    /// <summary>Levenshtein distance (insertions, deletions, substitutions).</summary>
+    private static int Distance(string a, string b)
+    {
+        var row = Enumerable.Range(0, b.Length + 1).ToArray();
+        for (int i = 1; i <= a.Length; i++)
+        {
+            int diagonal = row[0];
+            row[0] = i;
+            for (int j = 1; j <= b.Length; j++)
+            {
+                int above = row[j];
+                row[j] = Math.Min(Math.Min(row[j] + 1, row[j - 1] + 1), diagonal + (a[i - 1] == b[j - 1] ? 0 : 1));
+                diagonal = above;
+            }
+        }
+
+        return row[b.Length];
+    }
+
+    [GeneratedRegex("^Unknown option '(.*)'\\.?$")]
+    private static partial Regex UnknownOption();
+
+    [GeneratedRegex("^Failed to convert '(.*)' to (.*)\\.$")]
+    private static partial Regex FailedToConvert();
+}
