@@ -1,5 +1,6 @@
 using System.ComponentModel;
 using BinEnergy.Cli.Options;
+using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
@@ -18,13 +19,19 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
 {
     public sealed class Settings : EstimateOptions
     {
+        [CommandOption("--system <TYPE>")]
+        [Description("The air system: single-zone (constant airflow, supply temperature follows the load), variable-volume (default; airflow follows the load, reheat at minimum airflow counted) or constant-volume-reheat (fixed supply temperature, reheat counted).")]
+        [TypeConverter(typeof(ChoiceConverter<AirSystemType>))]
+        [StudyKey("economizer", "system")]
+        public AirSystemType? System { get; init; }
+
         [CommandOption("--supply-airflow <N>")]
         [Description("Supply airflow (cfm in ip, L/s in si): the constant flow, or the maximum with --supply-airflow-min. Required.")]
         [StudyKey("economizer", "supply_airflow", nameof(DisplayUnits.Airflow))]
         public double? SupplyAirflow { get; init; }
 
         [CommandOption("--supply-airflow-min <N>")]
-        [Description("Minimum supply airflow of a variable-volume system (cfm or L/s). Without it the flow is constant.")]
+        [Description("Minimum supply airflow of a variable-volume system (cfm or L/s). Default 30 % of the supply airflow, not below the minimum outdoor airflow (recalled from memory).")]
         [StudyKey("economizer", "supply_airflow_min", nameof(DisplayUnits.Airflow))]
         public double? SupplyAirflowMin { get; init; }
 
@@ -45,6 +52,21 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [Description("Supply (coil-leaving) air temperature (F or C). Required.")]
         [StudyKey("economizer", "supply_temp", nameof(DisplayUnits.Temperature))]
         public double? SupplyTemp { get; init; }
+
+        [CommandOption("--supply-temp-reset-max <T>")]
+        [Description("Variable volume: the warmest supply temperature of an outdoor reset (F or C); give it with --supply-temp-reset-outdoor-low and -high. Default: no reset.")]
+        [StudyKey("economizer", "supply_temp_reset_max", nameof(DisplayUnits.Temperature))]
+        public double? SupplyTempResetMax { get; init; }
+
+        [CommandOption("--supply-temp-reset-outdoor-low <T>")]
+        [Description("Outdoor dry-bulb at and below which the reset supply is at its warmest (F or C).")]
+        [StudyKey("economizer", "supply_temp_reset_outdoor_low", nameof(DisplayUnits.Temperature))]
+        public double? SupplyTempResetOutdoorLow { get; init; }
+
+        [CommandOption("--supply-temp-reset-outdoor-high <T>")]
+        [Description("Outdoor dry-bulb at and above which the supply is at --supply-temp (F or C).")]
+        [StudyKey("economizer", "supply_temp_reset_outdoor_high", nameof(DisplayUnits.Temperature))]
+        public double? SupplyTempResetOutdoorHigh { get; init; }
 
         [CommandOption("--return-temp <T>")]
         [Description("Return air temperature (F or C). Required.")]

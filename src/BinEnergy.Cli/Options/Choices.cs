@@ -23,6 +23,8 @@ internal static class Choices
         [typeof(DaylightSaving)] = ("--daylight-saving", "a daylight-saving rule",
             new[] { ("none", DaylightSaving.None), ("north-america", DaylightSaving.NorthAmerica), ("europe", DaylightSaving.Europe) }),
         [typeof(DegreeDayMethod)] = ("--degree-days", "a degree-day method", DegreeDayMethods.All.Select(m => (DegreeDayMethods.Name(m), m)).ToArray()),
+        [typeof(Core.Economizer.AirSystemType)] = ("--system", "an air-system type",
+            Core.Economizer.AirSystemTypes.All.Select(t => (Core.Economizer.AirSystemTypes.Name(t), t)).ToArray()),
         [typeof(BinSplit)] = ("--by", "a split", new[] { ("month", BinSplit.Month), ("block", BinSplit.TimeOfDayBlock) }),
     };
 

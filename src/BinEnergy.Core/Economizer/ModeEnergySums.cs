@@ -13,12 +13,17 @@ internal struct ModeEnergySums
     private double _sensibleJ;
     private double _latentJ;
     private SiteEnergy _compressor;
+    private double _reheatJ;
+    private double _preheatJ;
+    private double _unmetJ;
+    private SiteEnergy _heating;
 
     /// <summary>
     /// Adds <paramref name="hours"/> of an hour's result (loads in W, energy in J), and the
-    /// compressor energy for its coil load at <paramref name="cop"/> through <paramref name="plant"/> (when given).
+    /// compressor energy for its coil load at <paramref name="cop"/> and the heating bought for its
+    /// reheat and preheat at <paramref name="outdoorC"/> through <paramref name="plant"/> (when given).
     /// </summary>
-    public void Add(in EconomizerHour hour, double hours, PlantModel? plant, double cop)
+    public void Add(in EconomizerHour hour, double hours, PlantModel? plant, double cop, double outdoorC, CurveClampCounter clamps)
     {
         switch (hour.Mode)
         {
@@ -45,6 +50,16 @@ internal struct ModeEnergySums
         {
             _compressor += plant.Electricity((sensible + latent) / cop);
         }
+
+        double reheat = hour.ReheatW * seconds;
+        double preheat = hour.PreheatW * seconds;
+        _reheatJ += reheat;
+        _preheatJ += preheat;
+        _unmetJ += hour.UnmetW * seconds;
+        if (plant is not null && reheat + preheat > 0)
+        {
+            _heating += plant.Heating(reheat + preheat, outdoorC, hours, clamps);
+        }
     }
 
     /// <summary>Adds another set of sums.</summary>
@@ -57,8 +72,18 @@ internal struct ModeEnergySums
         _sensibleJ += other._sensibleJ;
         _latentJ += other._latentJ;
         _compressor += other._compressor;
+        _reheatJ += other._reheatJ;
+        _preheatJ += other._preheatJ;
+        _unmetJ += other._unmetJ;
+        _heating += other._heating;
     }
 
     public readonly EconomizerTotals ToTotals() =>
-        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ), _compressor);
+        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ), _compressor)
+        {
+            Reheat = Energy.FromJoules(_reheatJ),
+            Preheat = Energy.FromJoules(_preheatJ),
+            Unmet = Energy.FromJoules(_unmetJ),
+            Heating = _heating,
+        };
 }

@@ -43,8 +43,16 @@ internal static class EconomizerSettingsBuilder
             assumptions.Add("economizer: " + HighLimits.SuggestedNote + " (for the limits the study does not set)");
         }
 
+        var system = AirSystemType.VariableVolume;
+        if (e.Text("system") is string systemName && !AirSystemTypes.TryParse(systemName, out system))
+        {
+            throw e.ErrorAt("system", $"\"{systemName}\" is not an air-system type");
+        }
+
         var settings = new EconomizerSettings
         {
+            System = system,
+            Reset = Reset(e),
             SupplyAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("supply_airflow")),
             SupplyAirflowMin = e.Number("supply_airflow_min") is double min ? VolumeFlow.FromCubicMetresPerSecond(min) : null,
             MinOutdoorAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("min_outdoor_airflow")),
@@ -61,6 +69,11 @@ internal static class EconomizerSettingsBuilder
             Limits = limits,
             BinPoint = outdoorAir.BinPoint,
         };
+        if (settings.MinimumAirflowIsDefault)
+        {
+            assumptions.Add(FormattableString.Invariant($"economizer: variable-volume minimum supply airflow {EconomizerSettings.DefaultMinimumFraction * 100:0} % of the maximum, not below the minimum outdoor airflow (recalled from memory; set supply_airflow_min, the energy code adopted locally limits reheat at minimum airflow)"));
+        }
+
         var problem = settings.Problems().FirstOrDefault();
         if (problem is not null)
         {
@@ -69,5 +82,27 @@ internal static class EconomizerSettingsBuilder
         }
 
         return settings;
+    }
+
+    /// <summary>The supply-temperature reset of the three keys, null when none is set; a partial reset names the missing key.</summary>
+    private static SupplyTemperatureReset? Reset(StudySection e)
+    {
+        string[] keys = ["supply_temp_reset_max", "supply_temp_reset_outdoor_low", "supply_temp_reset_outdoor_high"];
+        var given = keys.Where(e.Has).ToList();
+        if (given.Count == 0)
+        {
+            return null;
+        }
+
+        string? missing = keys.FirstOrDefault(k => !e.Has(k));
+        if (missing is not null)
+        {
+            throw e.ErrorAt(given[0], $"a supply-temperature reset needs all three of {string.Join(", ", keys)}; {missing} is missing");
+        }
+
+        return new SupplyTemperatureReset(
+            Temperature.FromCelsius(e.RequiredNumber(keys[0])),
+            Temperature.FromCelsius(e.RequiredNumber(keys[1])),
+            Temperature.FromCelsius(e.RequiredNumber(keys[2])));
     }
 }

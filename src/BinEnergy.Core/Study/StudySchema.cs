@@ -94,8 +94,15 @@ internal static class StudySchema
         new("economizer", false,
         [
             Bool("enabled", "Set false to evaluate no economizer (e.g. in a variant).", "true"),
+            Choice("system", [.. Economizer.AirSystemTypes.All.Select(Economizer.AirSystemTypes.Name)], Economizer.AirSystemTypes.Name(Economizer.AirSystemType.VariableVolume),
+                "How the air system meets the load: single-zone (constant airflow, supply temperature follows the load), variable-volume (airflow follows the load, reheat at minimum airflow) or constant-volume-reheat."),
             new KeyDefinition("supply_airflow", ValueKind.Number, Flow("supply_airflow"), "Supply airflow (the maximum, for variable volume).") { Min = 0, MinExclusive = true, Max = 1000 },
-            new KeyDefinition("supply_airflow_min", ValueKind.Number, Flow("supply_airflow_min"), "Minimum supply airflow; gives variable volume.") { Min = 0, MinExclusive = true, Max = 1000 },
+            new KeyDefinition("supply_airflow_min", ValueKind.Number, Flow("supply_airflow_min"), "Minimum supply airflow of a variable-volume system.")
+            { Min = 0, MinExclusive = true, Max = 1000, DefaultText = "30 % of supply_airflow, not below min_outdoor_airflow (recalled from memory)" },
+            new KeyDefinition("supply_temp_reset_max", ValueKind.Number, Temperature("supply_temp_reset_max"), "Variable volume: the warmest supply temperature of an outdoor reset (with the two outdoor temperatures below).")
+            { Min = 0, Max = 30, DefaultText = "no reset" },
+            new KeyDefinition("supply_temp_reset_outdoor_low", ValueKind.Number, Temperature("supply_temp_reset_outdoor_low"), "Outdoor dry-bulb at and below which the reset supply is at its warmest.") { Min = -40, Max = 50 },
+            new KeyDefinition("supply_temp_reset_outdoor_high", ValueKind.Number, Temperature("supply_temp_reset_outdoor_high"), "Outdoor dry-bulb at and above which the supply is at supply_temp.") { Min = -40, Max = 50 },
             new KeyDefinition("min_outdoor_airflow", ValueKind.Number, Flow("min_outdoor_airflow"), "Minimum outdoor airflow.") { Min = 0, Max = 1000 },
             Choice("flow_basis", ["site", "standard", "actual"], "the ventilation flow basis", "How volume flow turns into mass of dry air."),
             new KeyDefinition("supply_temp", ValueKind.Number, Temperature("supply_temp"), "Supply air temperature.") { Min = 0, Max = 30 },

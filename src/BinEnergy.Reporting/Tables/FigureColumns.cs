@@ -94,7 +94,11 @@ public static class FigureColumns
             .Number("coil_latent", u.Energy, "Coil, latent", x => x.Control.Totals[x.Method].CoilLatent.Joules, detail: true)
             .Number("coil_total", u.Energy, "Coil total", x => x.Control.Totals[x.Method].CoilTotal.Joules)
             .Number("savings", u.Energy, "Savings", x => x.Control.Savings(x.Method).Joules)
-            .Number("savings", u.Percent, "Share of baseline saved", x => x.Control.SavingsPercent(x.Method) ?? double.NaN);
+            .Number("savings", u.Percent, "Share of baseline saved", x => x.Control.SavingsPercent(x.Method) ?? double.NaN)
+            .Number("reheat", u.Energy, "Reheat", x => x.Control.Totals[x.Method].Reheat.Joules)
+            .Number("preheat", u.Energy, "Preheat", x => x.Control.Totals[x.Method].Preheat.Joules, detail: true)
+            .Number("savings_heating", u.Energy, "Reheat and preheat saved", x => x.Control.HeatingSavings(x.Method).Joules)
+            .Number("unmet", u.Energy, "Unmet load", x => x.Control.Totals[x.Method].Unmet.Joules, detail: true);
         if (!plant)
         {
             return set;
@@ -105,8 +109,10 @@ public static class FigureColumns
             .Number("compressor", u.Cost, "Compressor cost", x => x.Control.Totals[x.Method].Compressor.Cost, detail: true)
             .Number("compressor_carbon", u.Carbon, "Compressor carbon", x => x.Control.Totals[x.Method].Compressor.CarbonKg, detail: true)
             .Number("savings_compressor", u.Electricity, "Compressor saved", x => x.Control.CompressorSavings(x.Method).ElectricityJ)
-            .Number("savings", u.Cost, "Cost saved", x => x.Control.CompressorSavings(x.Method).Cost)
-            .Number("savings_carbon", u.Carbon, "Carbon saved", x => x.Control.CompressorSavings(x.Method).CarbonKg, detail: true);
+            .Number("heating", u.Cost, "Reheat and preheat cost", x => x.Control.Totals[x.Method].Heating.Cost, detail: true)
+            .Number("heating_carbon", u.Carbon, "Reheat and preheat carbon", x => x.Control.Totals[x.Method].Heating.CarbonKg, detail: true)
+            .Number("savings", u.Cost, "Cost saved", x => x.Control.PurchasedSavings(x.Method).Cost)
+            .Number("savings_carbon", u.Carbon, "Carbon saved", x => x.Control.PurchasedSavings(x.Method).CarbonKg, detail: true);
     }
 
     /// <summary>The economizer control's name as tables write it (<c>none</c> for the baseline).</summary>

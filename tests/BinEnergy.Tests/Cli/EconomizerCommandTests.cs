@@ -20,6 +20,27 @@ public class EconomizerCommandTests
     private static string[] Args(params string[] extra) => ["economizer", Melbourne, "--map", "tmy3", .. System, .. extra];
 
     [Fact]
+    public void SystemOption_ChoosesTheType_AndConstantVolumeReheatCountsReheat()
+    {
+        var (code, output, err) = Run(["economizer", Melbourne, "--map", "tmy3", .. System.Skip(4), "--min-outdoor-airflow", "2000", "--supply-airflow", "10000",
+            "--system", "constant-volume-reheat", "--json"]);
+        Assert.True(code == 0, err);
+        using var doc = JsonDocument.Parse(output);
+        Assert.Equal("constant-volume-reheat", doc.RootElement.GetProperty("system").GetString());
+        Assert.True(doc.RootElement.GetProperty("controls").GetProperty("none").GetProperty("reheat_kbtu").GetDouble() > 0);
+
+        var (bad, _, message) = Run(Args("--system", "dual-duct"));
+        Assert.Equal(2, bad);
+        Assert.Contains("--system", message, StringComparison.Ordinal);
+        Assert.Contains("single-zone", message, StringComparison.Ordinal);
+
+        // A minimum airflow belongs to variable volume only: the error names the option.
+        var (wrong, _, why) = Run(Args("--system", "single-zone"));
+        Assert.NotEqual(0, wrong);
+        Assert.Contains("supply-airflow-min", why, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Json_HasTheContractFields_AndReportsNegativeSavings()
     {
         var (code, output, err) = Run(Args("--json", "--controls", "none,fixed-drybulb,differential-drybulb,fixed-enthalpy,differential-enthalpy,fixed-dewpoint"));

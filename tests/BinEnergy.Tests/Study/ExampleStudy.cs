@@ -35,7 +35,9 @@ internal static class ExampleStudy
         pressure_drop_inwc = 0.8
 
         [economizer]                      # leave the table out for none
-        supply_airflow_cfm = 10000        # add supply_airflow_min_cfm for variable volume
+        system = "variable-volume"        # or "single-zone", "constant-volume-reheat"
+        supply_airflow_cfm = 10000
+        supply_airflow_min_cfm = 3000     # variable volume only
         min_outdoor_airflow_cfm = 2000
         supply_temp_f = 55
         return_temp_f = 75

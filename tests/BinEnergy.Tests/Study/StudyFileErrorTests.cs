@@ -36,7 +36,7 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("negative airflow", "airflow_cfm = 2000", "airflow_cfm = -2000", "key ventilation.airflow_cfm", "-2000 cfm is out of range (negative values have no physical meaning here)");
         Replace("variant overriding an unknown key", "ventilation.airflow_cfm = 2600", "ventilation.airflow_cfn = 2600", "key variant.ventilation.airflow_cfn",
             "this variant overrides an unknown key: unknown key 'airflow_cfn' in [ventilation]; did you mean airflow_cfm?");
-        Replace("duplicate variant names", "name = \"plus-30\"", "name = \"minimum\"", "key variant.name", "variant \"minimum\" is already defined on line 57; variant names must be unique");
+        Replace("duplicate variant names", "name = \"plus-30\"", "name = \"minimum\"", "key variant.name", "variant \"minimum\" is already defined on line 59; variant names must be unique");
         Replace("misspelled table", "[plant]", "[plnat]", "key plnat", "unknown table [plnat]; did you mean [plant]?");
         Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
         Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");

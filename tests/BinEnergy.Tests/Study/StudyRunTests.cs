@@ -223,7 +223,7 @@ public sealed class StudyRunTests : IDisposable
             foreach (var c in seen.columns)
             {
                 // Proper types: names are strings, quantities doubles, hours and months 32-bit integers.
-                string expected = c.name is "climate" or "variant" or "method" or "control" or "integration" or "condition" or "time" or "year" ? "VARCHAR"
+                string expected = c.name is "climate" or "variant" or "method" or "control" or "integration" or "condition" or "time" or "year" or "system" ? "VARCHAR"
                     : c.name is "hours_ventilated" or "hours" or "hours_occupied" or "month" or "hour" or "occupied" or "complete_year" ? "INTEGER" : "DOUBLE";
                 Assert.True(expected == c.type, $"{table}.{c.name} is {c.type}, expected {expected}");
             }
