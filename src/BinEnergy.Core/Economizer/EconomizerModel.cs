@@ -34,8 +34,10 @@ namespace BinEnergy.Core.Economizer;
 /// T_mix = x T_o + (1 - x) T_r, W_mix = x W_o + (1 - x) W_r, h_mix = h(T_mix, W_mix) by eq. 32.</item>
 /// <item>Coil: to T_sup, leaving W_l = min(W_mix, W_lim) with W_lim the humidity ratio at T_sup and the
 /// coil-leaving RH (eq. 22/20 with Hyland-Wexler saturation). Sensible part
-/// m_s (1.006 + 1.86 W_mix)(T_mix - T_sup), latent part m_s (W_mix - W_l)(2501 + 1.86 T_sup) kJ/kg, each
-/// when positive; together exactly m_s (h_mix - h_l) of eq. 32 whenever T_mix &gt;= T_sup. Mixed air
+/// m_s (1.006 + 1.86 W_mix)(T_mix - T_sup), latent part m_s (W_mix - W_l)(2501 + 1.86 T_sup - 4.186 T_sup) kJ/kg,
+/// each when positive; together exactly the coil load of Handbook—Fundamentals 2017 ch. 1 ("cooling and
+/// dehumidifying of moist air"), m_s (h_mix - h_l) - m_s (W_mix - W_l) h_w, with the condensate leaving
+/// at T_sup, h_w = 4.186 T_sup kJ/kg, whenever T_mix &gt;= T_sup. Mixed air
 /// below T_sup is preheated: m_s (1.006 + 1.86 W_mix)(T_sup - T_mix), counted as heating.</item>
 /// <item>Integrated: when x = 1 cannot reach T_sup (or the mix is too humid) the economizer stays on
 /// and the coil trims (mode "integrated"). Non-integrated: it locks out to x_min whenever the coil
@@ -84,7 +86,7 @@ public sealed class EconomizerModel
         ReturnEnthalpyJPerKg = MoistAir.Enthalpy(_tR, ReturnHumidityRatio);
         CoilLeavingHumidityLimit = MoistAir.HumidityRatioFromRelativeHumidity(_tS, settings.CoilLeavingRelativeHumidity, sitePressurePa);
         _cpReturn = MoistAir.HumidSpecificHeat(ReturnHumidityRatio);
-        _latentAtSupply = MoistAir.LatentHeat + MoistAir.VapourSpecificHeat * _tS;
+        _latentAtSupply = MoistAir.CondensingHeat(_tS);
         _vs = settings.SupplyAirflow.CubicMetresPerSecond;
         _vsMin = settings.MinimumSupplyAirflow.CubicMetresPerSecond;
         _voa = settings.MinOutdoorAirflow.CubicMetresPerSecond;
@@ -248,7 +250,7 @@ public sealed class EconomizerModel
         double cpMix = MoistAir.HumidSpecificHeat(wMix);
         double sensible = dt > TemperatureToleranceK ? ms * cpMix * dt : 0.0;
         double preheat = dt < -TemperatureToleranceK ? -ms * cpMix * dt : 0.0;
-        double latentHeat = tSup == _tS ? _latentAtSupply : MoistAir.LatentHeat + MoistAir.VapourSpecificHeat * tSup;
+        double latentHeat = tSup == _tS ? _latentAtSupply : MoistAir.CondensingHeat(tSup);
         double latent = wMix > wLeave ? ms * (wMix - wLeave) * latentHeat : 0.0;
 
         // What the supply delivers to the zones against what the load line asks.
