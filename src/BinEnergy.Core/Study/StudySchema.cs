@@ -73,6 +73,10 @@ internal static class StudySchema
             { Min = 0, MinExclusive = true, Max = 100, RangeHint = "a percentage above 0 and at most 100" },
             new KeyDefinition("min_rh_pct", ValueKind.Number, Unitless("min_rh_pct"), "Humidify below this indoor relative humidity at the heating setpoint, %.")
             { Min = 0, Max = 100, RangeHint = "a percentage from 0 to 100" },
+            new KeyDefinition("fan_power", ValueKind.Number, FanPowerPerFlow("fan_power"), "Power of the fan that moves the outdoor air, per unit of outdoor airflow (or give fan_pressure).")
+            { Min = 0, Max = 5000, DefaultText = "from fan_pressure", RangeHint = "0 to 2.4 W/cfm (5 W per L/s)" },
+            new KeyDefinition("fan_pressure", ValueKind.Number, PressureDrop("fan_pressure"), "Total pressure the ventilation fan works against, at plant.fan_efficiency.")
+            { Min = 0, Max = 2500, DefaultText = "1 in. w.g. (250 Pa), recalled from memory", RangeHint = "0 to 2,500 Pa (10 in. w.g.)" },
             new KeyDefinition("occupancy_profile", ValueKind.NumberList, Unitless("occupancy_profile"),
                 "24 fractions (0..1) of the design airflow by hour of the day, for demand-controlled ventilation.") { Min = 0, Max = 1 },
         ], true, "The outdoor air and the indoor targets."),
@@ -217,6 +221,12 @@ internal static class StudySchema
     [
         new(b + "_btuh", "Btu/h", (v, _) => Units.Power.FromBtuPerHour(v).Watts),
         new(b + "_kw", "kW", (v, _) => v * 1000.0),
+    ];
+
+    private static KeyAlternative[] FanPowerPerFlow(string b) =>
+    [
+        new(b + "_w_per_cfm", "W/cfm", (v, _) => v / Conversions.CubicMetresPerSecondPerCfm),
+        new(b + "_w_per_ls", "W per L/s", (v, _) => v * 1000.0),
     ];
 
     private static KeyAlternative[] PressureDrop(string b) =>

@@ -72,6 +72,9 @@ public static class AssumptionText
                 + $"{DisplayUnits.Text(u.Power, a.FanPenalty.Watts)} {(r.BypassWhenIdle ? "in recovering hours" : "in every ventilated hour")}";
         }
 
+        yield return a.VentilationFanPower.Watts > 0
+            ? $"ventilation fan {DisplayUnits.Text(u.Power, a.VentilationFanPower.Watts)} at the design outdoor airflow, in every ventilated hour (fan energy, as electricity)"
+            : "no ventilation fan energy (set to zero)";
         yield return "calendar: " + a.Calendar;
     }
 

@@ -25,6 +25,7 @@ internal static class ExampleStudy
         heat_to_f = 70
         cool_to_f = 75
         max_rh_pct = 50
+        fan_pressure_inwc = 1.0           # ventilation fan at plant.fan_efficiency; or fan_power_w_per_cfm, 0 for none
         # min_rh_pct = 30                 # humidify below this
 
         [recovery]                        # leave the table out for none

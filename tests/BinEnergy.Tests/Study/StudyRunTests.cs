@@ -85,6 +85,7 @@ public sealed class StudyRunTests : IDisposable
             CoolTo = Temperature.FromFahrenheit(75),
             MaxRelativeHumidity = 0.50,
             Recovery = recovery,
+            VentilationFanWattsPerCubicMetrePerSecond = 1.0 * Conversions.PascalsPerInchOfWater / 0.6, // dp / eta (FanPower)
         };
         var variants = new Dictionary<string, OutdoorAirSettings>
         {
