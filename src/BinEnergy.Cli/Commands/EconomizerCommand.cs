@@ -101,6 +101,31 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [StudyKey("economizer", "coil_leaving_rh_pct")]
         public double? CoilLeavingRh { get; init; }
 
+        [CommandOption("--supply-fan-pressure <DP>")]
+        [Description("Total pressure of the supply fan at the supply airflow (in. w.g. in ip, Pa in si); 0 for none. Default 3 in. w.g. (750 Pa), recalled from memory.")]
+        [StudyKey("economizer", "supply_fan_pressure", nameof(DisplayUnits.PressureDrop))]
+        public double? SupplyFanPressure { get; init; }
+
+        [CommandOption("--supply-fan-efficiency <E>")]
+        [Description("Total efficiency of the supply fan. Default 0.6.")]
+        [StudyKey("economizer", "supply_fan_efficiency")]
+        public double? SupplyFanEfficiency { get; init; }
+
+        [CommandOption("--return-fan-pressure <DP>")]
+        [Description("Total pressure of a return fan (in. w.g. or Pa). Default: no return fan.")]
+        [StudyKey("economizer", "return_fan_pressure", nameof(DisplayUnits.PressureDrop))]
+        public double? ReturnFanPressure { get; init; }
+
+        [CommandOption("--return-fan-efficiency <E>")]
+        [Description("Total efficiency of the return fan. Default 0.6.")]
+        [StudyKey("economizer", "return_fan_efficiency")]
+        public double? ReturnFanEfficiency { get; init; }
+
+        [CommandOption("--fan-curve <C0,C1,C2,C3>")]
+        [Description("Variable volume: fan power fraction c0 + c1 f + c2 f^2 + c3 f^3 of the flow fraction f. Default 0.0013,0.1470,0.9506,-0.0998 (an energy-code baseline curve, recalled from memory).")]
+        [StudyKey("economizer", "fan_curve", Numbers = true)]
+        public string? FanCurve { get; init; }
+
         [CommandOption("--controls <NAMES>")]
         [Description("Comma-separated controls to compare with the baseline: fixed-drybulb, differential-drybulb, fixed-enthalpy, differential-enthalpy, fixed-dewpoint. Default: all five.")]
         [StudyKey("economizer", "controls", List = true)]

@@ -268,11 +268,11 @@ public sealed class EconomizerEvaluation
                 double qb = model.BuildingLoadW(t[i]);
                 if (qb <= 0)
                 {
-                    var none = new EconomizerHour(EconomizerMode.NoCooling, 0, 0, 0, 0, 0, 0, 0, 0);
+                    var none = model.NoCooling(t[i], w[i]);
                     for (int c = 0; c < nc; c++)
                     {
-                        monthly[c * 12 + month].Add(in none, 1.0, null, 1.0, t[i], Clamps);
-                        byBin[c * nb + bin].Add(in none, 1.0, null, 1.0, t[i], Clamps);
+                        monthly[c * 12 + month].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
+                        byBin[c * nb + bin].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
                     }
 
                     continue;

@@ -37,6 +37,9 @@ public readonly record struct EconomizerHour(
     /// <summary>Building sensible load the supply cannot meet, W (supply at its coolest and largest).</summary>
     public double UnmetW { get; init; }
 
+    /// <summary>Electric power of the supply and return fans, W (all of it heat in the air).</summary>
+    public double FanW { get; init; }
+
     /// <summary>Total coil load, W: sensible plus latent.</summary>
     public double CoilTotalW => CoilSensibleW + CoilLatentW;
 

@@ -39,6 +39,13 @@ namespace BinEnergy.Core.Economizer;
 /// dehumidifying of moist air"), m_s (h_mix - h_l) - m_s (W_mix - W_l) h_w, with the condensate leaving
 /// at T_sup, h_w = 4.186 T_sup kJ/kg, whenever T_mix &gt;= T_sup. Mixed air
 /// below T_sup is preheated: m_s (1.006 + 1.86 W_mix)(T_sup - T_mix), counted as heating.</item>
+/// <item>Fans: supply and return fan power P = P_design g(f), with P_design = V_max dp / eta
+/// (<see cref="AirSystemFan"/>) and, for variable volume, g the part-load curve at the flow fraction
+/// f = m_s / (rho V_max) (<see cref="FanPartLoadCurve"/>; g = 1 for constant volume). All fan power
+/// is heat in the air (common practice): the supply fan after the coil, so the coil cools to
+/// T_c = T_sup - P_sf / (m_s c_p) and the economizer mixes to T_c; the return fan before the mixing box,
+/// so the return air enters it at T_r + P_rf / (m_s c_p). Fans run in every occupied hour, also
+/// without cooling.</item>
 /// <item>Integrated: when x = 1 cannot reach T_sup (or the mix is too humid) the economizer stays on
 /// and the coil trims (mode "integrated"). Non-integrated: it locks out to x_min whenever the coil
 /// must run (mode "minimum outdoor air"). Enabled with no coil load: "free cooling".</item>
@@ -62,6 +69,9 @@ public sealed class EconomizerModel
     private readonly double _fixedDensity;
     private readonly bool _actual;
     private readonly AirSystemType _system;
+    private readonly double _supplyFanDesignW;
+    private readonly double _returnFanDesignW;
+    private readonly FanPartLoadCurve _fanCurve;
     private readonly SupplyTemperatureReset? _reset;
     private readonly double _latentAtSupply;
 
@@ -91,6 +101,9 @@ public sealed class EconomizerModel
         _vsMin = settings.MinimumSupplyAirflow.CubicMetresPerSecond;
         _voa = settings.MinOutdoorAirflow.CubicMetresPerSecond;
         _system = settings.System;
+        _supplyFanDesignW = settings.SupplyFan?.DesignPowerW(settings.SupplyAirflow) ?? 0.0;
+        _returnFanDesignW = settings.ReturnFan?.DesignPowerW(settings.SupplyAirflow) ?? 0.0;
+        _fanCurve = settings.FanCurve;
         _reset = settings.IsVariableVolume ? settings.Reset : null;
         _actual = settings.FlowBasis == FlowBasis.Actual;
         _fixedDensity = _actual ? double.NaN : FlowBasisDensity.For(settings.FlowBasis, sitePressurePa, _tR, 0.0, sitePressurePa);
@@ -161,6 +174,16 @@ public sealed class EconomizerModel
     }
 
     /// <summary>
+    /// Fan power at a supply mass flow, W: design power times the part-load curve at the flow
+    /// fraction m_s / (rho V_max) for variable volume; design power for constant volume.
+    /// </summary>
+    public (double SupplyW, double ReturnW) FanPowerW(double massFlowKgPerS, double densityKgPerM3)
+    {
+        double fraction = _system == AirSystemType.VariableVolume ? _fanCurve.Fraction(massFlowKgPerS / (densityKgPerM3 * _vs)) : 1.0;
+        return (_supplyFanDesignW * fraction, _returnFanDesignW * fraction);
+    }
+
+    /// <summary>
     /// The control's hour given the hour's load and its baseline (minimum outdoor air) result,
     /// so that a loop over many controls computes the baseline once per hour.
     /// </summary>
@@ -205,16 +228,23 @@ public sealed class EconomizerModel
         // Fixed-point on the dry-air density: one pass for standard and site (constant
         // density); for actual, a few passes until the mixed state's density stops moving.
         double rho = _actual ? MoistAir.DryAirDensity(_tR, wR, SitePressurePa) : _fixedDensity;
-        double ms = 0, x = 0, tMix = 0, wMix = 0, tSup = tSet;
+        double ms = 0, x = 0, tMix = 0, wMix = 0, tSup = tSet, tCoil = tSet, fanW = 0;
         for (int pass = 0; pass < 8; pass++)
         {
             (ms, tSup) = SupplyFlowAndTemperature(qb, tSet, rho);
+
+            // Fan heat: the supply fan after the coil (the coil cools below the supply temperature by
+            // the fan's rise), the return fan before the mixing box (the return air arrives warmer).
+            var (supplyFan, returnFan) = FanPowerW(ms, rho);
+            fanW = supplyFan + returnFan;
+            tCoil = tSup - supplyFan / (ms * _cpReturn);
+            double tRa = _tR + returnFan / (ms * _cpReturn);
             double xMin = Math.Min(1.0, rho * _voa / ms);
             bool exact = false;
             x = xMin;
             if (economizer)
             {
-                double ratio = (_tR - tSup) / (_tR - tO);
+                double ratio = (tRa - tCoil) / (tRa - tO);
                 if (ratio >= 1.0)
                 {
                     x = 1.0;
@@ -226,8 +256,8 @@ public sealed class EconomizerModel
                 }
             }
 
-            // x at the unclamped ratio mixes to exactly the supply temperature by construction.
-            tMix = exact ? tSup : x * tO + (1.0 - x) * _tR;
+            // x at the unclamped ratio mixes to exactly the coil-leaving temperature by construction.
+            tMix = exact ? tCoil : x * tO + (1.0 - x) * tRa;
             wMix = x * wO + (1.0 - x) * wR;
             if (!_actual)
             {
@@ -244,13 +274,13 @@ public sealed class EconomizerModel
         }
 
         double hMix = MoistAir.Enthalpy(tMix, wMix);
-        double limit = tSup == _tS ? CoilLeavingHumidityLimit : MoistAir.HumidityRatioFromRelativeHumidity(tSup, Settings.CoilLeavingRelativeHumidity, SitePressurePa);
+        double limit = tCoil == _tS ? CoilLeavingHumidityLimit : MoistAir.HumidityRatioFromRelativeHumidity(tCoil, Settings.CoilLeavingRelativeHumidity, SitePressurePa);
         double wLeave = Math.Min(wMix, limit);
-        double dt = tMix - tSup;
+        double dt = tMix - tCoil;
         double cpMix = MoistAir.HumidSpecificHeat(wMix);
         double sensible = dt > TemperatureToleranceK ? ms * cpMix * dt : 0.0;
         double preheat = dt < -TemperatureToleranceK ? -ms * cpMix * dt : 0.0;
-        double latentHeat = tSup == _tS ? _latentAtSupply : MoistAir.CondensingHeat(tSup);
+        double latentHeat = tCoil == _tS ? _latentAtSupply : MoistAir.CondensingHeat(tCoil);
         double latent = wMix > wLeave ? ms * (wMix - wLeave) * latentHeat : 0.0;
 
         // What the supply delivers to the zones against what the load line asks.
@@ -263,6 +293,7 @@ public sealed class EconomizerModel
             PreheatW = preheat,
             ReheatW = excess > tolerance ? excess : 0.0,
             UnmetW = excess < -tolerance ? -excess : 0.0,
+            FanW = fanW,
         };
     }
 

@@ -61,6 +61,19 @@ public sealed record EconomizerSettings
     /// <summary>Relative humidity of the air leaving the cooling coil at its wettest, 0 to 1 (default 0.90).</summary>
     public double CoilLeavingRelativeHumidity { get; init; } = 0.90;
 
+    /// <summary>
+    /// The supply fan at the (maximum) supply airflow, or none (the default of the engine; studies
+    /// give their own). Drawn through the coil: its heat raises the supply air, so the coil cools to
+    /// the supply temperature less the fan's temperature rise.
+    /// </summary>
+    public AirSystemFan? SupplyFan { get; init; }
+
+    /// <summary>The return fan at the (maximum) supply airflow, or none: its heat raises the return air before the mixing box.</summary>
+    public AirSystemFan? ReturnFan { get; init; }
+
+    /// <summary>The part-load curve of a variable-volume system's fans (default <see cref="FanPartLoadCurve.Default"/>); constant-volume fans run at design power.</summary>
+    public FanPartLoadCurve FanCurve { get; init; } = FanPartLoadCurve.Default;
+
     /// <summary>The controls compared with the baseline (default: the five economizer controls, integrated).</summary>
     public IReadOnlyList<EconomizerControl> Controls { get; init; } =
         EconomizerControl.EconomizerKinds.Select(k => new EconomizerControl(k, Integrated: true)).ToArray();
@@ -176,6 +189,20 @@ public sealed record EconomizerSettings
         }
 
         problems.AddRange(LoadLine.Problems());
+        if (SupplyFan is not null)
+        {
+            problems.AddRange(SupplyFan.Problems("supply_fan"));
+        }
+
+        if (ReturnFan is not null)
+        {
+            problems.AddRange(ReturnFan.Problems("return_fan"));
+        }
+
+        if (IsVariableVolume && vs > 0 && (SupplyFan is not null || ReturnFan is not null))
+        {
+            problems.AddRange(FanCurve.Problems(vsMin / vs));
+        }
 
         if (Controls.Count == 0)
         {

@@ -39,6 +39,12 @@ public sealed record EconomizerTotals(
     /// <summary>Fuel or electricity bought for the reheat and preheat through the plant's heating (zero without a plant).</summary>
     public SiteEnergy Heating { get; init; } = SiteEnergy.Zero;
 
+    /// <summary>Electricity of the supply and return fans over all the occupied hours (the same for a control and its baseline: the airflow does not depend on the damper).</summary>
+    public Energy Fans { get; init; } = Energy.FromJoules(0);
+
+    /// <summary>The fans' electricity bought through the plant (zero without a plant).</summary>
+    public SiteEnergy FanElectricity { get; init; } = SiteEnergy.Zero;
+
     /// <summary>Every hour and energy multiplied by <paramref name="factor"/> (e.g. to a mean year).</summary>
     public EconomizerTotals Scaled(double factor) => new(HoursNoCooling * factor, HoursFree * factor, HoursIntegrated * factor, HoursMinimum * factor,
         Energy.FromJoules(CoilSensible.Joules * factor), Energy.FromJoules(CoilLatent.Joules * factor), Compressor.Scaled(factor))
@@ -47,13 +53,15 @@ public sealed record EconomizerTotals(
         Preheat = Energy.FromJoules(Preheat.Joules * factor),
         Unmet = Energy.FromJoules(Unmet.Joules * factor),
         Heating = Heating.Scaled(factor),
+        Fans = Energy.FromJoules(Fans.Joules * factor),
+        FanElectricity = FanElectricity.Scaled(factor),
     };
 
     /// <summary>Heating delivered to the air: reheat plus preheat.</summary>
     public Energy HeatingTotal => Reheat + Preheat;
 
-    /// <summary>Everything bought: compressor electricity and the heating fuel for reheat and preheat.</summary>
-    public SiteEnergy Purchased => Compressor + Heating;
+    /// <summary>Everything bought: compressor electricity, the heating fuel for reheat and preheat, and the fans' electricity.</summary>
+    public SiteEnergy Purchased => Compressor + Heating + FanElectricity;
 
     /// <summary>Total coil energy: sensible plus latent.</summary>
     public Energy CoilTotal => CoilSensible + CoilLatent;

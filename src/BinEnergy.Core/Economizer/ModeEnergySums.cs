@@ -17,6 +17,8 @@ internal struct ModeEnergySums
     private double _preheatJ;
     private double _unmetJ;
     private SiteEnergy _heating;
+    private double _fanJ;
+    private SiteEnergy _fan;
 
     /// <summary>
     /// Adds <paramref name="hours"/> of an hour's result (loads in W, energy in J), and the
@@ -25,6 +27,13 @@ internal struct ModeEnergySums
     /// </summary>
     public void Add(in EconomizerHour hour, double hours, PlantModel? plant, double cop, double outdoorC, CurveClampCounter clamps)
     {
+        double fan = hour.FanW * hours * 3600.0;
+        _fanJ += fan;
+        if (plant is not null && fan > 0)
+        {
+            _fan += plant.Electricity(fan);
+        }
+
         switch (hour.Mode)
         {
             case EconomizerMode.NoCooling:
@@ -76,6 +85,8 @@ internal struct ModeEnergySums
         _preheatJ += other._preheatJ;
         _unmetJ += other._unmetJ;
         _heating += other._heating;
+        _fanJ += other._fanJ;
+        _fan += other._fan;
     }
 
     public readonly EconomizerTotals ToTotals() =>
@@ -85,5 +96,7 @@ internal struct ModeEnergySums
             Preheat = Energy.FromJoules(_preheatJ),
             Unmet = Energy.FromJoules(_unmetJ),
             Heating = _heating,
+            Fans = Energy.FromJoules(_fanJ),
+            FanElectricity = _fan,
         };
 }

@@ -8,7 +8,10 @@ namespace BinEnergy.Core.Study;
 /// <summary>Builds the economizer settings of a variant's [economizer] table (null when there is none or it is disabled).</summary>
 internal static class EconomizerSettingsBuilder
 {
-    public static EconomizerSettings? Build(StudySection e, OutdoorAirSettings outdoorAir, OccupancySchedule schedule, List<string> assumptions)
+    /// <summary>Default total pressure of the supply fan, Pa: 3 in. w.g. (recalled from memory: a common total for a central air handler with filters, coils and ducts).</summary>
+    public const double DefaultSupplyFanPressurePa = 3 * Conversions.PascalsPerInchOfWater;
+
+    public static EconomizerSettings? Build(StudySection e, OutdoorAirSettings outdoorAir, OccupancySchedule schedule, List<string> assumptions, StudySection plant)
     {
         if (!e.Present || e.Bool("enabled") == false)
         {
@@ -53,6 +56,11 @@ internal static class EconomizerSettingsBuilder
         {
             System = system,
             Reset = Reset(e),
+            SupplyFan = SupplyFan(e, plant, assumptions),
+            ReturnFan = e.Number("return_fan_pressure") is double rp
+                ? new AirSystemFan(rp, e.Number("return_fan_efficiency") ?? FanEfficiency(plant))
+                : null,
+            FanCurve = FanCurve(e),
             SupplyAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("supply_airflow")),
             SupplyAirflowMin = e.Number("supply_airflow_min") is double min ? VolumeFlow.FromCubicMetresPerSecond(min) : null,
             MinOutdoorAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("min_outdoor_airflow")),
@@ -82,6 +90,37 @@ internal static class EconomizerSettingsBuilder
         }
 
         return settings;
+    }
+
+    private static double FanEfficiency(StudySection plant) => plant.Number("fan_efficiency") ?? PlantSettingsBuilder.DefaultFanEfficiency;
+
+    /// <summary>The supply fan: the study's pressure and efficiency, else the default pressure (stated), none at pressure 0.</summary>
+    private static AirSystemFan? SupplyFan(StudySection e, StudySection plant, List<string> assumptions)
+    {
+        double efficiency = e.Number("supply_fan_efficiency") ?? FanEfficiency(plant);
+        if (e.Number("supply_fan_pressure") is double p)
+        {
+            return p > 0 ? new AirSystemFan(p, efficiency) : null;
+        }
+
+        assumptions.Add(FormattableString.Invariant($"economizer: supply fan 3 in. w.g. (750 Pa) total pressure at efficiency {efficiency:0.##} (recalled from memory; set supply_fan_pressure, 0 for none)"));
+        return new AirSystemFan(DefaultSupplyFanPressurePa, efficiency);
+    }
+
+    /// <summary>The fan part-load curve of <c>fan_curve</c> (four coefficients), else the default.</summary>
+    private static FanPartLoadCurve FanCurve(StudySection e)
+    {
+        if (e.NumberList("fan_curve") is not { } c)
+        {
+            return FanPartLoadCurve.Default;
+        }
+
+        if (c.Count != 4)
+        {
+            throw e.ErrorAt("fan_curve", $"the fan curve takes four coefficients [c0, c1, c2, c3] of c0 + c1 f + c2 f^2 + c3 f^3, not {c.Count}");
+        }
+
+        return new FanPartLoadCurve(c[0], c[1], c[2], c[3]);
     }
 
     /// <summary>The supply-temperature reset of the three keys, null when none is set; a partial reset names the missing key.</summary>

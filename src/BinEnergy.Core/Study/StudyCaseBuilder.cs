@@ -39,7 +39,7 @@ public static class StudyCaseBuilder
             assumptions.Add("no [plant] table: loads only; no energy bought, cost or carbon");
         }
 
-        var economizer = EconomizerSettingsBuilder.Build(s["economizer"], outdoorAir, schedule, assumptions);
+        var economizer = EconomizerSettingsBuilder.Build(s["economizer"], outdoorAir, schedule, assumptions, s["plant"]);
         return new StudyCase(study.Climates[0], variant, outdoorAir, scale, plant, assumptions) { Economizer = economizer };
     }
 

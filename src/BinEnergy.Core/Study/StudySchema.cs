@@ -126,6 +126,16 @@ internal static class StudySchema
             new KeyDefinition("high_limit_dewpoint", ValueKind.Number, Temperature("high_limit_dewpoint"), "Dew-point high limit.") { Min = -20, Max = 35 },
             new KeyDefinition("coil_leaving_rh_pct", ValueKind.Number, Unitless("coil_leaving_rh_pct"), "Relative humidity of the air leaving the coil, %.")
             { Min = 50, Max = 100, DefaultText = "90" },
+            new KeyDefinition("supply_fan_pressure", ValueKind.Number, PressureDrop("supply_fan_pressure"), "Total pressure of the supply fan at the supply airflow; 0 for no supply fan energy.")
+            { Min = 0, Max = 5000, DefaultText = "3 in. w.g. (750 Pa), recalled from memory", RangeHint = "0 to 5,000 Pa (20 in. w.g.)" },
+            new KeyDefinition("supply_fan_efficiency", ValueKind.Number, Unitless("supply_fan_efficiency"), "Total (fan, motor, drive) efficiency of the supply fan.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "plant.fan_efficiency, else 0.6" },
+            new KeyDefinition("return_fan_pressure", ValueKind.Number, PressureDrop("return_fan_pressure"), "Total pressure of a return fan at the supply airflow.")
+            { Min = 0, Max = 5000, DefaultText = "no return fan", RangeHint = "0 to 5,000 Pa (20 in. w.g.)" },
+            new KeyDefinition("return_fan_efficiency", ValueKind.Number, Unitless("return_fan_efficiency"), "Total efficiency of the return fan.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "plant.fan_efficiency, else 0.6" },
+            new KeyDefinition("fan_curve", ValueKind.NumberList, Unitless("fan_curve"), "Variable volume: fan power fraction c0 + c1 f + c2 f^2 + c3 f^3 of the flow fraction f, as [c0, c1, c2, c3].")
+            { Min = -10, Max = 10, DefaultText = "[0.0013, 0.1470, 0.9506, -0.0998] (energy-code baseline curve, recalled from memory)" },
         ], true, "The air system and its economizer controls; leave the table out for none."),
 
         new("plant", false,

@@ -89,6 +89,7 @@ public static class EconomizerDocument
             .Number("reheat", u.Energy, "Reheat", m => best.ByMonth[m].Reheat.Joules)
             .Number("baseline_preheat", u.Energy, "Baseline preheat", m => e.Baseline.ByMonth[m].Preheat.Joules, detail: true)
             .Number("preheat", u.Energy, "Preheat", m => best.ByMonth[m].Preheat.Joules, detail: true)
+            .Number("fans", u.Electricity, "Fans", m => e.Baseline.ByMonth[m].Fans.Joules)
             .Fill(new ResultTable("months") { Title = $"Coil energy and reheat by month, hourly sum ({u.Energy.Symbol})" }, Enumerable.Range(0, 12).Where(m => e.Baseline.ByMonth[m].Hours > 0)));
 
         if (e.Controls.Any(c => IntegrationMethods.All.Any(m => c.Savings(m).Joules < 0)))

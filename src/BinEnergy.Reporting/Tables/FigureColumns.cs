@@ -98,7 +98,8 @@ public static class FigureColumns
             .Number("reheat", u.Energy, "Reheat", x => x.Control.Totals[x.Method].Reheat.Joules)
             .Number("preheat", u.Energy, "Preheat", x => x.Control.Totals[x.Method].Preheat.Joules, detail: true)
             .Number("savings_heating", u.Energy, "Reheat and preheat saved", x => x.Control.HeatingSavings(x.Method).Joules)
-            .Number("unmet", u.Energy, "Unmet load", x => x.Control.Totals[x.Method].Unmet.Joules, detail: true);
+            .Number("unmet", u.Energy, "Unmet load", x => x.Control.Totals[x.Method].Unmet.Joules, detail: true)
+            .Number("fans", u.Electricity, "Fans", x => x.Control.Totals[x.Method].Fans.Joules);
         if (!plant)
         {
             return set;
@@ -110,6 +111,8 @@ public static class FigureColumns
             .Number("compressor_carbon", u.Carbon, "Compressor carbon", x => x.Control.Totals[x.Method].Compressor.CarbonKg, detail: true)
             .Number("savings_compressor", u.Electricity, "Compressor saved", x => x.Control.CompressorSavings(x.Method).ElectricityJ)
             .Number("heating", u.Cost, "Reheat and preheat cost", x => x.Control.Totals[x.Method].Heating.Cost, detail: true)
+            .Number("fans", u.Cost, "Fan cost", x => x.Control.Totals[x.Method].FanElectricity.Cost, detail: true)
+            .Number("purchased", u.Cost, "Cost of everything bought", x => x.Control.Totals[x.Method].Purchased.Cost, detail: true)
             .Number("heating_carbon", u.Carbon, "Reheat and preheat carbon", x => x.Control.Totals[x.Method].Heating.CarbonKg, detail: true)
             .Number("savings", u.Cost, "Cost saved", x => x.Control.PurchasedSavings(x.Method).Cost)
             .Number("savings_carbon", u.Carbon, "Carbon saved", x => x.Control.PurchasedSavings(x.Method).CarbonKg, detail: true);

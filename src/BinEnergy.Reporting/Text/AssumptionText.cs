@@ -101,6 +101,17 @@ public static class AssumptionText
             yield return $"supply-temperature reset: {u.Show(reset.MaxSupply)} at and below {u.Show(reset.OutdoorLow)} outdoors, falling linearly to {u.Show(s.SupplyTemperature)} at and above {u.Show(reset.OutdoorHigh)}";
         }
 
+        yield return (s.SupplyFan, s.ReturnFan) switch
+        {
+            (null, null) => "no fans counted (supply fan pressure 0): the coil sees no fan heat",
+            var (sf, rf) => string.Join("; ", new[]
+            {
+                sf is null ? null : $"supply fan {DisplayUnits.Text(u.PressureDrop, sf.TotalPressurePa)} at efficiency {sf.Efficiency.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)}: {DisplayUnits.Text(u.Power, sf.DesignPowerW(s.SupplyAirflow))} at the supply airflow, its heat after the coil",
+                rf is null ? null : $"return fan {DisplayUnits.Text(u.PressureDrop, rf.TotalPressurePa)} at efficiency {rf.Efficiency.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)}: {DisplayUnits.Text(u.Power, rf.DesignPowerW(s.SupplyAirflow))}, its heat in the return air",
+                s.IsVariableVolume ? "fan power at part flow P / P_design = " + s.FanCurve.Describe() + (s.FanCurve == FanPartLoadCurve.Default ? " (an energy-code baseline curve, recalled from memory)" : " (set by the user)") : null,
+                "fans run in every occupied hour",
+            }.Where(x => x is not null)),
+        };
         yield return "mixed air below the supply temperature is preheated (counted as heating, as is reheat" + (e.HasPlant ? ", bought through the plant's heating" : string.Empty) + "); the baseline is the same system without an economizer";
         yield return FormattableString.Invariant($"minimum outdoor airflow {Flow(s.MinOutdoorAirflow)} (outdoor fraction at least {xMin * 100:0.#} % at full supply airflow{(s.IsVariableVolume ? ", more at reduced airflow" : string.Empty)})");
         yield return FlowBasis(s.FlowBasis).Replace("the air's own state (each hour's outdoor air; a bin's evaluation state at the site pressure); the density shown is the mean", "the coil-entering (mixed-air) state", StringComparison.Ordinal);

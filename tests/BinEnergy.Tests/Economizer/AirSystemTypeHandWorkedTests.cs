@@ -185,4 +185,61 @@ public class AirSystemTypeHandWorkedTests
         var sz = EconomizerTestSystems.HandWorked() with { System = AirSystemType.SingleZone, Reset = reset with { MaxSupply = Temperature.FromCelsius(16) } };
         Assert.Contains(sz.Problems(), p => p.Key == "supply_temp_reset_max" && p.Message.Contains("single-zone", StringComparison.Ordinal));
     }
+
+    [Fact]
+    public void SupplyFan_HeatAfterTheCoil_LowersTheCoilLeavingTemperature()
+    {
+        // Constant volume with reheat, supply fan 500 Pa at efficiency 0.5: P = 1.0 m3/s x 500 / 0.5 = 1,000 W (FanPower).
+        // Fan rise 1,000 / (1.201385 x 1023.2952) = 0.81342 K: the coil cools to 13 - 0.81342 = 12.18658 C.
+        // T_o = 15 C, x = 0.2, T_mix = 22.2 C: sensible = 1.201385 x c_p(W_mix) x (22.2 - 12.18658).
+        var m = Model(AirSystemType.ConstantVolumeReheat, s => s with { SupplyFan = new AirSystemFan(500, 0.5) });
+        double tCoil = 13 - 1_000 / (MassFlow * CpR);
+        var b = Hour(m, EconomizerControl.None, 15, 0.004);
+        Close(1_000, b.FanW);
+        Close(MassFlow * Cp(b.MixedHumidityRatio) * (22.2 - tCoil), b.CoilSensibleW);
+        Close(13, b.SupplyDryBulbC);
+        Close(MassFlow * CpR * 11 - 10_000, b.ReheatW); // the zones still get 13 C air
+
+        // T_o = 11 C: the economizer mixes to the coil-leaving 12.18658 C, x = (24 - 12.18658)/(24 - 11) = 0.908725: free cooling.
+        var e = Hour(m, Differential, 11, 0.004);
+        Assert.Equal(EconomizerMode.FreeCooling, e.Mode);
+        Close((24 - tCoil) / 13, e.OutdoorFraction);
+        Close(tCoil, e.MixedDryBulbC);
+        Close(1_000, e.FanW);
+    }
+
+    [Fact]
+    public void ReturnFan_HeatRaisesTheReturnAirBeforeTheMixingBox()
+    {
+        // Return fan 250 Pa at 0.5: 1.0 x 250 / 0.5 = 500 W; rise 500 / (1.201385 x 1023.2952) = 0.40671 K.
+        // T_o = 15 C, x = 0.2: T_mix = 0.2 x 15 + 0.8 x 24.40671 = 22.52537 C.
+        var m = Model(AirSystemType.ConstantVolumeReheat, s => s with { ReturnFan = new AirSystemFan(250, 0.5) });
+        var h = Hour(m, EconomizerControl.None, 15, 0.004);
+        Close(0.2 * 15 + 0.8 * (24 + 500 / (MassFlow * CpR)), h.MixedDryBulbC);
+        Close(500, h.FanW);
+    }
+
+    [Fact]
+    public void VariableVolumeFan_FollowsThePartLoadCurve()
+    {
+        // Default curve 0.0013 + 0.1470 f + 0.9506 f^2 - 0.0998 f^3 (ASHRAE 90.1 Appendix G, recalled from memory):
+        // f = 1: 0.0013 + 0.147 + 0.9506 - 0.0998 = 0.9991; f = 0.5: 0.0013 + 0.0735 + 0.23765 - 0.012475 = 0.299975.
+        Close(0.9991, FanPartLoadCurve.Default.Fraction(1.0));
+        Close(0.299975, FanPartLoadCurve.Default.Fraction(0.5));
+
+        // T_o = 15 C: m = 10,000 / (1023.2952 x 11) = 0.888385 kg/s (as above), f = 0.888385 / 1.201385 = 0.73946.
+        // Design 1,000 W (500 Pa at 0.5): P = 1,000 x g(0.73946) = 1,000 (0.0013 + 0.10870 + 0.51979 - 0.04035) = 589.4 W.
+        var m = Model(AirSystemType.VariableVolume, s => s with { SupplyFan = new AirSystemFan(500, 0.5) });
+        double f = 10_000 / (CpR * 11) / MassFlow;
+        double g = 0.0013 + 0.1470 * f + 0.9506 * f * f - 0.0998 * f * f * f;
+        var h = Hour(m, EconomizerControl.None, 15, 0.004);
+        Close(1_000 * g, h.FanW); // the airflow follows the zone load; the coil, not the zone, absorbs the fan heat
+        Assert.InRange(h.FanW, 589, 590);
+
+        // Below the balance point the fans still run, at the minimum airflow (f = 0.3): 1,000 x g(0.3).
+        var idle = Hour(m, EconomizerControl.None, 5, 0.003);
+        Assert.Equal(EconomizerMode.NoCooling, idle.Mode);
+        Close(1_000 * FanPartLoadCurve.Default.Fraction(0.3), idle.FanW);
+        Assert.Equal(0.0, idle.CoilTotalW);
+    }
 }
