@@ -3,7 +3,7 @@ namespace BinEnergy.Core.Plant;
 /// <summary>
 /// Turns thermal loads into energy bought (DESIGN 9): heating load / efficiency (or / heat-pump
 /// COP at the outdoor temperature) of the heating fuel; cooling coil load / COP at the outdoor
-/// temperature as electricity; fan and humidifier energy as electricity. Loads are in joules,
+/// temperature as electricity; fan energy as electricity; humidification by the humidifier type. Loads are in joules,
 /// over an hour or a bin's hours; the outdoor temperature is the hour's dry-bulb or the bin's
 /// evaluation point (mean dry-bulb or midpoint). Every evaluation of a COP curve outside its points is counted in
 /// <see cref="CurveClampCounter"/> (the curve holds its end value there).
@@ -28,7 +28,7 @@ public sealed class PlantModel(PlantSettings settings)
         bought.Add(EndUse.Heating, Heating(loads.Heating.Joules, outdoorC, hours, clamps));
         bought.Add(EndUse.Cooling, Cooling(loads.Cooling.Joules, outdoorC, hours, clamps));
         bought.Add(EndUse.Fans, Electricity(loads.FanEnergy.Joules));
-        bought.Add(EndUse.Humidification, Humidification(loads.Humidification.Joules));
+        bought.Add(EndUse.Humidification, Humidification(loads.Humidification.Joules, outdoorC, hours, clamps));
         return bought;
     }
 
@@ -85,9 +85,30 @@ public sealed class PlantModel(PlantSettings settings)
         return Electricity(coilJ / CoolingCop(outdoorC, hours, clamps));
     }
 
-    /// <summary>Electricity bought for a humidification load, J.</summary>
-    public SiteEnergy Humidification(double humidificationJ) =>
-        humidificationJ <= 0 ? SiteEnergy.Zero : Electricity(humidificationJ / Settings.HumidifierEfficiency);
+    /// <summary>
+    /// Energy bought for a humidification load, J: the load is h_fg (W_min - W_o) per kg of dry air at
+    /// h_fg = 2,501 kJ/kg (<see cref="Loads.OutdoorAirLoad"/>), so the water added is load / 2,501 kJ/kg.
+    /// Steam (electric or gas): water x <see cref="PlantSettings.SteamJoulesPerKilogram"/> over the
+    /// humidifier efficiency, in electricity or gas. Adiabatic: the air gives the water its latent heat
+    /// (water x 2,501 kJ/kg), which the heating source puts back (bought as heating, at its efficiency
+    /// or COP); the pump's electricity is left out.
+    /// </summary>
+    public SiteEnergy Humidification(double humidificationJ, double outdoorC, double hours, CurveClampCounter clamps)
+    {
+        if (humidificationJ <= 0)
+        {
+            return SiteEnergy.Zero;
+        }
+
+        double water = humidificationJ / Psychrometrics.MoistAir.LatentHeat;
+        double steam = water * PlantSettings.SteamJoulesPerKilogram / Settings.HumidifierEfficiency;
+        return Settings.Humidifier switch
+        {
+            HumidifierType.SteamGas => SiteEnergy.Buy(Fuel.Gas, steam, Settings.TariffOf(Fuel.Gas)),
+            HumidifierType.Adiabatic => Heating(water * Psychrometrics.MoistAir.LatentHeat, outdoorC, hours, clamps),
+            _ => Electricity(steam),
+        };
+    }
 
     /// <summary>Electricity, J, priced and weighed.</summary>
     public SiteEnergy Electricity(double joules) =>

@@ -25,6 +25,17 @@ public sealed record PlantSettings(
     /// <summary>Heat content of the oil, J per US gallon (default 138,500 Btu/gal, recalled from memory).</summary>
     public double OilJoulesPerGallon { get; init; } = FuelUnits.DefaultOilBtuPerGallon * Units.Conversions.JoulesPerBtu;
 
+    /// <summary>
+    /// Heat to raise steam from supply water, J/kg: about 2,630 kJ/kg, the enthalpy of saturated
+    /// steam at 100 C (2,675.6 kJ/kg) less that of supply water at 10 C (42.0 kJ/kg), from the
+    /// thermodynamic properties of water in ASHRAE Handbook—Fundamentals 2017 ch. 1, table 3
+    /// (recalled from memory).
+    /// </summary>
+    public const double SteamJoulesPerKilogram = 2_630_000.0;
+
+    /// <summary>The humidifier type (default steam-electric).</summary>
+    public HumidifierType Humidifier { get; init; } = HumidifierType.SteamElectric;
+
     /// <summary>The fuel the heating source buys.</summary>
     public Fuel HeatingFuel => Heating switch
     {

@@ -8,6 +8,9 @@ internal static class PlantSettingsBuilder
     /// <summary>Default total fan efficiency when the study gives none (common practice for a small supply fan and motor).</summary>
     public const double DefaultFanEfficiency = 0.6;
 
+    /// <summary>Default efficiency of a gas-fired steam humidifier (recalled from memory: about that of a non-condensing gas boiler).</summary>
+    public const double DefaultGasSteamEfficiency = 0.8;
+
     public static PlantSettings Build(StudySection plant, List<string> assumptions)
     {
         string fuel = plant.Text("heating_fuel") ?? "gas";
@@ -57,8 +60,26 @@ internal static class PlantSettingsBuilder
             [Fuel.Gas] = new(plant.Number("price_gas") ?? 0, plant.Number("carbon_gas") ?? 0),
             [Fuel.Oil] = new((plant.Number("price_oil") ?? 0) / oilJPerGallon, (plant.Number("carbon_oil") ?? 0) / oilJPerGallon),
         };
-        return new PlantSettings(heating, efficiency, heatPump, cooling, fan, plant.Number("humidifier_efficiency") ?? 1.0, tariffs)
+        var humidifier = plant.Text("humidifier") switch
         {
+            "steam-gas" => HumidifierType.SteamGas,
+            "adiabatic" => HumidifierType.Adiabatic,
+            _ => HumidifierType.SteamElectric,
+        };
+        if (humidifier == HumidifierType.Adiabatic && plant.Has("humidifier_efficiency"))
+        {
+            throw plant.ErrorAt("humidifier_efficiency", "an adiabatic humidifier has no efficiency here (its load moves onto the heating source): remove humidifier_efficiency or choose a steam humidifier");
+        }
+
+        double humidifierEfficiency = plant.Number("humidifier_efficiency") ?? (humidifier == HumidifierType.SteamGas ? DefaultGasSteamEfficiency : 1.0);
+        if (humidifier == HumidifierType.SteamGas && !plant.Has("humidifier_efficiency"))
+        {
+            assumptions.Add(FormattableString.Invariant($"gas steam humidifier efficiency {DefaultGasSteamEfficiency} (plant.humidifier_efficiency not given; recalled from memory)"));
+        }
+
+        return new PlantSettings(heating, efficiency, heatPump, cooling, fan, humidifierEfficiency, tariffs)
+        {
+            Humidifier = humidifier,
             OilJoulesPerGallon = oilJPerGallon,
         };
     }

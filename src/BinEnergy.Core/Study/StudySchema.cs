@@ -154,8 +154,10 @@ internal static class StudySchema
             { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-10, 60), RangeHint = "a COP above 0 and at most 15" },
             new KeyDefinition("fan_efficiency", ValueKind.Number, Unitless("fan_efficiency"), "Total fan efficiency for the fan energy of pressure drops.")
             { Min = 0, MinExclusive = true, Max = 1, DefaultText = "0.6" },
-            new KeyDefinition("humidifier_efficiency", ValueKind.Number, Unitless("humidifier_efficiency"), "Electric humidifier efficiency.")
-            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "1.0" },
+            Choice("humidifier", ["steam-electric", "steam-gas", "adiabatic"], "steam-electric",
+                "How the outdoor air is humidified: steam from supply water (about 2,630 kJ/kg) by electricity or gas, or adiabatic (the heating source reheats the air)."),
+            new KeyDefinition("humidifier_efficiency", ValueKind.Number, Unitless("humidifier_efficiency"), "Steam humidifier efficiency.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "1.0 for steam-electric, 0.8 for steam-gas (recalled from memory)" },
             Money("price_electricity", [("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Electricity price."),
             Money("price_gas", [("per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Gas price."),
             Money("price_oil", [("per_gal", (v, _) => v), ("per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Oil price."),

@@ -21,6 +21,30 @@ public class PlantCostCarbonTests
         });
 
     [Fact]
+    public void Humidifiers_HandWorked_SteamFromSupplyWaterOrHeatForAdiabatic()
+    {
+        // 100 kg of water added: the load is 100 x 2,501 kJ/kg = 250,100 kJ (h_fg at 0 C, Handbook ch. 1 eq. 32).
+        // Steam-electric, efficiency 1: 100 kg x 2,630 kJ/kg (saturated steam at 100 C, 2,675.6, less 10 C water, 42.0:
+        //   Handbook ch. 1 table 3, recalled from memory) = 263,000 kJ = 73.056 kWh.
+        // Steam-gas, efficiency 0.8: 263,000 / 0.8 = 328,750 kJ = 3.1159 therm (1 therm = 105,505.6 kJ).
+        // Adiabatic: the air is reheated by 250,100 kJ, bought through the gas furnace at 85 %: 294,235 kJ of gas.
+        double load = 100 * 2_501_000.0;
+        var clamps = new CurveClampCounter();
+        var electric = new PlantModel(GasPlant()).Humidification(load, 0, 1, clamps);
+        Assert.Equal(263_000_000.0 / 3_600_000.0, electric.ElectricityJ / 3_600_000.0, 6);
+        Assert.Equal(0.0, electric.GasJ);
+
+        var gas = new PlantModel(GasPlant() with { Humidifier = HumidifierType.SteamGas, HumidifierEfficiency = 0.8 }).Humidification(load, 0, 1, clamps);
+        Assert.Equal(328_750_000.0, gas.GasJ, 1e-3);
+        Assert.Equal(3.1159, gas.GasJ / FuelUnits.JoulesPerTherm, 4);
+        Assert.Equal(0.0, gas.ElectricityJ);
+
+        var adiabatic = new PlantModel(GasPlant() with { Humidifier = HumidifierType.Adiabatic }).Humidification(load, 0, 1, clamps);
+        Assert.Equal(load / 0.85, adiabatic.GasJ, 1e-3);
+        Assert.Equal(0.0, adiabatic.ElectricityJ);
+    }
+
+    [Fact]
     public void GasHeating_HandWorkedCostAndCarbon()
     {
         // Hand-worked: 85,000 kBtu of heating delivered to the outdoor air, furnace 85 % efficient.

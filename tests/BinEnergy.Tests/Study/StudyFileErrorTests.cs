@@ -46,6 +46,9 @@ public sealed class StudyFileErrorTests : IDisposable
         var reset = ExampleStudy.ReplaceLine("supply_airflow_cfm = 10000", "supply_airflow_cfm = 10000\nsupply_temp_reset_max_f = 62");
         Add("partial supply-temperature reset", (reset.Text, ExampleStudy.LineOf(reset.Text, "supply_temp_reset_max_f")), "key economizer.supply_temp_reset_max_f",
             "supply_temp_reset_outdoor_low is missing");
+        var adiabatic = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nhumidifier = \"adiabatic\"\nhumidifier_efficiency = 0.9");
+        Add("adiabatic humidifier with an efficiency", (adiabatic.Text, ExampleStudy.LineOf(adiabatic.Text, "humidifier_efficiency")), "key plant.humidifier_efficiency",
+            "an adiabatic humidifier has no efficiency here");
         Replace("misspelled table", "[plant]", "[plnat]", "key plnat", "unknown table [plnat]; did you mean [plant]?");
         Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
         Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");
