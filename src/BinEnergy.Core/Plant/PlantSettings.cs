@@ -36,6 +36,35 @@ public sealed record PlantSettings(
     /// <summary>The humidifier type (default steam-electric).</summary>
     public HumidifierType Humidifier { get; init; } = HumidifierType.SteamElectric;
 
+    /// <summary>
+    /// A heat pump's heating capacity against outdoor dry-bulb, W (held at the end values outside
+    /// the points); null for a heat pump that carries any load.
+    /// </summary>
+    public PerformanceCurve? HeatPumpCapacity { get; init; }
+
+    /// <summary>Outdoor dry-bulb below which the heat pump is locked out and the backup carries all the heating; null for none.</summary>
+    public Units.Temperature? HeatPumpLockout { get; init; }
+
+    /// <summary>The backup heat of a heat pump: electric resistance (default), gas or oil.</summary>
+    public HeatingSource Backup { get; init; } = HeatingSource.Electric;
+
+    /// <summary>Efficiency of the backup heat (default 1.0, electric resistance).</summary>
+    public double BackupEfficiency { get; init; } = 1.0;
+
+    /// <summary>Outdoor dry-bulb below which the heat pump defrosts; null for no defrost penalty.</summary>
+    public Units.Temperature? DefrostBelow { get; init; }
+
+    /// <summary>Fraction the COP loses below <see cref="DefrostBelow"/> (COP x (1 - penalty)).</summary>
+    public double DefrostPenalty { get; init; }
+
+    /// <summary>The fuel the backup heat buys.</summary>
+    public Fuel BackupFuel => Backup switch
+    {
+        HeatingSource.Gas => Fuel.Gas,
+        HeatingSource.Oil => Fuel.Oil,
+        _ => Fuel.Electricity,
+    };
+
     /// <summary>The fuel the heating source buys.</summary>
     public Fuel HeatingFuel => Heating switch
     {

@@ -145,6 +145,23 @@ internal static class StudySchema
             { Min = 0, MinExclusive = true, Max = 1.2, DefaultText = "1.0 for electric; required for gas and oil", RangeHint = "an efficiency above 0 and at most 1.2" },
             new KeyDefinition("heating_cop", ValueKind.NumberOrPoints, Rating("heating_cop", (v, _) => v), "Heat-pump COP: one number, or [outdoor temperature, COP] pairs.")
             { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-50, 40) },
+            new KeyDefinition("heating_capacity", ValueKind.NumberOrPoints,
+            [
+                new("heating_capacity_btuh", "Btu/h", (v, _) => Units.Power.FromBtuPerHour(v).Watts, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_btuh_f", "Btu/h", (v, _) => Units.Power.FromBtuPerHour(v).Watts, (t, _) => Conversions.FahrenheitToCelsius(t)),
+                new("heating_capacity_kw", "kW", (v, _) => v * 1000.0, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_kw_c", "kW", (v, _) => v * 1000.0, (t, _) => t),
+            ], "Heat-pump heating capacity: one number, or [outdoor temperature, capacity] pairs; the backup carries the rest.")
+            { Min = 0, Max = 1e8, PointXRange = (-50, 40), DefaultText = "no limit" },
+            new KeyDefinition("heat_pump_lockout", ValueKind.Number, Temperature("heat_pump_lockout"), "Below this outdoor temperature the heat pump is off and the backup heats.")
+            { Min = -50, Max = 20, DefaultText = "none" },
+            Choice("backup_fuel", ["electric", "gas", "oil"], "electric", "The heat pump's backup heat: electric resistance, gas or oil."),
+            new KeyDefinition("backup_efficiency", ValueKind.Number, Unitless("backup_efficiency"), "Efficiency of the backup heat.")
+            { Min = 0, MinExclusive = true, Max = 1.2, DefaultText = "1.0 (electric); required for gas and oil" },
+            new KeyDefinition("defrost_below", ValueKind.Number, Temperature("defrost_below"), "Below this outdoor temperature the heat pump defrosts and its COP drops by defrost_penalty_pct.")
+            { Min = -30, Max = 15, DefaultText = "no defrost penalty" },
+            new KeyDefinition("defrost_penalty_pct", ValueKind.Number, Unitless("defrost_penalty_pct"), "COP lost while defrosting, %.")
+            { Min = 0, Max = 50, DefaultText = "10 (recalled from memory)" },
             new KeyDefinition("cooling", ValueKind.NumberOrPoints,
             [
                 .. Rating("cooling_cop", (v, _) => v),

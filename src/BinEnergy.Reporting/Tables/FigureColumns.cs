@@ -67,6 +67,9 @@ public static class FigureColumns
             .Number("cooling", u.Cost, "Cooling cost", f => f.Bought[EndUse.Cooling].Cost, detail: true)
             .Number("fans", u.Cost, "Fan cost", f => f.Bought[EndUse.Fans].Cost, detail: true)
             .Number("humidification", u.Cost, "Humidification cost", f => f.Bought[EndUse.Humidification].Cost, detail: true)
+            .Number("backup_heating_electricity", u.Electricity, "Backup heat, electricity", f => f.Bought[EndUse.BackupHeating].ElectricityJ, detail: true)
+            .Number("backup_heating_gas", u.Gas, "Backup heat, gas", f => f.Bought[EndUse.BackupHeating].GasJ, detail: true)
+            .Number("backup_heating", u.Cost, "Backup heat cost", f => f.Bought[EndUse.BackupHeating].Cost, detail: true)
             .Number(string.Empty, u.Cost, "Cost", f => f.Bought.Total.Cost)
             .Number("carbon", u.Carbon, "Carbon", f => f.Bought.Total.CarbonKg);
     }

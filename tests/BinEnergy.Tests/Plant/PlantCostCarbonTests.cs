@@ -45,6 +45,44 @@ public class PlantCostCarbonTests
     }
 
     [Fact]
+    public void HeatPump_CapacityLockoutDefrostAndBackup_HandWorked()
+    {
+        // Invented heat pump: COP 3.0 flat; capacity 10 kW at -10 C rising linearly to 20 kW at 10 C; lockout below -15 C;
+        // defrost below 2 C costs 10 % of the COP; electric-resistance backup at 1.0.
+        var plant = GasPlant() with
+        {
+            Heating = HeatingSource.HeatPump,
+            HeatPumpCop = PerformanceCurve.Constant(3.0),
+            HeatPumpCapacity = PerformanceCurve.Create([(-10.0, 10_000.0), (10.0, 20_000.0)]),
+            HeatPumpLockout = Temperature.FromCelsius(-15),
+            DefrostBelow = Temperature.FromCelsius(2),
+            DefrostPenalty = 0.10,
+        };
+        var model = new PlantModel(plant);
+        var clamps = new CurveClampCounter();
+
+        // 5 C, 10 kW for 1 h = 36 MJ: capacity 10 + 10 x 15/20 = 17.5 kW carries it all; 36 / 3.0 = 12 MJ; no backup.
+        var (a, aBackup) = model.HeatingSplit(36e6, 5, 1, clamps);
+        Assert.Equal(12e6, a.ElectricityJ, 1e-3);
+        Assert.Equal(0.0, aBackup.ElectricityJ);
+
+        // 0 C, 20 kW = 72 MJ: capacity 15 kW carries 54 MJ at COP 3.0 x 0.9 = 2.7 -> 20 MJ; the backup buys 72 - 54 = 18 MJ.
+        var (b, bBackup) = model.HeatingSplit(72e6, 0, 1, clamps);
+        Assert.Equal(20e6, b.ElectricityJ, 1e-3);
+        Assert.Equal(18e6, bBackup.ElectricityJ, 1e-3);
+
+        // -20 C, below the lockout: all 72 MJ by the backup.
+        var (c, cBackup) = model.HeatingSplit(72e6, -20, 1, clamps);
+        Assert.Equal(0.0, c.ElectricityJ);
+        Assert.Equal(72e6, cBackup.ElectricityJ, 1e-3);
+        Assert.Equal(72e6, model.Heating(72e6, -20, 1, clamps).ElectricityJ, 1e-3); // the sum is what Heating returns
+
+        // A gas backup at 0.8 buys 18 / 0.8 = 22.5 MJ of gas.
+        var gas = new PlantModel(plant with { Backup = HeatingSource.Gas, BackupEfficiency = 0.8 });
+        Assert.Equal(22.5e6, gas.HeatingSplit(72e6, 0, 1, clamps).Backup.GasJ, 1e-3);
+    }
+
+    [Fact]
     public void GasHeating_HandWorkedCostAndCarbon()
     {
         // Hand-worked: 85,000 kBtu of heating delivered to the outdoor air, furnace 85 % efficient.

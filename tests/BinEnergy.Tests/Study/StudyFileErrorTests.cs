@@ -49,6 +49,9 @@ public sealed class StudyFileErrorTests : IDisposable
         var adiabatic = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nhumidifier = \"adiabatic\"\nhumidifier_efficiency = 0.9");
         Add("adiabatic humidifier with an efficiency", (adiabatic.Text, ExampleStudy.LineOf(adiabatic.Text, "humidifier_efficiency")), "key plant.humidifier_efficiency",
             "an adiabatic humidifier has no efficiency here");
+        var capacity = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nheating_capacity_btuh = 120000");
+        Add("heat-pump capacity on a gas plant", (capacity.Text, ExampleStudy.LineOf(capacity.Text, "heating_capacity_btuh")), "key plant.heating_capacity_btuh",
+            "heating_capacity applies to heating_fuel = \"heat-pump\" only");
         Replace("misspelled table", "[plant]", "[plnat]", "key plnat", "unknown table [plnat]; did you mean [plant]?");
         Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
         Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");
