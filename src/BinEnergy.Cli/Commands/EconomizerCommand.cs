@@ -1,5 +1,6 @@
 using System.ComponentModel;
 using BinEnergy.Cli.Options;
+using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
@@ -18,13 +19,19 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
 {
     public sealed class Settings : EstimateOptions
     {
+        [CommandOption("--system <TYPE>")]
+        [Description("The air system: single-zone (constant airflow, supply temperature follows the load), variable-volume (default; airflow follows the load, reheat at minimum airflow counted) or constant-volume-reheat (fixed supply temperature, reheat counted).")]
+        [TypeConverter(typeof(ChoiceConverter<AirSystemType>))]
+        [StudyKey("economizer", "system")]
+        public AirSystemType? System { get; init; }
+
         [CommandOption("--supply-airflow <N>")]
         [Description("Supply airflow (cfm in ip, L/s in si): the constant flow, or the maximum with --supply-airflow-min. Required.")]
         [StudyKey("economizer", "supply_airflow", nameof(DisplayUnits.Airflow))]
         public double? SupplyAirflow { get; init; }
 
         [CommandOption("--supply-airflow-min <N>")]
-        [Description("Minimum supply airflow of a variable-volume system (cfm or L/s). Without it the flow is constant.")]
+        [Description("Minimum supply airflow of a variable-volume system (cfm or L/s). Default 30 % of the supply airflow, not below the minimum outdoor airflow (recalled from memory).")]
         [StudyKey("economizer", "supply_airflow_min", nameof(DisplayUnits.Airflow))]
         public double? SupplyAirflowMin { get; init; }
 
@@ -45,6 +52,21 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [Description("Supply (coil-leaving) air temperature (F or C). Required.")]
         [StudyKey("economizer", "supply_temp", nameof(DisplayUnits.Temperature))]
         public double? SupplyTemp { get; init; }
+
+        [CommandOption("--supply-temp-reset-max <T>")]
+        [Description("Variable volume: the warmest supply temperature of an outdoor reset (F or C); give it with --supply-temp-reset-outdoor-low and -high. Default: no reset.")]
+        [StudyKey("economizer", "supply_temp_reset_max", nameof(DisplayUnits.Temperature))]
+        public double? SupplyTempResetMax { get; init; }
+
+        [CommandOption("--supply-temp-reset-outdoor-low <T>")]
+        [Description("Outdoor dry-bulb at and below which the reset supply is at its warmest (F or C).")]
+        [StudyKey("economizer", "supply_temp_reset_outdoor_low", nameof(DisplayUnits.Temperature))]
+        public double? SupplyTempResetOutdoorLow { get; init; }
+
+        [CommandOption("--supply-temp-reset-outdoor-high <T>")]
+        [Description("Outdoor dry-bulb at and above which the supply is at --supply-temp (F or C).")]
+        [StudyKey("economizer", "supply_temp_reset_outdoor_high", nameof(DisplayUnits.Temperature))]
+        public double? SupplyTempResetOutdoorHigh { get; init; }
 
         [CommandOption("--return-temp <T>")]
         [Description("Return air temperature (F or C). Required.")]
@@ -78,6 +100,31 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [Description("Relative humidity of the air leaving the cooling coil at its wettest, percent. Default 90.")]
         [StudyKey("economizer", "coil_leaving_rh_pct")]
         public double? CoilLeavingRh { get; init; }
+
+        [CommandOption("--supply-fan-pressure <DP>")]
+        [Description("Total pressure of the supply fan at the supply airflow (in. w.g. in ip, Pa in si); 0 for none. Default 3 in. w.g. (750 Pa), recalled from memory.")]
+        [StudyKey("economizer", "supply_fan_pressure", nameof(DisplayUnits.PressureDrop))]
+        public double? SupplyFanPressure { get; init; }
+
+        [CommandOption("--supply-fan-efficiency <E>")]
+        [Description("Total efficiency of the supply fan. Default 0.6.")]
+        [StudyKey("economizer", "supply_fan_efficiency")]
+        public double? SupplyFanEfficiency { get; init; }
+
+        [CommandOption("--return-fan-pressure <DP>")]
+        [Description("Total pressure of a return fan (in. w.g. or Pa). Default: no return fan.")]
+        [StudyKey("economizer", "return_fan_pressure", nameof(DisplayUnits.PressureDrop))]
+        public double? ReturnFanPressure { get; init; }
+
+        [CommandOption("--return-fan-efficiency <E>")]
+        [Description("Total efficiency of the return fan. Default 0.6.")]
+        [StudyKey("economizer", "return_fan_efficiency")]
+        public double? ReturnFanEfficiency { get; init; }
+
+        [CommandOption("--fan-curve <C0,C1,C2,C3>")]
+        [Description("Variable volume: fan power fraction c0 + c1 f + c2 f^2 + c3 f^3 of the flow fraction f. Default 0.0013,0.1470,0.9506,-0.0998 (an energy-code baseline curve, recalled from memory).")]
+        [StudyKey("economizer", "fan_curve", Numbers = true)]
+        public string? FanCurve { get; init; }
 
         [CommandOption("--controls <NAMES>")]
         [Description("Comma-separated controls to compare with the baseline: fixed-drybulb, differential-drybulb, fixed-enthalpy, differential-enthalpy, fixed-dewpoint. Default: all five.")]

@@ -96,6 +96,16 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
         [StudyKey("recovery", "frost_effectiveness")]
         public double? FrostEffectiveness { get; init; }
 
+        [CommandOption("--fan-power <P>")]
+        [Description("Power of the fan that moves the outdoor air per unit airflow (W/cfm in ip, W per L/s in si); 0 for none. Default: from --fan-pressure.")]
+        [StudyKey("ventilation", "fan_power", nameof(DisplayUnits.FanPowerPerFlow))]
+        public double? FanPower { get; init; }
+
+        [CommandOption("--fan-pressure <DP>")]
+        [Description("Total pressure of the fan that moves the outdoor air (in. w.g. in ip, Pa in si), at efficiency 0.6. Default 1 in. w.g. (250 Pa), recalled from memory.")]
+        [StudyKey("ventilation", "fan_pressure", nameof(DisplayUnits.PressureDrop))]
+        public double? FanPressure { get; init; }
+
         [CommandOption("--recovery-pressure <DP>")]
         [Description("Pressure drop the device adds on each air stream (in. w.c. in ip, Pa in si). Default 0.")]
         [StudyKey("recovery", "pressure_drop", nameof(DisplayUnits.PressureDrop))]

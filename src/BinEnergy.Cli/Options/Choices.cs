@@ -24,6 +24,8 @@ internal static class Choices
             new[] { ("none", DaylightSaving.None), ("north-america", DaylightSaving.NorthAmerica), ("europe", DaylightSaving.Europe) }),
         [typeof(DegreeDayMethod)] = ("--degree-days", "a degree-day method", DegreeDayMethods.All.Select(m => (DegreeDayMethods.Name(m), m)).ToArray()),
         [typeof(HumidityOver)] = ("--humidity-over", "a humidity convention", new[] { ("water", HumidityOver.Water), ("ice", HumidityOver.Ice) }),
+        [typeof(Core.Economizer.AirSystemType)] = ("--system", "an air-system type",
+            Core.Economizer.AirSystemTypes.All.Select(t => (Core.Economizer.AirSystemTypes.Name(t), t)).ToArray()),
         [typeof(BinSplit)] = ("--by", "a split", new[] { ("month", BinSplit.Month), ("block", BinSplit.TimeOfDayBlock) }),
     };
 

@@ -22,4 +22,7 @@ internal sealed class StudyKeyAttribute(string table, string key, string? unit =
 
     /// <summary>For text: split at commas into a list.</summary>
     public bool List { get; init; }
+
+    /// <summary>For text: split at commas into a list of numbers (invariant culture).</summary>
+    public bool Numbers { get; init; }
 }

@@ -45,6 +45,12 @@ public sealed record EconomizerControlResult
     /// <summary>Compressor electricity, cost and carbon saved against the baseline by a method.</summary>
     public SiteEnergy CompressorSavings(IntegrationMethod method) => Totals[method].CompressorSavingsAgainst(Baseline[method]);
 
+    /// <summary>Reheat and preheat saved against the baseline by a method (negative when the control adds heating).</summary>
+    public Energy HeatingSavings(IntegrationMethod method) => Totals[method].HeatingSavingsAgainst(Baseline[method]);
+
+    /// <summary>Everything bought (compressor and heating) saved against the baseline by a method.</summary>
+    public SiteEnergy PurchasedSavings(IntegrationMethod method) => Totals[method].PurchasedSavingsAgainst(Baseline[method]);
+
     /// <summary>A method's total coil energy against the hourly sum, in percent of the hourly value; null when that is zero.</summary>
     public double? CoilDifferencePercent(IntegrationMethod method) =>
         MethodDifference.Percent(Totals[method].CoilTotal.Joules, Totals.Hourly.CoilTotal.Joules);

@@ -231,6 +231,9 @@ public sealed class EconomizerEvaluation
     {
         private readonly CurveClampCounter clamps = new();
 
+        // Clamped heating COPs of the controls and of the per-bin copies, not counted twice.
+        private readonly CurveClampCounter ignored = new();
+
         /// <summary>The hours in which a cooling COP was held at its end value (hourly method).</summary>
         public CurveClampCounter Clamps { get; } = new();
 
@@ -266,11 +269,11 @@ public sealed class EconomizerEvaluation
                 double qb = model.BuildingLoadW(t[i]);
                 if (qb <= 0)
                 {
-                    var none = new EconomizerHour(EconomizerMode.NoCooling, 0, 0, 0, 0, 0, 0, 0, 0);
+                    var none = model.NoCooling(t[i], w[i]);
                     for (int c = 0; c < nc; c++)
                     {
-                        monthly[c * 12 + month].Add(in none, 1.0, null, 1.0);
-                        byBin[c * nb + bin].Add(in none, 1.0, null, 1.0);
+                        monthly[c * 12 + month].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
+                        byBin[c * nb + bin].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
                     }
 
                     continue;
@@ -281,8 +284,8 @@ public sealed class EconomizerEvaluation
                 for (int c = 0; c < nc; c++)
                 {
                     var r = c == 0 ? baseline : model.Resolve(controls[c], qb, in baseline, t[i], w[i], h[i], dp[i]);
-                    monthly[c * 12 + month].Add(in r, 1.0, plant, cop);
-                    byBin[c * nb + bin].Add(in r, 1.0, plant, cop);
+                    monthly[c * 12 + month].Add(in r, 1.0, plant, cop, t[i], c == 0 ? Clamps : ignored);
+                    byBin[c * nb + bin].Add(in r, 1.0, plant, cop, t[i], ignored);
                 }
             }
 
@@ -304,7 +307,7 @@ public sealed class EconomizerEvaluation
             for (int c = 0; c < controls.Length; c++)
             {
                 var r = model.Evaluate(controls[c], t, w, h, dp);
-                sums[offset + c].Add(in r, stats.Hours, plant, cop);
+                sums[offset + c].Add(in r, stats.Hours, plant, cop, t, clamps);
             }
         }
     }

@@ -25,6 +25,21 @@ public readonly record struct EconomizerHour(
     double CoilSensibleW,
     double CoilLatentW)
 {
+    /// <summary>Supply-air dry-bulb delivered to the zones before any reheat, C.</summary>
+    public double SupplyDryBulbC { get; init; }
+
+    /// <summary>Terminal reheat, W: what brings the supply back to what the load needs (variable volume at minimum airflow, constant volume with reheat).</summary>
+    public double ReheatW { get; init; }
+
+    /// <summary>Preheat, W: the mixed air below the coil-leaving temperature warmed up to it.</summary>
+    public double PreheatW { get; init; }
+
+    /// <summary>Building sensible load the supply cannot meet, W (supply at its coolest and largest).</summary>
+    public double UnmetW { get; init; }
+
+    /// <summary>Electric power of the supply and return fans, W (all of it heat in the air).</summary>
+    public double FanW { get; init; }
+
     /// <summary>Total coil load, W: sensible plus latent.</summary>
     public double CoilTotalW => CoilSensibleW + CoilLatentW;
 

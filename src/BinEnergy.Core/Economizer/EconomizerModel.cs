@@ -13,24 +13,40 @@ namespace BinEnergy.Core.Economizer;
 /// <list type="number">
 /// <item>Building sensible load Q_b from the load line (<see cref="BuildingLoadLine"/>); Q_b = 0
 /// gives the mode "no cooling" and no coil load.</item>
-/// <item>Supply mass flow: constant volume m_s = rho V_s; variable volume
-/// m_s = Q_b / (c_p (T_r - T_s)) bounded to [rho V_min, rho V_max], with c_p = 1.006 + 1.86 W_r
-/// kJ/(kg K) of the room (return) air (Handbook—Fundamentals 2017, ch. 1, eq. 32 differentiated).
-/// rho is the dry-air density of the flow basis; with <c>actual</c> it is that of the mixed
-/// (coil-entering) state at the site pressure (eq. 26), found by fixed-point iteration because
-/// the mixed state depends on the outdoor fraction, which depends on m_s.</item>
+/// <item>Supply mass flow and supply temperature by the system type (<see cref="AirSystemType"/>):
+/// variable volume m_s = Q_b / (c_p (T_r - T_set)) bounded to [rho V_min, rho V_max] at T_set (the set
+/// supply temperature, or its outdoor reset); single zone m_s = rho V_s at
+/// T_sup = max(T_s, T_r - Q_b / (m_s c_p)) (the supply temperature follows the load line); constant
+/// volume with reheat m_s = rho V_s at T_s. c_p = 1.006 + 1.86 W_r kJ/(kg K) of the room (return) air
+/// (Handbook—Fundamentals 2017, ch. 1, eq. 32 differentiated). rho is the dry-air density of the flow
+/// basis; with <c>actual</c> it is that of the mixed (coil-entering) state at the site pressure
+/// (eq. 26), found by fixed-point iteration because the mixed state depends on the outdoor fraction,
+/// which depends on m_s.</item>
+/// <item>Reheat = m_s c_p (T_r - T_sup) - Q_b when positive (the supply cools more than the load
+/// needs: variable volume at minimum airflow, constant volume with reheat); when negative, that
+/// much load is unmet (the supply at its largest and coolest).</item>
 /// <item>Minimum outdoor fraction x_min = rho V_oa / m_s (mass of outdoor air over mass of supply air).</item>
 /// <item>The economizer is enabled when the control's high limit allows it and T_o &lt; T_r; then
-/// x = (T_r - T_s) / (T_r - T_o) clamped to [x_min, 1] (the fraction whose mix is exactly at T_s),
+/// x = (T_r - T_sup) / (T_r - T_o) clamped to [x_min, 1] (the fraction whose mix is exactly at T_sup),
 /// else x = x_min.</item>
 /// <item>Mixing linear in dry-bulb and humidity ratio (the usual approximation; ASHRAE
 /// Handbook—Fundamentals 2017, ch. 1, "adiabatic mixing", exact in W and in h, nearly so in t):
 /// T_mix = x T_o + (1 - x) T_r, W_mix = x W_o + (1 - x) W_r, h_mix = h(T_mix, W_mix) by eq. 32.</item>
-/// <item>Coil: to T_s, leaving W_l = min(W_mix, W_lim) with W_lim the humidity ratio at T_s and the
+/// <item>Coil: to T_sup, leaving W_l = min(W_mix, W_lim) with W_lim the humidity ratio at T_sup and the
 /// coil-leaving RH (eq. 22/20 with Hyland-Wexler saturation). Sensible part
-/// m_s (1.006 + 1.86 W_mix)(T_mix - T_s), latent part m_s (W_mix - W_l)(2501 + 1.86 T_s) kJ/kg, each
-/// when positive; together exactly m_s (h_mix - h_l) of eq. 32 whenever T_mix &gt;= T_s.</item>
-/// <item>Integrated: when x = 1 cannot reach T_s (or the mix is too humid) the economizer stays on
+/// m_s (1.006 + 1.86 W_mix)(T_mix - T_sup), latent part m_s (W_mix - W_l)(2501 + 1.86 T_sup - 4.186 T_sup) kJ/kg,
+/// each when positive; together exactly the coil load of Handbook—Fundamentals 2017 ch. 1 ("cooling and
+/// dehumidifying of moist air"), m_s (h_mix - h_l) - m_s (W_mix - W_l) h_w, with the condensate leaving
+/// at T_sup, h_w = 4.186 T_sup kJ/kg, whenever T_mix &gt;= T_sup. Mixed air
+/// below T_sup is preheated: m_s (1.006 + 1.86 W_mix)(T_sup - T_mix), counted as heating.</item>
+/// <item>Fans: supply and return fan power P = P_design g(f), with P_design = V_max dp / eta
+/// (<see cref="AirSystemFan"/>) and, for variable volume, g the part-load curve at the flow fraction
+/// f = m_s / (rho V_max) (<see cref="FanPartLoadCurve"/>; g = 1 for constant volume). All fan power
+/// is heat in the air (common practice): the supply fan after the coil, so the coil cools to
+/// T_c = T_sup - P_sf / (m_s c_p) and the economizer mixes to T_c; the return fan before the mixing box,
+/// so the return air enters it at T_r + P_rf / (m_s c_p). Fans run in every occupied hour, also
+/// without cooling.</item>
+/// <item>Integrated: when x = 1 cannot reach T_sup (or the mix is too humid) the economizer stays on
 /// and the coil trims (mode "integrated"). Non-integrated: it locks out to x_min whenever the coil
 /// must run (mode "minimum outdoor air"). Enabled with no coil load: "free cooling".</item>
 /// </list>
@@ -52,7 +68,11 @@ public sealed class EconomizerModel
     private readonly double _voa;
     private readonly double _fixedDensity;
     private readonly bool _actual;
-    private readonly bool _variable;
+    private readonly AirSystemType _system;
+    private readonly double _supplyFanDesignW;
+    private readonly double _returnFanDesignW;
+    private readonly FanPartLoadCurve _fanCurve;
+    private readonly SupplyTemperatureReset? _reset;
     private readonly double _latentAtSupply;
 
     /// <summary>Builds the model; validates the settings first.</summary>
@@ -76,11 +96,15 @@ public sealed class EconomizerModel
         ReturnEnthalpyJPerKg = MoistAir.Enthalpy(_tR, ReturnHumidityRatio);
         CoilLeavingHumidityLimit = MoistAir.HumidityRatioFromRelativeHumidity(_tS, settings.CoilLeavingRelativeHumidity, sitePressurePa);
         _cpReturn = MoistAir.HumidSpecificHeat(ReturnHumidityRatio);
-        _latentAtSupply = MoistAir.LatentHeat + MoistAir.VapourSpecificHeat * _tS;
+        _latentAtSupply = MoistAir.CondensingHeat(_tS);
         _vs = settings.SupplyAirflow.CubicMetresPerSecond;
-        _vsMin = settings.SupplyAirflowMin?.CubicMetresPerSecond ?? _vs;
+        _vsMin = settings.MinimumSupplyAirflow.CubicMetresPerSecond;
         _voa = settings.MinOutdoorAirflow.CubicMetresPerSecond;
-        _variable = settings.IsVariableVolume;
+        _system = settings.System;
+        _supplyFanDesignW = settings.SupplyFan?.DesignPowerW(settings.SupplyAirflow) ?? 0.0;
+        _returnFanDesignW = settings.ReturnFan?.DesignPowerW(settings.SupplyAirflow) ?? 0.0;
+        _fanCurve = settings.FanCurve;
+        _reset = settings.IsVariableVolume ? settings.Reset : null;
         _actual = settings.FlowBasis == FlowBasis.Actual;
         _fixedDensity = _actual ? double.NaN : FlowBasisDensity.For(settings.FlowBasis, sitePressurePa, _tR, 0.0, sitePressurePa);
     }
@@ -146,7 +170,17 @@ public sealed class EconomizerModel
     internal EconomizerHour NoCooling(double tO, double wO)
     {
         var hour = AtMinimum(0.0, tO, wO);
-        return hour with { Mode = EconomizerMode.NoCooling, CoilSensibleW = 0.0, CoilLatentW = 0.0 };
+        return hour with { Mode = EconomizerMode.NoCooling, CoilSensibleW = 0.0, CoilLatentW = 0.0, ReheatW = 0.0, PreheatW = 0.0, UnmetW = 0.0 };
+    }
+
+    /// <summary>
+    /// Fan power at a supply mass flow, W: design power times the part-load curve at the flow
+    /// fraction m_s / (rho V_max) for variable volume; design power for constant volume.
+    /// </summary>
+    public (double SupplyW, double ReturnW) FanPowerW(double massFlowKgPerS, double densityKgPerM3)
+    {
+        double fraction = _system == AirSystemType.VariableVolume ? _fanCurve.Fraction(massFlowKgPerS / (densityKgPerM3 * _vs)) : 1.0;
+        return (_supplyFanDesignW * fraction, _returnFanDesignW * fraction);
     }
 
     /// <summary>
@@ -179,27 +213,38 @@ public sealed class EconomizerModel
     /// <summary>Minimum outdoor air (x = x_min): the baseline, or a disabled or locked-out economizer.</summary>
     internal EconomizerHour AtMinimum(double qb, double tO, double wO) => Solve(qb, tO, wO, economizer: false);
 
-    /// <summary>The economizer enabled: x = (T_r - T_s)/(T_r - T_o) clamped to [x_min, 1]; requires T_o &lt; T_r.</summary>
+    /// <summary>The economizer enabled: x = (T_r - T_sup)/(T_r - T_o) clamped to [x_min, 1]; requires T_o &lt; T_r.</summary>
     internal EconomizerHour Enabled(double qb, double tO, double wO) => Solve(qb, tO, wO, economizer: true);
+
+    /// <summary>The supply temperature the system aims at before the load is known, C: the reset's value for variable volume with a reset, else T_s.</summary>
+    public double SupplySetpointC(double outdoorDryBulbC) =>
+        _reset is not null ? _reset.SupplyC(outdoorDryBulbC, _tS) : _tS;
 
     private EconomizerHour Solve(double qb, double tO, double wO, bool economizer)
     {
         double wR = ReturnHumidityRatio;
-        double ratio = economizer ? (_tR - _tS) / (_tR - tO) : 0.0;
-        double mRequired = _variable ? qb / (_cpReturn * (_tR - _tS)) : 0.0;
+        double tSet = SupplySetpointC(tO);
 
         // Fixed-point on the dry-air density: one pass for standard and site (constant
         // density); for actual, a few passes until the mixed state's density stops moving.
         double rho = _actual ? MoistAir.DryAirDensity(_tR, wR, SitePressurePa) : _fixedDensity;
-        double ms = 0, x = 0, tMix = 0, wMix = 0;
+        double ms = 0, x = 0, tMix = 0, wMix = 0, tSup = tSet, tCoil = tSet, fanW = 0;
         for (int pass = 0; pass < 8; pass++)
         {
-            ms = _variable ? Math.Clamp(mRequired, rho * _vsMin, rho * _vs) : rho * _vs;
+            (ms, tSup) = SupplyFlowAndTemperature(qb, tSet, rho);
+
+            // Fan heat: the supply fan after the coil (the coil cools below the supply temperature by
+            // the fan's rise), the return fan before the mixing box (the return air arrives warmer).
+            var (supplyFan, returnFan) = FanPowerW(ms, rho);
+            fanW = supplyFan + returnFan;
+            tCoil = tSup - supplyFan / (ms * _cpReturn);
+            double tRa = _tR + returnFan / (ms * _cpReturn);
             double xMin = Math.Min(1.0, rho * _voa / ms);
             bool exact = false;
             x = xMin;
             if (economizer)
             {
+                double ratio = (tRa - tCoil) / (tRa - tO);
                 if (ratio >= 1.0)
                 {
                     x = 1.0;
@@ -211,8 +256,8 @@ public sealed class EconomizerModel
                 }
             }
 
-            // x at the unclamped ratio mixes to exactly T_s by construction.
-            tMix = exact ? _tS : x * tO + (1.0 - x) * _tR;
+            // x at the unclamped ratio mixes to exactly the coil-leaving temperature by construction.
+            tMix = exact ? tCoil : x * tO + (1.0 - x) * tRa;
             wMix = x * wO + (1.0 - x) * wR;
             if (!_actual)
             {
@@ -229,10 +274,47 @@ public sealed class EconomizerModel
         }
 
         double hMix = MoistAir.Enthalpy(tMix, wMix);
-        double wLeave = Math.Min(wMix, CoilLeavingHumidityLimit);
-        double dt = tMix - _tS;
-        double sensible = dt > TemperatureToleranceK ? ms * MoistAir.HumidSpecificHeat(wMix) * dt : 0.0;
-        double latent = wMix > wLeave ? ms * (wMix - wLeave) * _latentAtSupply : 0.0;
-        return new EconomizerHour(EconomizerMode.MinimumOutdoorAir, x, tMix, wMix, hMix, wLeave, ms, sensible, latent);
+        double limit = tCoil == _tS ? CoilLeavingHumidityLimit : MoistAir.HumidityRatioFromRelativeHumidity(tCoil, Settings.CoilLeavingRelativeHumidity, SitePressurePa);
+        double wLeave = Math.Min(wMix, limit);
+        double dt = tMix - tCoil;
+        double cpMix = MoistAir.HumidSpecificHeat(wMix);
+        double sensible = dt > TemperatureToleranceK ? ms * cpMix * dt : 0.0;
+        double preheat = dt < -TemperatureToleranceK ? -ms * cpMix * dt : 0.0;
+        double latentHeat = tCoil == _tS ? _latentAtSupply : MoistAir.CondensingHeat(tCoil);
+        double latent = wMix > wLeave ? ms * (wMix - wLeave) * latentHeat : 0.0;
+
+        // What the supply delivers to the zones against what the load line asks.
+        double delivered = ms * _cpReturn * (_tR - tSup);
+        double excess = delivered - qb;
+        double tolerance = 1e-9 * Math.Max(qb, 1.0);
+        return new EconomizerHour(EconomizerMode.MinimumOutdoorAir, x, tMix, wMix, hMix, wLeave, ms, sensible, latent)
+        {
+            SupplyDryBulbC = tSup,
+            PreheatW = preheat,
+            ReheatW = excess > tolerance ? excess : 0.0,
+            UnmetW = excess < -tolerance ? -excess : 0.0,
+            FanW = fanW,
+        };
+    }
+
+    /// <summary>
+    /// The supply mass flow, kg/s, and supply temperature, C, of the system type at a load, for a
+    /// set supply temperature and a dry-air density: variable volume m_s = Q_b / (c_p (T_r - T_set))
+    /// bounded to [rho V_min, rho V_max] at T_set; single zone rho V_s at
+    /// T_s = max(T_set, T_r - Q_b / (m_s c_p)); constant volume with reheat rho V_s at T_set.
+    /// </summary>
+    private (double MassFlow, double SupplyC) SupplyFlowAndTemperature(double qb, double tSet, double rho)
+    {
+        switch (_system)
+        {
+            case AirSystemType.VariableVolume:
+                double required = qb / (_cpReturn * (_tR - tSet));
+                return (Math.Clamp(required, rho * _vsMin, rho * _vs), tSet);
+            case AirSystemType.SingleZone:
+                double m = rho * _vs;
+                return (m, Math.Max(tSet, _tR - qb / (m * _cpReturn)));
+            default:
+                return (rho * _vs, tSet);
+        }
     }
 }

@@ -16,8 +16,24 @@ public sealed record EconomizerSettings
     /// <summary>Supply airflow: the constant flow, or the maximum of a variable-volume system.</summary>
     public required VolumeFlow SupplyAirflow { get; init; }
 
-    /// <summary>Minimum supply airflow of a variable-volume system; null for constant volume.</summary>
+    /// <summary>
+    /// How the system meets the load (default <see cref="AirSystemType.VariableVolume"/>); the
+    /// baseline is the same type without an economizer.
+    /// </summary>
+    public AirSystemType System { get; init; } = AirSystemType.VariableVolume;
+
+    /// <summary>
+    /// Minimum supply airflow of a variable-volume system; null gives the default
+    /// (<see cref="DefaultMinimumFraction"/> of the maximum, not below the minimum outdoor airflow).
+    /// Only a variable-volume system may set it.
+    /// </summary>
     public VolumeFlow? SupplyAirflowMin { get; init; }
+
+    /// <summary>
+    /// The supply-temperature reset of a variable-volume system by outdoor dry-bulb; null for a
+    /// fixed supply temperature. Only a variable-volume system may set it.
+    /// </summary>
+    public SupplyTemperatureReset? Reset { get; init; }
 
     /// <summary>Minimum outdoor airflow (the ventilation the damper never goes below).</summary>
     public required VolumeFlow MinOutdoorAirflow { get; init; }
@@ -45,6 +61,19 @@ public sealed record EconomizerSettings
     /// <summary>Relative humidity of the air leaving the cooling coil at its wettest, 0 to 1 (default 0.90).</summary>
     public double CoilLeavingRelativeHumidity { get; init; } = 0.90;
 
+    /// <summary>
+    /// The supply fan at the (maximum) supply airflow, or none (the default of the engine; studies
+    /// give their own). Drawn through the coil: its heat raises the supply air, so the coil cools to
+    /// the supply temperature less the fan's temperature rise.
+    /// </summary>
+    public AirSystemFan? SupplyFan { get; init; }
+
+    /// <summary>The return fan at the (maximum) supply airflow, or none: its heat raises the return air before the mixing box.</summary>
+    public AirSystemFan? ReturnFan { get; init; }
+
+    /// <summary>The part-load curve of a variable-volume system's fans (default <see cref="FanPartLoadCurve.Default"/>); constant-volume fans run at design power.</summary>
+    public FanPartLoadCurve FanCurve { get; init; } = FanPartLoadCurve.Default;
+
     /// <summary>The controls compared with the baseline (default: the five economizer controls, integrated).</summary>
     public IReadOnlyList<EconomizerControl> Controls { get; init; } =
         EconomizerControl.EconomizerKinds.Select(k => new EconomizerControl(k, Integrated: true)).ToArray();
@@ -58,8 +87,28 @@ public sealed record EconomizerSettings
     /// </summary>
     public BinEvaluationPoint BinPoint { get; init; } = BinEvaluationPoint.MeanDryBulb;
 
+    /// <summary>
+    /// Default minimum airflow of a variable-volume system as a fraction of its maximum: 0.30, a
+    /// common terminal minimum (recalled from memory; the energy code adopted locally limits the
+    /// airflow that may be reheated, and the ventilation code sets the outdoor air).
+    /// </summary>
+    public const double DefaultMinimumFraction = 0.30;
+
     /// <summary>True when the supply flow varies with the load.</summary>
-    public bool IsVariableVolume => SupplyAirflowMin.HasValue;
+    public bool IsVariableVolume => System == AirSystemType.VariableVolume;
+
+    /// <summary>True when a variable-volume system's minimum airflow is the default, not the user's.</summary>
+    public bool MinimumAirflowIsDefault => IsVariableVolume && !SupplyAirflowMin.HasValue;
+
+    /// <summary>
+    /// The smallest supply airflow: the set minimum of a variable-volume system, else its default
+    /// (the larger of <see cref="DefaultMinimumFraction"/> of the maximum and the minimum outdoor
+    /// airflow); the constant airflow of the other types.
+    /// </summary>
+    public VolumeFlow MinimumSupplyAirflow => !IsVariableVolume
+        ? SupplyAirflow
+        : SupplyAirflowMin ?? VolumeFlow.FromCubicMetresPerSecond(Math.Min(SupplyAirflow.CubicMetresPerSecond,
+            Math.Max(DefaultMinimumFraction * SupplyAirflow.CubicMetresPerSecond, MinOutdoorAirflow.CubicMetresPerSecond)));
 
     /// <summary>True when the limits are the suggested defaults (recalled from memory), not the user's.</summary>
     public bool LimitsAreSuggested => Limits == HighLimits.Suggested;
@@ -80,10 +129,26 @@ public sealed record EconomizerSettings
             Add("supply_airflow", "the supply airflow must be above zero");
         }
 
-        double vsMin = SupplyAirflowMin?.CubicMetresPerSecond ?? vs;
-        if (SupplyAirflowMin.HasValue && !(vsMin > 0 && vsMin <= vs))
+        double vsMin = MinimumSupplyAirflow.CubicMetresPerSecond;
+        if (SupplyAirflowMin.HasValue && !IsVariableVolume)
+        {
+            Add("supply_airflow_min", $"a minimum supply airflow belongs to a variable-volume system, but system is \"{AirSystemTypes.Name(System)}\": leave supply_airflow_min out or set system = \"variable-volume\"");
+        }
+        else if (SupplyAirflowMin.HasValue && !(vsMin > 0 && vsMin <= vs))
         {
             Add("supply_airflow_min", "the minimum supply airflow must be above zero and not above the (maximum) supply airflow");
+        }
+
+        if (Reset is not null)
+        {
+            if (!IsVariableVolume)
+            {
+                Add("supply_temp_reset_max", $"a supply-temperature reset belongs to a variable-volume system, but system is \"{AirSystemTypes.Name(System)}\" (a single-zone system's supply temperature already follows the load)");
+            }
+            else
+            {
+                problems.AddRange(Reset.Problems(SupplyTemperature, ReturnTemperature));
+            }
         }
 
         double voa = MinOutdoorAirflow.CubicMetresPerSecond;
@@ -93,7 +158,7 @@ public sealed record EconomizerSettings
         }
         else if (voa > vsMin * (1 + 1e-12))
         {
-            Add("min_outdoor_airflow", SupplyAirflowMin.HasValue
+            Add("min_outdoor_airflow", IsVariableVolume
                 ? "the minimum outdoor airflow is above the minimum supply airflow: the outdoor air is part of the supply air, so raise the minimum supply airflow or lower the outdoor airflow"
                 : "the minimum outdoor airflow is above the supply airflow: the outdoor air is part of the supply air");
         }
@@ -124,6 +189,20 @@ public sealed record EconomizerSettings
         }
 
         problems.AddRange(LoadLine.Problems());
+        if (SupplyFan is not null)
+        {
+            problems.AddRange(SupplyFan.Problems("supply_fan"));
+        }
+
+        if (ReturnFan is not null)
+        {
+            problems.AddRange(ReturnFan.Problems("return_fan"));
+        }
+
+        if (IsVariableVolume && vs > 0 && (SupplyFan is not null || ReturnFan is not null))
+        {
+            problems.AddRange(FanCurve.Problems(vsMin / vs));
+        }
 
         if (Controls.Count == 0)
         {

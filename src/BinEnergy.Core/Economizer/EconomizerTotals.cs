@@ -27,9 +27,41 @@ public sealed record EconomizerTotals(
     /// <summary>No hours, no energy.</summary>
     public static EconomizerTotals Zero { get; } = new(0, 0, 0, 0, Energy.FromJoules(0), Energy.FromJoules(0), SiteEnergy.Zero);
 
+    /// <summary>Terminal reheat (heating delivered to the air).</summary>
+    public Energy Reheat { get; init; } = Energy.FromJoules(0);
+
+    /// <summary>Preheat of mixed air below the coil-leaving temperature (heating delivered to the air).</summary>
+    public Energy Preheat { get; init; } = Energy.FromJoules(0);
+
+    /// <summary>Building sensible load the supply could not meet (shown, not bought).</summary>
+    public Energy Unmet { get; init; } = Energy.FromJoules(0);
+
+    /// <summary>Fuel or electricity bought for the reheat and preheat through the plant's heating (zero without a plant).</summary>
+    public SiteEnergy Heating { get; init; } = SiteEnergy.Zero;
+
+    /// <summary>Electricity of the supply and return fans over all the occupied hours (the same for a control and its baseline: the airflow does not depend on the damper).</summary>
+    public Energy Fans { get; init; } = Energy.FromJoules(0);
+
+    /// <summary>The fans' electricity bought through the plant (zero without a plant).</summary>
+    public SiteEnergy FanElectricity { get; init; } = SiteEnergy.Zero;
+
     /// <summary>Every hour and energy multiplied by <paramref name="factor"/> (e.g. to a mean year).</summary>
     public EconomizerTotals Scaled(double factor) => new(HoursNoCooling * factor, HoursFree * factor, HoursIntegrated * factor, HoursMinimum * factor,
-        Energy.FromJoules(CoilSensible.Joules * factor), Energy.FromJoules(CoilLatent.Joules * factor), Compressor.Scaled(factor));
+        Energy.FromJoules(CoilSensible.Joules * factor), Energy.FromJoules(CoilLatent.Joules * factor), Compressor.Scaled(factor))
+    {
+        Reheat = Energy.FromJoules(Reheat.Joules * factor),
+        Preheat = Energy.FromJoules(Preheat.Joules * factor),
+        Unmet = Energy.FromJoules(Unmet.Joules * factor),
+        Heating = Heating.Scaled(factor),
+        Fans = Energy.FromJoules(Fans.Joules * factor),
+        FanElectricity = FanElectricity.Scaled(factor),
+    };
+
+    /// <summary>Heating delivered to the air: reheat plus preheat.</summary>
+    public Energy HeatingTotal => Reheat + Preheat;
+
+    /// <summary>Everything bought: compressor electricity, the heating fuel for reheat and preheat, and the fans' electricity.</summary>
+    public SiteEnergy Purchased => Compressor + Heating + FanElectricity;
 
     /// <summary>Total coil energy: sensible plus latent.</summary>
     public Energy CoilTotal => CoilSensible + CoilLatent;
@@ -59,6 +91,12 @@ public sealed record EconomizerTotals(
 
     /// <summary>Latent coil energy saved against <paramref name="baseline"/>; negative when this control adds latent load.</summary>
     public Energy LatentSavingsAgainst(EconomizerTotals baseline) => baseline.CoilLatent - CoilLatent;
+
+    /// <summary>Reheat and preheat saved against <paramref name="baseline"/>; negative when this control adds heating.</summary>
+    public Energy HeatingSavingsAgainst(EconomizerTotals baseline) => baseline.HeatingTotal - HeatingTotal;
+
+    /// <summary>Everything bought (compressor and heating) saved against <paramref name="baseline"/>: energy, cost and carbon.</summary>
+    public SiteEnergy PurchasedSavingsAgainst(EconomizerTotals baseline) => baseline.Purchased - Purchased;
 
     /// <summary>Compressor electricity, cost and carbon saved against <paramref name="baseline"/>.</summary>
     public SiteEnergy CompressorSavingsAgainst(EconomizerTotals baseline) => baseline.Compressor - Compressor;

@@ -13,13 +13,27 @@ internal struct ModeEnergySums
     private double _sensibleJ;
     private double _latentJ;
     private SiteEnergy _compressor;
+    private double _reheatJ;
+    private double _preheatJ;
+    private double _unmetJ;
+    private SiteEnergy _heating;
+    private double _fanJ;
+    private SiteEnergy _fan;
 
     /// <summary>
     /// Adds <paramref name="hours"/> of an hour's result (loads in W, energy in J), and the
-    /// compressor energy for its coil load at <paramref name="cop"/> through <paramref name="plant"/> (when given).
+    /// compressor energy for its coil load at <paramref name="cop"/> and the heating bought for its
+    /// reheat and preheat at <paramref name="outdoorC"/> through <paramref name="plant"/> (when given).
     /// </summary>
-    public void Add(in EconomizerHour hour, double hours, PlantModel? plant, double cop)
+    public void Add(in EconomizerHour hour, double hours, PlantModel? plant, double cop, double outdoorC, CurveClampCounter clamps)
     {
+        double fan = hour.FanW * hours * 3600.0;
+        _fanJ += fan;
+        if (plant is not null && fan > 0)
+        {
+            _fan += plant.Electricity(fan);
+        }
+
         switch (hour.Mode)
         {
             case EconomizerMode.NoCooling:
@@ -45,6 +59,16 @@ internal struct ModeEnergySums
         {
             _compressor += plant.Electricity((sensible + latent) / cop);
         }
+
+        double reheat = hour.ReheatW * seconds;
+        double preheat = hour.PreheatW * seconds;
+        _reheatJ += reheat;
+        _preheatJ += preheat;
+        _unmetJ += hour.UnmetW * seconds;
+        if (plant is not null && reheat + preheat > 0)
+        {
+            _heating += plant.Heating(reheat + preheat, outdoorC, hours, clamps);
+        }
     }
 
     /// <summary>Adds another set of sums.</summary>
@@ -57,8 +81,22 @@ internal struct ModeEnergySums
         _sensibleJ += other._sensibleJ;
         _latentJ += other._latentJ;
         _compressor += other._compressor;
+        _reheatJ += other._reheatJ;
+        _preheatJ += other._preheatJ;
+        _unmetJ += other._unmetJ;
+        _heating += other._heating;
+        _fanJ += other._fanJ;
+        _fan += other._fan;
     }
 
     public readonly EconomizerTotals ToTotals() =>
-        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ), _compressor);
+        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ), _compressor)
+        {
+            Reheat = Energy.FromJoules(_reheatJ),
+            Preheat = Energy.FromJoules(_preheatJ),
+            Unmet = Energy.FromJoules(_unmetJ),
+            Heating = _heating,
+            Fans = Energy.FromJoules(_fanJ),
+            FanElectricity = _fan,
+        };
 }

@@ -24,6 +24,6 @@ public enum LoadFigure
     /// <summary>Sensible and latent cooling the recovery device saves.</summary>
     RecoveredCooling,
 
-    /// <summary>Fan energy for the recovery device's added pressure drop (reported separately).</summary>
+    /// <summary>Fan energy: the ventilation fan that moves the outdoor air and the recovery device's added pressure drop (reported separately).</summary>
     FanEnergy,
 }

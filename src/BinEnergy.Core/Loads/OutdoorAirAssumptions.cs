@@ -46,6 +46,9 @@ public sealed record OutdoorAirAssumptions(
     /// <summary>The humidity-ratio bins of the joint-bin method.</summary>
     public HumidityBinScale HumidityScale { get; init; } = HumidityBinScale.Default(BinScale.Units);
 
+    /// <summary>Power of the fan that moves the outdoor air at the design airflow (zero for none).</summary>
+    public Power VentilationFanPower { get; init; }
+
     /// <summary>The daylight-saving rule the schedule's clock follows.</summary>
     public Schedules.DaylightSaving DaylightSaving { get; init; }
 }

@@ -20,7 +20,8 @@ namespace BinEnergy.Core.Loads;
 /// constant for <c>standard</c> and <c>site</c>; for <c>actual</c>, the dry-air density of each
 /// hour's outdoor state at that hour's pressure (hourly) or of the bin's evaluation state at the
 /// site pressure (bins). The recovery device's fan penalty is P = 2 V dp / eta (both air streams),
-/// charged in every ventilated hour unless the air bypasses an idle device.</para>
+/// charged in every ventilated hour unless the air bypasses an idle device; the ventilation fan's
+/// power V x (specific fan power) is charged in every ventilated hour (both as fan energy).</para>
 /// <para>One pass over the hours sums each hour's loads by month and by dry-bulb bin and the
 /// statistics of each month x dry-bulb x humidity cell (<see cref="HourCells"/>); the bin methods
 /// then merge cells: the classic bin method over month and humidity (per month: over humidity),
@@ -178,6 +179,7 @@ public static class OutdoorAirCalculator
         private readonly double volume;
         private readonly double constantDensity;
         private readonly double fanPowerW;
+        private readonly double ventilationFanW;
         private readonly bool bypassWhenIdle;
         private readonly bool always;
         private readonly double[] multiplierByHour = new double[24];
@@ -194,6 +196,7 @@ public static class OutdoorAirCalculator
             constantDensity = settings.FlowBasis == FlowBasis.Actual ? double.NaN : FlowBasisDensity.For(settings.FlowBasis, sitePressure, 0, 0, sitePressure);
             var r = settings.Recovery;
             fanPowerW = r is null ? 0.0 : 2.0 * volume * r.PressureDropPa / r.FanEfficiency;
+            ventilationFanW = volume * settings.VentilationFanWattsPerCubicMetrePerSecond;
             bypassWhenIdle = r?.BypassWhenIdle ?? false;
             always = settings.Operation == VentilationOperation.Always;
             for (int h = 0; h < 24; h++)
@@ -211,7 +214,7 @@ public static class OutdoorAirCalculator
             var perKg = load.Evaluate(t, w, out bool recovering);
             double seconds = 3600.0 * hours;
             var loads = perKg.Scaled(rho * volume * multiplier * seconds);
-            loads.Add(LoadFigure.FanEnergy, (bypassWhenIdle && !recovering ? 0.0 : fanPowerW) * multiplier * seconds);
+            loads.Add(LoadFigure.FanEnergy, (ventilationFanW + (bypassWhenIdle && !recovering ? 0.0 : fanPowerW)) * multiplier * seconds);
             loads.AddHours(hours);
             return new EnergyFigures(loads, plant?.Buy(loads, t, clamps) ?? PlantEnergy.Zero);
         }
@@ -351,6 +354,7 @@ public static class OutdoorAirCalculator
                 FanPenalty: Power.FromWatts(fanPowerW),
                 Calendar: weather.Calendar.Note)
             {
+                VentilationFanPower = Power.FromWatts(ventilationFanW),
                 HumidityScale = humidity,
                 DaylightSaving = settings.Schedule.DaylightSaving,
             };

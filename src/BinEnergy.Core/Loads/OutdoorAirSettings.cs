@@ -42,6 +42,14 @@ public sealed record OutdoorAirSettings
     /// <summary>Minimum indoor relative humidity at T_h, 0 to 1 (gives W_min); no humidification when null.</summary>
     public double? MinRelativeHumidity { get; init; }
 
+    /// <summary>
+    /// Electric power of the fan that moves the outdoor air, per unit of outdoor airflow, W per m3/s
+    /// (specific fan power; P = V dp / eta for a total pressure dp and efficiency eta, see
+    /// <see cref="Plant.FanPower"/>). Charged in every ventilated hour in proportion to the hour's
+    /// airflow; zero (the default of the engine; studies give their own default) for none.
+    /// </summary>
+    public double VentilationFanWattsPerCubicMetrePerSecond { get; init; }
+
     /// <summary>An energy recovery device, or none.</summary>
     public EnergyRecoverySettings? Recovery { get; init; }
 

@@ -14,4 +14,7 @@ public enum EndUse
 
     /// <summary>Humidification (the humidifier's energy).</summary>
     Humidification,
+
+    /// <summary>A heat pump's backup heat: the part of the heating it cannot carry, and all of it below its lockout.</summary>
+    BackupHeating,
 }

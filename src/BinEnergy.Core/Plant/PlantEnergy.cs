@@ -9,7 +9,7 @@ namespace BinEnergy.Core.Plant;
 public struct PlantEnergy : IEquatable<PlantEnergy>
 {
     /// <summary>How many end uses there are.</summary>
-    public const int EndUseCount = 4;
+    public const int EndUseCount = 5;
 
     private EndUses uses;
 
@@ -75,7 +75,7 @@ public struct PlantEnergy : IEquatable<PlantEnergy>
 
     public override readonly bool Equals(object? obj) => obj is PlantEnergy p && Equals(p);
 
-    public override readonly int GetHashCode() => HashCode.Combine(uses[0], uses[1], uses[2], uses[3]);
+    public override readonly int GetHashCode() => HashCode.Combine(uses[0], uses[1], uses[2], uses[3], uses[4]);
 
     public static bool operator ==(PlantEnergy a, PlantEnergy b) => a.Equals(b);
 

@@ -3,7 +3,7 @@ namespace BinEnergy.Core.Plant;
 /// <summary>
 /// Turns thermal loads into energy bought (DESIGN 9): heating load / efficiency (or / heat-pump
 /// COP at the outdoor temperature) of the heating fuel; cooling coil load / COP at the outdoor
-/// temperature as electricity; fan and humidifier energy as electricity. Loads are in joules,
+/// temperature as electricity; fan energy as electricity; humidification by the humidifier type. Loads are in joules,
 /// over an hour or a bin's hours; the outdoor temperature is the hour's dry-bulb or the bin's
 /// evaluation point (mean dry-bulb or midpoint). Every evaluation of a COP curve outside its points is counted in
 /// <see cref="CurveClampCounter"/> (the curve holds its end value there).
@@ -25,10 +25,12 @@ public sealed class PlantModel(PlantSettings settings)
     {
         var bought = PlantEnergy.Zero;
         double hours = loads.HoursVentilated;
-        bought.Add(EndUse.Heating, Heating(loads.Heating.Joules, outdoorC, hours, clamps));
+        var (heating, backup) = HeatingSplit(loads.Heating.Joules, outdoorC, hours, clamps);
+        bought.Add(EndUse.Heating, heating);
+        bought.Add(EndUse.BackupHeating, backup);
         bought.Add(EndUse.Cooling, Cooling(loads.Cooling.Joules, outdoorC, hours, clamps));
         bought.Add(EndUse.Fans, Electricity(loads.FanEnergy.Joules));
-        bought.Add(EndUse.Humidification, Humidification(loads.Humidification.Joules));
+        bought.Add(EndUse.Humidification, Humidification(loads.Humidification.Joules, outdoorC, hours, clamps));
         return bought;
     }
 
@@ -50,28 +52,56 @@ public sealed class PlantModel(PlantSettings settings)
     /// <param name="clamps">Where clamped evaluations are counted.</param>
     public SiteEnergy Heating(double heatingJ, double outdoorC, double hours, CurveClampCounter clamps)
     {
+        var (main, backup) = HeatingSplit(heatingJ, outdoorC, hours, clamps);
+        return main + backup;
+    }
+
+    /// <summary>
+    /// Energy bought to meet a heating load, split into the heating source's and a heat pump's
+    /// backup. A heat pump carries at most its capacity at the outdoor temperature (times the
+    /// hours), nothing below its lockout, at its COP, times (1 - defrost penalty) below the
+    /// defrost temperature; the backup buys the rest at its efficiency. Without a heat pump the
+    /// backup is zero.
+    /// </summary>
+    public (SiteEnergy Main, SiteEnergy Backup) HeatingSplit(double heatingJ, double outdoorC, double hours, CurveClampCounter clamps)
+    {
         if (heatingJ <= 0)
         {
-            return SiteEnergy.Zero;
+            return (SiteEnergy.Zero, SiteEnergy.Zero);
         }
 
-        double bought;
-        if (Settings.Heating == HeatingSource.HeatPump)
+        var s = Settings;
+        if (s.Heating != HeatingSource.HeatPump)
         {
-            var curve = Settings.HeatPumpCop ?? throw new InvalidOperationException("heat pump without a COP curve");
+            return (SiteEnergy.Buy(s.HeatingFuel, heatingJ / s.HeatingEfficiency, s.TariffOf(s.HeatingFuel)), SiteEnergy.Zero);
+        }
+
+        var curve = s.HeatPumpCop ?? throw new InvalidOperationException("heat pump without a COP curve");
+        double carried = heatingJ;
+        if (s.HeatPumpLockout is { } lockout && outdoorC < lockout.Celsius)
+        {
+            carried = 0;
+        }
+        else if (s.HeatPumpCapacity is { } capacity)
+        {
+            carried = Math.Min(heatingJ, capacity.Evaluate(outdoorC) * hours * 3600.0);
+        }
+
+        var main = SiteEnergy.Zero;
+        if (carried > 0)
+        {
             if (curve.IsOutside(outdoorC))
             {
                 clamps.HeatingHours += hours;
             }
 
-            bought = heatingJ / curve.Evaluate(outdoorC);
-        }
-        else
-        {
-            bought = heatingJ / Settings.HeatingEfficiency;
+            double cop = curve.Evaluate(outdoorC) * (s.DefrostBelow is { } d && outdoorC < d.Celsius ? 1.0 - s.DefrostPenalty : 1.0);
+            main = SiteEnergy.Buy(Fuel.Electricity, carried / cop, s.TariffOf(Fuel.Electricity));
         }
 
-        return SiteEnergy.Buy(Settings.HeatingFuel, bought, Settings.TariffOf(Settings.HeatingFuel));
+        double rest = heatingJ - carried;
+        var backup = rest > 0 ? SiteEnergy.Buy(s.BackupFuel, rest / s.BackupEfficiency, s.TariffOf(s.BackupFuel)) : SiteEnergy.Zero;
+        return (main, backup);
     }
 
     /// <summary>Electricity bought to remove a cooling coil load (sensible plus latent), J.</summary>
@@ -85,9 +115,30 @@ public sealed class PlantModel(PlantSettings settings)
         return Electricity(coilJ / CoolingCop(outdoorC, hours, clamps));
     }
 
-    /// <summary>Electricity bought for a humidification load, J.</summary>
-    public SiteEnergy Humidification(double humidificationJ) =>
-        humidificationJ <= 0 ? SiteEnergy.Zero : Electricity(humidificationJ / Settings.HumidifierEfficiency);
+    /// <summary>
+    /// Energy bought for a humidification load, J: the load is h_fg (W_min - W_o) per kg of dry air at
+    /// h_fg = 2,501 kJ/kg (<see cref="Loads.OutdoorAirLoad"/>), so the water added is load / 2,501 kJ/kg.
+    /// Steam (electric or gas): water x <see cref="PlantSettings.SteamJoulesPerKilogram"/> over the
+    /// humidifier efficiency, in electricity or gas. Adiabatic: the air gives the water its latent heat
+    /// (water x 2,501 kJ/kg), which the heating source puts back (bought as heating, at its efficiency
+    /// or COP); the pump's electricity is left out.
+    /// </summary>
+    public SiteEnergy Humidification(double humidificationJ, double outdoorC, double hours, CurveClampCounter clamps)
+    {
+        if (humidificationJ <= 0)
+        {
+            return SiteEnergy.Zero;
+        }
+
+        double water = humidificationJ / Psychrometrics.MoistAir.LatentHeat;
+        double steam = water * PlantSettings.SteamJoulesPerKilogram / Settings.HumidifierEfficiency;
+        return Settings.Humidifier switch
+        {
+            HumidifierType.SteamGas => SiteEnergy.Buy(Fuel.Gas, steam, Settings.TariffOf(Fuel.Gas)),
+            HumidifierType.Adiabatic => Heating(water * Psychrometrics.MoistAir.LatentHeat, outdoorC, hours, clamps),
+            _ => Electricity(steam),
+        };
+    }
 
     /// <summary>Electricity, J, priced and weighed.</summary>
     public SiteEnergy Electricity(double joules) =>

@@ -25,6 +25,46 @@ public sealed record PlantSettings(
     /// <summary>Heat content of the oil, J per US gallon (default 138,500 Btu/gal, recalled from memory).</summary>
     public double OilJoulesPerGallon { get; init; } = FuelUnits.DefaultOilBtuPerGallon * Units.Conversions.JoulesPerBtu;
 
+    /// <summary>
+    /// Heat to raise steam from supply water, J/kg: about 2,630 kJ/kg, the enthalpy of saturated
+    /// steam at 100 C (2,675.6 kJ/kg) less that of supply water at 10 C (42.0 kJ/kg), from the
+    /// thermodynamic properties of water in ASHRAE Handbook—Fundamentals 2017 ch. 1, table 3
+    /// (recalled from memory).
+    /// </summary>
+    public const double SteamJoulesPerKilogram = 2_630_000.0;
+
+    /// <summary>The humidifier type (default steam-electric).</summary>
+    public HumidifierType Humidifier { get; init; } = HumidifierType.SteamElectric;
+
+    /// <summary>
+    /// A heat pump's heating capacity against outdoor dry-bulb, W (held at the end values outside
+    /// the points); null for a heat pump that carries any load.
+    /// </summary>
+    public PerformanceCurve? HeatPumpCapacity { get; init; }
+
+    /// <summary>Outdoor dry-bulb below which the heat pump is locked out and the backup carries all the heating; null for none.</summary>
+    public Units.Temperature? HeatPumpLockout { get; init; }
+
+    /// <summary>The backup heat of a heat pump: electric resistance (default), gas or oil.</summary>
+    public HeatingSource Backup { get; init; } = HeatingSource.Electric;
+
+    /// <summary>Efficiency of the backup heat (default 1.0, electric resistance).</summary>
+    public double BackupEfficiency { get; init; } = 1.0;
+
+    /// <summary>Outdoor dry-bulb below which the heat pump defrosts; null for no defrost penalty.</summary>
+    public Units.Temperature? DefrostBelow { get; init; }
+
+    /// <summary>Fraction the COP loses below <see cref="DefrostBelow"/> (COP x (1 - penalty)).</summary>
+    public double DefrostPenalty { get; init; }
+
+    /// <summary>The fuel the backup heat buys.</summary>
+    public Fuel BackupFuel => Backup switch
+    {
+        HeatingSource.Gas => Fuel.Gas,
+        HeatingSource.Oil => Fuel.Oil,
+        _ => Fuel.Electricity,
+    };
+
     /// <summary>The fuel the heating source buys.</summary>
     public Fuel HeatingFuel => Heating switch
     {

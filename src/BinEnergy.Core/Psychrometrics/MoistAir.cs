@@ -28,6 +28,21 @@ public static class MoistAir
     /// <summary>Enthalpy of vaporisation of water at 0 C, 2,501 kJ/kg, as in Handbook ch. 1, eq. 32 (here J/kg).</summary>
     public const double LatentHeat = 2_501_000.0;
 
+    /// <summary>
+    /// Specific heat of liquid water, 4.186 kJ/(kg K) (here J/(kg K)): the enthalpy of condensate at
+    /// t C is h_w = 4.186 t kJ/kg above 0 C, the approximation Handbook—Fundamentals 2017 ch. 1 uses
+    /// in its wet-bulb equation (eq. 35) and its coil-load equation.
+    /// </summary>
+    public const double LiquidWaterSpecificHeat = 4186.0;
+
+    /// <summary>
+    /// Heat removed per kg of water condensed at <paramref name="tC"/>, J/kg: the vapour's enthalpy
+    /// h_g = 2501 + 1.86 t less the condensate's h_w = 4.186 t (kJ/kg), i.e. 2501 - 2.326 t
+    /// (Handbook—Fundamentals 2017 ch. 1: the coil load m (h1 - h2) - m (W1 - W2) h_w of
+    /// "cooling and dehumidifying of moist air" with eq. 32 for h).
+    /// </summary>
+    public static double CondensingHeat(double tC) => LatentHeat + (VapourSpecificHeat - LiquidWaterSpecificHeat) * tC;
+
     /// <summary>Gas constant of dry air, 287.042 J/(kg K) (Handbook ch. 1, eq. 26: 0.287042 kJ/(kg K)).</summary>
     public const double DryAirGasConstant = 287.042;
 

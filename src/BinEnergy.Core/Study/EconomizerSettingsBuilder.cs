@@ -8,7 +8,10 @@ namespace BinEnergy.Core.Study;
 /// <summary>Builds the economizer settings of a variant's [economizer] table (null when there is none or it is disabled).</summary>
 internal static class EconomizerSettingsBuilder
 {
-    public static EconomizerSettings? Build(StudySection e, OutdoorAirSettings outdoorAir, OccupancySchedule schedule, List<string> assumptions)
+    /// <summary>Default total pressure of the supply fan, Pa: 3 in. w.g. (recalled from memory: a common total for a central air handler with filters, coils and ducts).</summary>
+    public const double DefaultSupplyFanPressurePa = 3 * Conversions.PascalsPerInchOfWater;
+
+    public static EconomizerSettings? Build(StudySection e, OutdoorAirSettings outdoorAir, OccupancySchedule schedule, List<string> assumptions, StudySection plant)
     {
         if (!e.Present || e.Bool("enabled") == false)
         {
@@ -43,8 +46,21 @@ internal static class EconomizerSettingsBuilder
             assumptions.Add("economizer: " + HighLimits.SuggestedNote + " (for the limits the study does not set)");
         }
 
+        var system = AirSystemType.VariableVolume;
+        if (e.Text("system") is string systemName && !AirSystemTypes.TryParse(systemName, out system))
+        {
+            throw e.ErrorAt("system", $"\"{systemName}\" is not an air-system type");
+        }
+
         var settings = new EconomizerSettings
         {
+            System = system,
+            Reset = Reset(e),
+            SupplyFan = SupplyFan(e, plant, assumptions),
+            ReturnFan = e.Number("return_fan_pressure") is double rp
+                ? new AirSystemFan(rp, e.Number("return_fan_efficiency") ?? FanEfficiency(plant))
+                : null,
+            FanCurve = FanCurve(e),
             SupplyAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("supply_airflow")),
             SupplyAirflowMin = e.Number("supply_airflow_min") is double min ? VolumeFlow.FromCubicMetresPerSecond(min) : null,
             MinOutdoorAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("min_outdoor_airflow")),
@@ -61,6 +77,11 @@ internal static class EconomizerSettingsBuilder
             Limits = limits,
             BinPoint = outdoorAir.BinPoint,
         };
+        if (settings.MinimumAirflowIsDefault)
+        {
+            assumptions.Add(FormattableString.Invariant($"economizer: variable-volume minimum supply airflow {EconomizerSettings.DefaultMinimumFraction * 100:0} % of the maximum, not below the minimum outdoor airflow (recalled from memory; set supply_airflow_min, the energy code adopted locally limits reheat at minimum airflow)"));
+        }
+
         var problem = settings.Problems().FirstOrDefault();
         if (problem is not null)
         {
@@ -69,5 +90,58 @@ internal static class EconomizerSettingsBuilder
         }
 
         return settings;
+    }
+
+    private static double FanEfficiency(StudySection plant) => plant.Number("fan_efficiency") ?? PlantSettingsBuilder.DefaultFanEfficiency;
+
+    /// <summary>The supply fan: the study's pressure and efficiency, else the default pressure (stated), none at pressure 0.</summary>
+    private static AirSystemFan? SupplyFan(StudySection e, StudySection plant, List<string> assumptions)
+    {
+        double efficiency = e.Number("supply_fan_efficiency") ?? FanEfficiency(plant);
+        if (e.Number("supply_fan_pressure") is double p)
+        {
+            return p > 0 ? new AirSystemFan(p, efficiency) : null;
+        }
+
+        assumptions.Add(FormattableString.Invariant($"economizer: supply fan 3 in. w.g. (750 Pa) total pressure at efficiency {efficiency:0.##} (recalled from memory; set supply_fan_pressure, 0 for none)"));
+        return new AirSystemFan(DefaultSupplyFanPressurePa, efficiency);
+    }
+
+    /// <summary>The fan part-load curve of <c>fan_curve</c> (four coefficients), else the default.</summary>
+    private static FanPartLoadCurve FanCurve(StudySection e)
+    {
+        if (e.NumberList("fan_curve") is not { } c)
+        {
+            return FanPartLoadCurve.Default;
+        }
+
+        if (c.Count != 4)
+        {
+            throw e.ErrorAt("fan_curve", $"the fan curve takes four coefficients [c0, c1, c2, c3] of c0 + c1 f + c2 f^2 + c3 f^3, not {c.Count}");
+        }
+
+        return new FanPartLoadCurve(c[0], c[1], c[2], c[3]);
+    }
+
+    /// <summary>The supply-temperature reset of the three keys, null when none is set; a partial reset names the missing key.</summary>
+    private static SupplyTemperatureReset? Reset(StudySection e)
+    {
+        string[] keys = ["supply_temp_reset_max", "supply_temp_reset_outdoor_low", "supply_temp_reset_outdoor_high"];
+        var given = keys.Where(e.Has).ToList();
+        if (given.Count == 0)
+        {
+            return null;
+        }
+
+        string? missing = keys.FirstOrDefault(k => !e.Has(k));
+        if (missing is not null)
+        {
+            throw e.ErrorAt(given[0], $"a supply-temperature reset needs all three of {string.Join(", ", keys)}; {missing} is missing");
+        }
+
+        return new SupplyTemperatureReset(
+            Temperature.FromCelsius(e.RequiredNumber(keys[0])),
+            Temperature.FromCelsius(e.RequiredNumber(keys[1])),
+            Temperature.FromCelsius(e.RequiredNumber(keys[2])));
     }
 }

@@ -8,6 +8,12 @@ internal static class PlantSettingsBuilder
     /// <summary>Default total fan efficiency when the study gives none (common practice for a small supply fan and motor).</summary>
     public const double DefaultFanEfficiency = 0.6;
 
+    /// <summary>Default efficiency of a gas-fired steam humidifier (recalled from memory: about that of a non-condensing gas boiler).</summary>
+    public const double DefaultGasSteamEfficiency = 0.8;
+
+    /// <summary>Default COP lost while a heat pump defrosts, % (recalled from memory).</summary>
+    public const double DefaultDefrostPenaltyPct = 10.0;
+
     public static PlantSettings Build(StudySection plant, List<string> assumptions)
     {
         string fuel = plant.Text("heating_fuel") ?? "gas";
@@ -57,8 +63,59 @@ internal static class PlantSettingsBuilder
             [Fuel.Gas] = new(plant.Number("price_gas") ?? 0, plant.Number("carbon_gas") ?? 0),
             [Fuel.Oil] = new((plant.Number("price_oil") ?? 0) / oilJPerGallon, (plant.Number("carbon_oil") ?? 0) / oilJPerGallon),
         };
-        return new PlantSettings(heating, efficiency, heatPump, cooling, fan, plant.Number("humidifier_efficiency") ?? 1.0, tariffs)
+        var humidifier = plant.Text("humidifier") switch
         {
+            "steam-gas" => HumidifierType.SteamGas,
+            "adiabatic" => HumidifierType.Adiabatic,
+            _ => HumidifierType.SteamElectric,
+        };
+        if (humidifier == HumidifierType.Adiabatic && plant.Has("humidifier_efficiency"))
+        {
+            throw plant.ErrorAt("humidifier_efficiency", "an adiabatic humidifier has no efficiency here (its load moves onto the heating source): remove humidifier_efficiency or choose a steam humidifier");
+        }
+
+        double humidifierEfficiency = plant.Number("humidifier_efficiency") ?? (humidifier == HumidifierType.SteamGas ? DefaultGasSteamEfficiency : 1.0);
+        if (humidifier == HumidifierType.SteamGas && !plant.Has("humidifier_efficiency"))
+        {
+            assumptions.Add(FormattableString.Invariant($"gas steam humidifier efficiency {DefaultGasSteamEfficiency} (plant.humidifier_efficiency not given; recalled from memory)"));
+        }
+
+        string[] heatPumpKeys = ["heating_capacity", "heat_pump_lockout", "backup_fuel", "backup_efficiency", "defrost_below", "defrost_penalty_pct"];
+        if (heating != HeatingSource.HeatPump && heatPumpKeys.FirstOrDefault(plant.Has) is string hpKey)
+        {
+            throw plant.ErrorAt(hpKey, $"{hpKey} applies to heating_fuel = \"heat-pump\" only, not \"{fuel}\"; remove it or change the fuel");
+        }
+
+        var backup = plant.Text("backup_fuel") switch
+        {
+            "gas" => HeatingSource.Gas,
+            "oil" => HeatingSource.Oil,
+            _ => HeatingSource.Electric,
+        };
+        if (backup != HeatingSource.Electric && !plant.Has("backup_efficiency"))
+        {
+            throw new StudyFileException(plant.File, plant.Line, "plant.backup_efficiency", $"a {plant.Text("backup_fuel")} backup needs its efficiency: set backup_efficiency (e.g. 0.8)");
+        }
+
+        if (plant.Has("defrost_penalty_pct") && !plant.Has("defrost_below"))
+        {
+            throw plant.ErrorAt("defrost_penalty_pct", "a defrost penalty needs the temperature below which it applies: set defrost_below");
+        }
+
+        if (heating == HeatingSource.HeatPump && plant.Has("defrost_below") && !plant.Has("defrost_penalty_pct"))
+        {
+            assumptions.Add("heat-pump defrost penalty 10 % of the COP below defrost_below (recalled from memory; set defrost_penalty_pct)");
+        }
+
+        return new PlantSettings(heating, efficiency, heatPump, cooling, fan, humidifierEfficiency, tariffs)
+        {
+            Humidifier = humidifier,
+            HeatPumpCapacity = Curve(plant, "heating_capacity"),
+            HeatPumpLockout = plant.Number("heat_pump_lockout") is double lockout ? Units.Temperature.FromCelsius(lockout) : null,
+            Backup = backup,
+            BackupEfficiency = plant.Number("backup_efficiency") ?? 1.0,
+            DefrostBelow = plant.Number("defrost_below") is double defrost ? Units.Temperature.FromCelsius(defrost) : null,
+            DefrostPenalty = (plant.Number("defrost_penalty_pct") ?? DefaultDefrostPenaltyPct) / 100.0,
             OilJoulesPerGallon = oilJPerGallon,
         };
     }

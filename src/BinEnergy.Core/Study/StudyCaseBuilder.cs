@@ -39,7 +39,7 @@ public static class StudyCaseBuilder
             assumptions.Add("no [plant] table: loads only; no energy bought, cost or carbon");
         }
 
-        var economizer = EconomizerSettingsBuilder.Build(s["economizer"], outdoorAir, schedule, assumptions);
+        var economizer = EconomizerSettingsBuilder.Build(s["economizer"], outdoorAir, schedule, assumptions, s["plant"]);
         return new StudyCase(study.Climates[0], variant, outdoorAir, scale, plant, assumptions) { Economizer = economizer };
     }
 
@@ -131,6 +131,7 @@ public static class StudyCaseBuilder
             MinRelativeHumidity = v.Number("min_rh_pct") is double min && min > 0 ? min / 100.0 : null,
             Recovery = Recovery(recovery, plant),
             AirflowMultipliers = multipliers,
+            VentilationFanWattsPerCubicMetrePerSecond = VentilationFan(v, plant, assumptions),
         };
         if (!v.Has("flow_basis"))
         {
@@ -181,6 +182,40 @@ public static class StudyCaseBuilder
         assumptions.Add(FormattableString.Invariant(
             $"demand-controlled ventilation: hourly airflow (R_p P_z x occupancy fraction + R_a A_z) / E_z, from {multipliers.Min() * 100:0.#} % to {multipliers.Max() * 100:0.#} % of the design airflow; the occupancy fractions must reflect real occupancy and the control must meet the local code (too little outdoor air harms occupants)"));
         return multipliers;
+    }
+
+    /// <summary>
+    /// Default total pressure of the ventilation fan, Pa: 1 in. w.g. (248.84 Pa, <see cref="Conversions.PascalsPerInchOfWater"/>)
+    /// for moving outdoor air through an intake, filter and ducts (recalled from memory; the design
+    /// of the system governs).
+    /// </summary>
+    public const double DefaultVentilationFanPressurePa = Conversions.PascalsPerInchOfWater;
+
+    /// <summary>
+    /// The ventilation fan's power per unit outdoor airflow, W per m3/s: <c>fan_power</c>, or
+    /// <c>fan_pressure</c> (default <see cref="DefaultVentilationFanPressurePa"/>) over the plant's
+    /// fan efficiency, P / V = dp / eta (<see cref="Plant.FanPower"/>).
+    /// </summary>
+    private static double VentilationFan(StudySection v, StudySection plant, List<string> assumptions)
+    {
+        if (v.Has("fan_power") && v.Has("fan_pressure"))
+        {
+            throw v.ErrorAt("fan_pressure", "give the ventilation fan either as fan_power or as fan_pressure (with plant.fan_efficiency), not both");
+        }
+
+        if (v.Number("fan_power") is double perFlow)
+        {
+            return perFlow;
+        }
+
+        double efficiency = plant.Number("fan_efficiency") ?? PlantSettingsBuilder.DefaultFanEfficiency;
+        if (v.Number("fan_pressure") is double pressure)
+        {
+            return pressure / efficiency;
+        }
+
+        assumptions.Add(FormattableString.Invariant($"ventilation fan: 1 in. w.g. (250 Pa) total pressure at fan efficiency {efficiency:0.##} (recalled from memory; set ventilation.fan_power or fan_pressure, 0 for none)"));
+        return DefaultVentilationFanPressurePa / efficiency;
     }
 
     private static EnergyRecoverySettings? Recovery(StudySection r, StudySection plant)

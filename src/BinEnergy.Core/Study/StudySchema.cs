@@ -75,6 +75,10 @@ internal static class StudySchema
             { Min = 0, MinExclusive = true, Max = 100, RangeHint = "a percentage above 0 and at most 100" },
             new KeyDefinition("min_rh_pct", ValueKind.Number, Unitless("min_rh_pct"), "Humidify below this indoor relative humidity at the heating setpoint, %.")
             { Min = 0, Max = 100, RangeHint = "a percentage from 0 to 100" },
+            new KeyDefinition("fan_power", ValueKind.Number, FanPowerPerFlow("fan_power"), "Power of the fan that moves the outdoor air, per unit of outdoor airflow (or give fan_pressure).")
+            { Min = 0, Max = 5000, DefaultText = "from fan_pressure", RangeHint = "0 to 2.4 W/cfm (5 W per L/s)" },
+            new KeyDefinition("fan_pressure", ValueKind.Number, PressureDrop("fan_pressure"), "Total pressure the ventilation fan works against, at plant.fan_efficiency.")
+            { Min = 0, Max = 2500, DefaultText = "1 in. w.g. (250 Pa), recalled from memory", RangeHint = "0 to 2,500 Pa (10 in. w.g.)" },
             new KeyDefinition("occupancy_profile", ValueKind.NumberList, Unitless("occupancy_profile"),
                 "24 fractions (0..1) of the design airflow by hour of the day, for demand-controlled ventilation.") { Min = 0, Max = 1 },
         ], true, "The outdoor air and the indoor targets."),
@@ -96,8 +100,15 @@ internal static class StudySchema
         new("economizer", false,
         [
             Bool("enabled", "Set false to evaluate no economizer (e.g. in a variant).", "true"),
+            Choice("system", [.. Economizer.AirSystemTypes.All.Select(Economizer.AirSystemTypes.Name)], Economizer.AirSystemTypes.Name(Economizer.AirSystemType.VariableVolume),
+                "How the air system meets the load: single-zone (constant airflow, supply temperature follows the load), variable-volume (airflow follows the load, reheat at minimum airflow) or constant-volume-reheat."),
             new KeyDefinition("supply_airflow", ValueKind.Number, Flow("supply_airflow"), "Supply airflow (the maximum, for variable volume).") { Min = 0, MinExclusive = true, Max = 1000 },
-            new KeyDefinition("supply_airflow_min", ValueKind.Number, Flow("supply_airflow_min"), "Minimum supply airflow; gives variable volume.") { Min = 0, MinExclusive = true, Max = 1000 },
+            new KeyDefinition("supply_airflow_min", ValueKind.Number, Flow("supply_airflow_min"), "Minimum supply airflow of a variable-volume system.")
+            { Min = 0, MinExclusive = true, Max = 1000, DefaultText = "30 % of supply_airflow, not below min_outdoor_airflow (recalled from memory)" },
+            new KeyDefinition("supply_temp_reset_max", ValueKind.Number, Temperature("supply_temp_reset_max"), "Variable volume: the warmest supply temperature of an outdoor reset (with the two outdoor temperatures below).")
+            { Min = 0, Max = 30, DefaultText = "no reset" },
+            new KeyDefinition("supply_temp_reset_outdoor_low", ValueKind.Number, Temperature("supply_temp_reset_outdoor_low"), "Outdoor dry-bulb at and below which the reset supply is at its warmest.") { Min = -40, Max = 50 },
+            new KeyDefinition("supply_temp_reset_outdoor_high", ValueKind.Number, Temperature("supply_temp_reset_outdoor_high"), "Outdoor dry-bulb at and above which the supply is at supply_temp.") { Min = -40, Max = 50 },
             new KeyDefinition("min_outdoor_airflow", ValueKind.Number, Flow("min_outdoor_airflow"), "Minimum outdoor airflow.") { Min = 0, Max = 1000 },
             Choice("flow_basis", ["site", "standard", "actual"], "the ventilation flow basis", "How volume flow turns into mass of dry air."),
             new KeyDefinition("supply_temp", ValueKind.Number, Temperature("supply_temp"), "Supply air temperature.") { Min = 0, Max = 30 },
@@ -117,6 +128,16 @@ internal static class StudySchema
             new KeyDefinition("high_limit_dewpoint", ValueKind.Number, Temperature("high_limit_dewpoint"), "Dew-point high limit.") { Min = -20, Max = 35 },
             new KeyDefinition("coil_leaving_rh_pct", ValueKind.Number, Unitless("coil_leaving_rh_pct"), "Relative humidity of the air leaving the coil, %.")
             { Min = 50, Max = 100, DefaultText = "90" },
+            new KeyDefinition("supply_fan_pressure", ValueKind.Number, PressureDrop("supply_fan_pressure"), "Total pressure of the supply fan at the supply airflow; 0 for no supply fan energy.")
+            { Min = 0, Max = 5000, DefaultText = "3 in. w.g. (750 Pa), recalled from memory", RangeHint = "0 to 5,000 Pa (20 in. w.g.)" },
+            new KeyDefinition("supply_fan_efficiency", ValueKind.Number, Unitless("supply_fan_efficiency"), "Total (fan, motor, drive) efficiency of the supply fan.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "plant.fan_efficiency, else 0.6" },
+            new KeyDefinition("return_fan_pressure", ValueKind.Number, PressureDrop("return_fan_pressure"), "Total pressure of a return fan at the supply airflow.")
+            { Min = 0, Max = 5000, DefaultText = "no return fan", RangeHint = "0 to 5,000 Pa (20 in. w.g.)" },
+            new KeyDefinition("return_fan_efficiency", ValueKind.Number, Unitless("return_fan_efficiency"), "Total efficiency of the return fan.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "plant.fan_efficiency, else 0.6" },
+            new KeyDefinition("fan_curve", ValueKind.NumberList, Unitless("fan_curve"), "Variable volume: fan power fraction c0 + c1 f + c2 f^2 + c3 f^3 of the flow fraction f, as [c0, c1, c2, c3].")
+            { Min = -10, Max = 10, DefaultText = "[0.0013, 0.1470, 0.9506, -0.0998] (energy-code baseline curve, recalled from memory)" },
         ], true, "The air system and its economizer controls; leave the table out for none."),
 
         new("plant", false,
@@ -126,6 +147,23 @@ internal static class StudySchema
             { Min = 0, MinExclusive = true, Max = 1.2, DefaultText = "1.0 for electric; required for gas and oil", RangeHint = "an efficiency above 0 and at most 1.2" },
             new KeyDefinition("heating_cop", ValueKind.NumberOrPoints, Rating("heating_cop", (v, _) => v), "Heat-pump COP: one number, or [outdoor temperature, COP] pairs.")
             { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-50, 40) },
+            new KeyDefinition("heating_capacity", ValueKind.NumberOrPoints,
+            [
+                new("heating_capacity_btuh", "Btu/h", (v, _) => Units.Power.FromBtuPerHour(v).Watts, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_btuh_f", "Btu/h", (v, _) => Units.Power.FromBtuPerHour(v).Watts, (t, _) => Conversions.FahrenheitToCelsius(t)),
+                new("heating_capacity_kw", "kW", (v, _) => v * 1000.0, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_kw_c", "kW", (v, _) => v * 1000.0, (t, _) => t),
+            ], "Heat-pump heating capacity: one number, or [outdoor temperature, capacity] pairs; the backup carries the rest.")
+            { Min = 0, Max = 1e8, PointXRange = (-50, 40), DefaultText = "no limit" },
+            new KeyDefinition("heat_pump_lockout", ValueKind.Number, Temperature("heat_pump_lockout"), "Below this outdoor temperature the heat pump is off and the backup heats.")
+            { Min = -50, Max = 20, DefaultText = "none" },
+            Choice("backup_fuel", ["electric", "gas", "oil"], "electric", "The heat pump's backup heat: electric resistance, gas or oil."),
+            new KeyDefinition("backup_efficiency", ValueKind.Number, Unitless("backup_efficiency"), "Efficiency of the backup heat.")
+            { Min = 0, MinExclusive = true, Max = 1.2, DefaultText = "1.0 (electric); required for gas and oil" },
+            new KeyDefinition("defrost_below", ValueKind.Number, Temperature("defrost_below"), "Below this outdoor temperature the heat pump defrosts and its COP drops by defrost_penalty_pct.")
+            { Min = -30, Max = 15, DefaultText = "no defrost penalty" },
+            new KeyDefinition("defrost_penalty_pct", ValueKind.Number, Unitless("defrost_penalty_pct"), "COP lost while defrosting, %.")
+            { Min = 0, Max = 50, DefaultText = "10 (recalled from memory)" },
             new KeyDefinition("cooling", ValueKind.NumberOrPoints,
             [
                 .. Rating("cooling_cop", (v, _) => v),
@@ -135,8 +173,10 @@ internal static class StudySchema
             { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-10, 60), RangeHint = "a COP above 0 and at most 15" },
             new KeyDefinition("fan_efficiency", ValueKind.Number, Unitless("fan_efficiency"), "Total fan efficiency for the fan energy of pressure drops.")
             { Min = 0, MinExclusive = true, Max = 1, DefaultText = "0.6" },
-            new KeyDefinition("humidifier_efficiency", ValueKind.Number, Unitless("humidifier_efficiency"), "Electric humidifier efficiency.")
-            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "1.0" },
+            Choice("humidifier", ["steam-electric", "steam-gas", "adiabatic"], "steam-electric",
+                "How the outdoor air is humidified: steam from supply water (about 2,630 kJ/kg) by electricity or gas, or adiabatic (the heating source reheats the air)."),
+            new KeyDefinition("humidifier_efficiency", ValueKind.Number, Unitless("humidifier_efficiency"), "Steam humidifier efficiency.")
+            { Min = 0, MinExclusive = true, Max = 1, DefaultText = "1.0 for steam-electric, 0.8 for steam-gas (recalled from memory)" },
             Money("price_electricity", [("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Electricity price."),
             Money("price_gas", [("per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Gas price."),
             Money("price_oil", [("per_gal", (v, _) => v), ("per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Oil price."),
@@ -212,6 +252,12 @@ internal static class StudySchema
     [
         new(b + "_btuh", "Btu/h", (v, _) => Units.Power.FromBtuPerHour(v).Watts),
         new(b + "_kw", "kW", (v, _) => v * 1000.0),
+    ];
+
+    private static KeyAlternative[] FanPowerPerFlow(string b) =>
+    [
+        new(b + "_w_per_cfm", "W/cfm", (v, _) => v / Conversions.CubicMetresPerSecondPerCfm),
+        new(b + "_w_per_ls", "W per L/s", (v, _) => v * 1000.0),
     ];
 
     private static KeyAlternative[] PressureDrop(string b) =>

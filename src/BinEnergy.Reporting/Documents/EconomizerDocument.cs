@@ -20,11 +20,12 @@ public static class EconomizerDocument
     public static ResultDocument Build(EconomizerEvaluation e, DisplayUnits u, IntegrationMethod headline, string schedule, string methods)
     {
         string method = IntegrationMethods.Label(headline);
-        var doc = new ResultDocument($"Economizer evaluation: {e.Weather.Site.Name}, {e.OccupiedHours} occupied hours of {e.Weather.Count}") { CsvTable = "by_method" };
+        var doc = new ResultDocument($"Economizer evaluation: {e.Weather.Site.Name}, {AirSystemTypes.Name(e.Settings.System)} system, {e.OccupiedHours} occupied hours of {e.Weather.Count}") { CsvTable = "by_method" };
         doc.Add(new ColumnSet<EconomizerEvaluation>()
             .Text("site", "Site", x => x.Weather.Site.Name)
             .Integer("hours", "Hours", x => x.Weather.Count)
             .Integer("hours_occupied", "Occupied hours", x => x.OccupiedHours)
+            .Text("system", "Air system", x => AirSystemTypes.Name(x.Settings.System))
             .Text("headline_method", "Headline method", _ => IntegrationMethods.Name(headline))
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Layout = TableLayout.Record, ShowInTerminal = false }, [e]));
 
@@ -75,6 +76,8 @@ public static class EconomizerDocument
             .Number("hourly_coil_total", u.Energy, "Coil, hourly", b => best.ByBin[b].Hourly.CoilTotal.Joules)
             .Number("joint_bin_coil_total", u.Energy, "Coil, joint", b => best.ByBin[b].JointBin.CoilTotal.Joules)
             .Number("bin_coil_total", u.Energy, "Coil, bin", b => best.ByBin[b].Bin.CoilTotal.Joules)
+            .Number("hourly_reheat", u.Energy, "Reheat, hourly", b => best.ByBin[b].Hourly.Reheat.Joules)
+            .Number("hourly_preheat", u.Energy, "Preheat, hourly", b => best.ByBin[b].Hourly.Preheat.Joules, detail: true)
             .Fill(new ResultTable("bins") { Title = $"Modes by bin, best control: {best.Control.Describe()} (hours per mode hour by hour; the bin method's mode at the bin state)" }, rows));
 
         doc.Add(new ColumnSet<int>()
@@ -82,7 +85,12 @@ public static class EconomizerDocument
             .Number("baseline_coil_total", u.Energy, "Baseline", m => e.Baseline.ByMonth[m].CoilTotal.Joules)
             .Number("coil_total", u.Energy, best.Control.Describe(), m => best.ByMonth[m].CoilTotal.Joules)
             .Number("savings", u.Energy, "Savings", m => best.ByMonth[m].SavingsAgainst(e.Baseline.ByMonth[m]).Joules)
-            .Fill(new ResultTable("months") { Title = $"Coil energy by month, hourly sum ({u.Energy.Symbol})" }, Enumerable.Range(0, 12).Where(m => e.Baseline.ByMonth[m].Hours > 0)));
+            .Number("baseline_reheat", u.Energy, "Baseline reheat", m => e.Baseline.ByMonth[m].Reheat.Joules)
+            .Number("reheat", u.Energy, "Reheat", m => best.ByMonth[m].Reheat.Joules)
+            .Number("baseline_preheat", u.Energy, "Baseline preheat", m => e.Baseline.ByMonth[m].Preheat.Joules, detail: true)
+            .Number("preheat", u.Energy, "Preheat", m => best.ByMonth[m].Preheat.Joules, detail: true)
+            .Number("fans", u.Electricity, "Fans", m => e.Baseline.ByMonth[m].Fans.Joules)
+            .Fill(new ResultTable("months") { Title = $"Coil energy and reheat by month, hourly sum ({u.Energy.Symbol})" }, Enumerable.Range(0, 12).Where(m => e.Baseline.ByMonth[m].Hours > 0)));
 
         if (e.Controls.Any(c => IntegrationMethods.All.Any(m => c.Savings(m).Joules < 0)))
         {

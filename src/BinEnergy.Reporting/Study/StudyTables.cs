@@ -100,6 +100,7 @@ public static class StudyTables
         new ColumnSet<(StudyCaseResult Case, string Year, EconomizerControlResult Control, IntegrationMethod Method)>()
             .Add(CaseColumns, x => x.Case)
             .Text("year", "Year", x => x.Year)
+            .Text("system", "Air system", x => AirSystemTypes.Name(x.Case.Economizer!.Settings.System))
             .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
             .Text("control", "Control", x => FigureColumns.ControlName(x.Control))
             .Text("integration", "Integration", x => FigureColumns.Integration(x.Control))

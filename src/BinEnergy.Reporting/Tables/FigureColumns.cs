@@ -67,6 +67,9 @@ public static class FigureColumns
             .Number("cooling", u.Cost, "Cooling cost", f => f.Bought[EndUse.Cooling].Cost, detail: true)
             .Number("fans", u.Cost, "Fan cost", f => f.Bought[EndUse.Fans].Cost, detail: true)
             .Number("humidification", u.Cost, "Humidification cost", f => f.Bought[EndUse.Humidification].Cost, detail: true)
+            .Number("backup_heating_electricity", u.Electricity, "Backup heat, electricity", f => f.Bought[EndUse.BackupHeating].ElectricityJ, detail: true)
+            .Number("backup_heating_gas", u.Gas, "Backup heat, gas", f => f.Bought[EndUse.BackupHeating].GasJ, detail: true)
+            .Number("backup_heating", u.Cost, "Backup heat cost", f => f.Bought[EndUse.BackupHeating].Cost, detail: true)
             .Number(string.Empty, u.Cost, "Cost", f => f.Bought.Total.Cost)
             .Number("carbon", u.Carbon, "Carbon", f => f.Bought.Total.CarbonKg);
     }
@@ -94,7 +97,12 @@ public static class FigureColumns
             .Number("coil_latent", u.Energy, "Coil, latent", x => x.Control.Totals[x.Method].CoilLatent.Joules, detail: true)
             .Number("coil_total", u.Energy, "Coil total", x => x.Control.Totals[x.Method].CoilTotal.Joules)
             .Number("savings", u.Energy, "Savings", x => x.Control.Savings(x.Method).Joules)
-            .Number("savings", u.Percent, "Share of baseline saved", x => x.Control.SavingsPercent(x.Method) ?? double.NaN);
+            .Number("savings", u.Percent, "Share of baseline saved", x => x.Control.SavingsPercent(x.Method) ?? double.NaN)
+            .Number("reheat", u.Energy, "Reheat", x => x.Control.Totals[x.Method].Reheat.Joules)
+            .Number("preheat", u.Energy, "Preheat", x => x.Control.Totals[x.Method].Preheat.Joules, detail: true)
+            .Number("savings_heating", u.Energy, "Reheat and preheat saved", x => x.Control.HeatingSavings(x.Method).Joules)
+            .Number("unmet", u.Energy, "Unmet load", x => x.Control.Totals[x.Method].Unmet.Joules, detail: true)
+            .Number("fans", u.Electricity, "Fans", x => x.Control.Totals[x.Method].Fans.Joules);
         if (!plant)
         {
             return set;
@@ -105,8 +113,12 @@ public static class FigureColumns
             .Number("compressor", u.Cost, "Compressor cost", x => x.Control.Totals[x.Method].Compressor.Cost, detail: true)
             .Number("compressor_carbon", u.Carbon, "Compressor carbon", x => x.Control.Totals[x.Method].Compressor.CarbonKg, detail: true)
             .Number("savings_compressor", u.Electricity, "Compressor saved", x => x.Control.CompressorSavings(x.Method).ElectricityJ)
-            .Number("savings", u.Cost, "Cost saved", x => x.Control.CompressorSavings(x.Method).Cost)
-            .Number("savings_carbon", u.Carbon, "Carbon saved", x => x.Control.CompressorSavings(x.Method).CarbonKg, detail: true);
+            .Number("heating", u.Cost, "Reheat and preheat cost", x => x.Control.Totals[x.Method].Heating.Cost, detail: true)
+            .Number("fans", u.Cost, "Fan cost", x => x.Control.Totals[x.Method].FanElectricity.Cost, detail: true)
+            .Number("purchased", u.Cost, "Cost of everything bought", x => x.Control.Totals[x.Method].Purchased.Cost, detail: true)
+            .Number("heating_carbon", u.Carbon, "Reheat and preheat carbon", x => x.Control.Totals[x.Method].Heating.CarbonKg, detail: true)
+            .Number("savings", u.Cost, "Cost saved", x => x.Control.PurchasedSavings(x.Method).Cost)
+            .Number("savings_carbon", u.Carbon, "Carbon saved", x => x.Control.PurchasedSavings(x.Method).CarbonKg, detail: true);
     }
 
     /// <summary>The economizer control's name as tables write it (<c>none</c> for the baseline).</summary>

@@ -72,6 +72,9 @@ public static class AssumptionText
                 + $"{DisplayUnits.Text(u.Power, a.FanPenalty.Watts)} {(r.BypassWhenIdle ? "in recovering hours" : "in every ventilated hour")}";
         }
 
+        yield return a.VentilationFanPower.Watts > 0
+            ? $"ventilation fan {DisplayUnits.Text(u.Power, a.VentilationFanPower.Watts)} at the design outdoor airflow, in every ventilated hour (fan energy, as electricity)"
+            : "no ventilation fan energy (set to zero)";
         yield return "calendar: " + a.Calendar;
     }
 
@@ -87,16 +90,36 @@ public static class AssumptionText
         string Flow(VolumeFlow v) => DisplayUnits.Text(u.Airflow, v.CubicMetresPerSecond);
         double xMin = s.MinOutdoorAirflow.CubicMetresPerSecond / s.SupplyAirflow.CubicMetresPerSecond;
         yield return "occupied schedule: " + schedule;
-        yield return s.IsVariableVolume
-            ? $"variable supply airflow {Flow(s.SupplyAirflowMin!.Value)} to {Flow(s.SupplyAirflow)}, following the building load m_s = Q_b / (c_p (T_r - T_s)) between those bounds"
-            : $"constant supply airflow {Flow(s.SupplyAirflow)}";
+        yield return s.System switch
+        {
+            AirSystemType.VariableVolume => $"air system variable-volume: supply airflow {Flow(s.MinimumSupplyAirflow)}{(s.MinimumAirflowIsDefault ? " (default minimum, recalled from memory)" : string.Empty)} to {Flow(s.SupplyAirflow)}, following the building load m_s = Q_b / (c_p (T_r - T_s)) between those bounds; below what the minimum airflow delivers, the reheat is counted as heating",
+            AirSystemType.SingleZone => $"air system single-zone: constant supply airflow {Flow(s.SupplyAirflow)} whose supply temperature follows the load, T_s = T_r - Q_b / (m_s c_p), never below {u.Show(s.SupplyTemperature)}; no reheat",
+            _ => $"air system constant-volume-reheat: constant supply airflow {Flow(s.SupplyAirflow)} cooled to {u.Show(s.SupplyTemperature)} in every cooling hour and reheated back to what the load needs (reheat counted as heating)",
+        };
+        if (s.Reset is { } reset && s.IsVariableVolume)
+        {
+            yield return $"supply-temperature reset: {u.Show(reset.MaxSupply)} at and below {u.Show(reset.OutdoorLow)} outdoors, falling linearly to {u.Show(s.SupplyTemperature)} at and above {u.Show(reset.OutdoorHigh)}";
+        }
+
+        yield return (s.SupplyFan, s.ReturnFan) switch
+        {
+            (null, null) => "no fans counted (supply fan pressure 0): the coil sees no fan heat",
+            var (sf, rf) => string.Join("; ", new[]
+            {
+                sf is null ? null : $"supply fan {DisplayUnits.Text(u.PressureDrop, sf.TotalPressurePa)} at efficiency {sf.Efficiency.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)}: {DisplayUnits.Text(u.Power, sf.DesignPowerW(s.SupplyAirflow))} at the supply airflow, its heat after the coil",
+                rf is null ? null : $"return fan {DisplayUnits.Text(u.PressureDrop, rf.TotalPressurePa)} at efficiency {rf.Efficiency.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)}: {DisplayUnits.Text(u.Power, rf.DesignPowerW(s.SupplyAirflow))}, its heat in the return air",
+                s.IsVariableVolume ? "fan power at part flow P / P_design = " + s.FanCurve.Describe() + (s.FanCurve == FanPartLoadCurve.Default ? " (an energy-code baseline curve, recalled from memory)" : " (set by the user)") : null,
+                "fans run in every occupied hour",
+            }.Where(x => x is not null)),
+        };
+        yield return "mixed air below the supply temperature is preheated (counted as heating, as is reheat" + (e.HasPlant ? ", bought through the plant's heating" : string.Empty) + "); the baseline is the same system without an economizer";
         yield return FormattableString.Invariant($"minimum outdoor airflow {Flow(s.MinOutdoorAirflow)} (outdoor fraction at least {xMin * 100:0.#} % at full supply airflow{(s.IsVariableVolume ? ", more at reduced airflow" : string.Empty)})");
         yield return FlowBasis(s.FlowBasis).Replace("the air's own state (each hour's outdoor air; a bin's evaluation state at the site pressure); the density shown is the mean", "the coil-entering (mixed-air) state", StringComparison.Ordinal);
         yield return FormattableString.Invariant($"supply (coil-leaving) temperature {u.Show(s.SupplyTemperature)}; coil-leaving humidity at most {s.CoilLeavingRelativeHumidity * 100:0} % RH at the supply temperature ({DisplayUnits.Text(u.Moisture, m.CoilLeavingHumidityLimit)})");
         yield return FormattableString.Invariant($"return air {u.Show(s.ReturnTemperature)} at {s.ReturnRelativeHumidity * 100:0} % RH: humidity ratio {DisplayUnits.Text(u.Moisture, m.ReturnHumidityRatio)}, enthalpy {DisplayUnits.Text(u.Enthalpy, m.ReturnEnthalpyJPerKg)}");
         yield return $"building sensible cooling load {DisplayUnits.Text(u.Power, s.LoadLine.DesignLoad.Watts)} at {u.Show(s.LoadLine.DesignOutdoor)} outdoors, falling linearly to zero at the {u.Show(s.LoadLine.BalancePoint)} balance point (no cooling below it)";
         yield return $"site pressure {DisplayUnits.Text(u.Pressure, m.SitePressurePa)} for the indoor states; each hour's outdoor enthalpy and dew point from the record";
-        yield return "mixing linear in dry-bulb and humidity ratio; the coil cools the mixed air to the supply temperature; coil energy is that of the coil only (no fan, no reheat)"
+        yield return "mixing linear in dry-bulb and humidity ratio; the coil cools the mixed air to the supply temperature; coil energy is that of the coil only; reheat and preheat are shown beside it"
             + (e.HasPlant ? "; compressor electricity is the coil energy over the cooling COP at the outdoor dry-bulb" : string.Empty);
         yield return "the economizer runs only when the outdoor air is cooler than the return air and the control's high limit allows it; integrated controls keep 100 % outdoor air while the coil trims, non-integrated ones lock out to minimum outdoor air whenever the coil must run";
         yield return $"{e.OccupiedHours} occupied hours of {e.Weather.Count}; the system runs in occupied hours only";

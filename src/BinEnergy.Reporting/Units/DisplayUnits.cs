@@ -33,6 +33,7 @@ public sealed class DisplayUnits
         Power = ip ? new("btuh", "Btu/h", w => w * 3600.0 / Conversions.JoulesPerBtu, "N0") : new("kw", "kW", w => w / 1000.0, "N2");
         Airflow = ip ? new("cfm", "cfm", v => v / Conversions.CubicMetresPerSecondPerCfm, "N0") : new("ls", "L/s", v => v * 1000.0, "N0");
         Pressure = ip ? new("psia", "psia", p => p / Conversions.PascalsPerPsi, "0.000") : new("kpa", "kPa", p => p / 1000.0, "0.000");
+        FanPowerPerFlow = ip ? new("w_per_cfm", "W/cfm", p => p * Conversions.CubicMetresPerSecondPerCfm, "0.###") : new("w_per_ls", "W per L/s", p => p / 1000.0, "0.###");
         PressureDrop = ip ? new("inwc", "in. w.g.", p => p / Conversions.PascalsPerInchOfWater, "0.###") : new("pa", "Pa", p => p, "0.#");
         Density = ip
             ? new("lb_ft3", "lb/ft3", r => r / Conversions.KilogramsPerPound * Conversions.CubicMetresPerCubicFoot, "0.0000")
@@ -94,6 +95,9 @@ public sealed class DisplayUnits
 
     /// <summary>A fan or device pressure drop: in. w.g. or Pa.</summary>
     public DisplayUnit PressureDrop { get; }
+
+    /// <summary>Fan power per unit airflow (specific fan power): W/cfm or W per L/s.</summary>
+    public DisplayUnit FanPowerPerFlow { get; }
 
     /// <summary>Air density: lb/ft3 or kg/m3.</summary>
     public DisplayUnit Density { get; }

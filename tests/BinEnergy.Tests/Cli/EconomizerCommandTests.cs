@@ -20,6 +20,58 @@ public class EconomizerCommandTests
     private static string[] Args(params string[] extra) => ["economizer", Melbourne, "--map", "tmy3", .. System, .. extra];
 
     [Fact]
+    public void SystemOption_ChoosesTheType_AndConstantVolumeReheatCountsReheat()
+    {
+        var (code, output, err) = Run(["economizer", Melbourne, "--map", "tmy3", .. System.Skip(4), "--min-outdoor-airflow", "2000", "--supply-airflow", "10000",
+            "--system", "constant-volume-reheat", "--json"]);
+        Assert.True(code == 0, err);
+        using var doc = JsonDocument.Parse(output);
+        Assert.Equal("constant-volume-reheat", doc.RootElement.GetProperty("system").GetString());
+        Assert.True(doc.RootElement.GetProperty("controls").GetProperty("none").GetProperty("reheat_kbtu").GetDouble() > 0);
+
+        var (bad, _, message) = Run(Args("--system", "dual-duct"));
+        Assert.Equal(2, bad);
+        Assert.Contains("--system", message, StringComparison.Ordinal);
+        Assert.Contains("single-zone", message, StringComparison.Ordinal);
+
+        // A minimum airflow belongs to variable volume only: the error names the option.
+        var (wrong, _, why) = Run(Args("--system", "single-zone"));
+        Assert.NotEqual(0, wrong);
+        Assert.Contains("supply-airflow-min", why, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void SupplyFan_DefaultsToThreeInchesAndRunsEveryOccupiedHour()
+    {
+        string[] cv = ["economizer", Melbourne, "--map", "tmy3", .. System.Skip(4), "--min-outdoor-airflow", "2000", "--supply-airflow", "10000",
+            "--system", "constant-volume-reheat", "--json"];
+        var (code, output, err) = Run(cv);
+        Assert.True(code == 0, err);
+        using var doc = JsonDocument.Parse(output);
+        int hours = doc.RootElement.GetProperty("hours_occupied").GetInt32();
+
+        // 10,000 cfm = 4.719474 m3/s x 3 in. w.g. (3 x 248.84 Pa, default recalled from memory) / 0.6 = 5,871.7 W (FanPower), every occupied hour.
+        double kwh = 4.719474 * 3 * 248.84 / 0.6 * hours / 1000;
+        Assert.Equal(kwh, doc.RootElement.GetProperty("controls").GetProperty("none").GetProperty("fans_kwh").GetDouble(), 0.001 * kwh);
+
+        var (none, noFan, err2) = Run([.. cv, "--supply-fan-pressure", "0"]);
+        Assert.True(none == 0, err2);
+        using var doc2 = JsonDocument.Parse(noFan);
+        Assert.Equal(0.0, doc2.RootElement.GetProperty("controls").GetProperty("none").GetProperty("fans_kwh").GetDouble());
+
+        // Fan heat after the coil adds to the coil energy.
+        Assert.True(doc.RootElement.GetProperty("controls").GetProperty("none").GetProperty("coil_total_kbtu").GetDouble()
+            > doc2.RootElement.GetProperty("controls").GetProperty("none").GetProperty("coil_total_kbtu").GetDouble());
+
+        var (bad, _, message) = Run(Args("--fan-curve", "0.1,x,0.9,0"));
+        Assert.Equal(2, bad);
+        Assert.Contains("--fan-curve", message, StringComparison.Ordinal);
+        var (three, _, why) = Run(Args("--fan-curve", "0.1,0.2,0.7"));
+        Assert.NotEqual(0, three);
+        Assert.Contains("four coefficients", why, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Json_HasTheContractFields_AndReportsNegativeSavings()
     {
         var (code, output, err) = Run(Args("--json", "--controls", "none,fixed-drybulb,differential-drybulb,fixed-enthalpy,differential-enthalpy,fixed-dewpoint"));

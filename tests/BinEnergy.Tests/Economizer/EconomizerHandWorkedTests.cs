@@ -14,15 +14,16 @@ namespace BinEnergy.Tests.Economizer;
 ///   1.4980 kPa, recalled from memory.)
 /// Enthalpy by Handbook—Fundamentals 2017 ch. 1 eq. 32: h = 1006 t + W (2,501,000 + 1860 t) J/kg,
 ///   h_r = 1006(24) + 0.0092985052 (2,501,000 + 44,640) = 24,144 + 23,670.65 = 47,814.65 J/kg.
-/// Coil: sensible = m_s (1006 + 1860 W_mix)(T_mix - 13); latent = m_s (W_mix - W_leave)(2,501,000 + 1860 x 13),
-///   where 2,501,000 + 24,180 = 2,525,180 J/kg.
+/// Coil: sensible = m_s (1006 + 1860 W_mix)(T_mix - 13); latent = m_s (W_mix - W_leave)(h_g - h_w) at 13 C with
+///   h_g = 2,501,000 + 1860 x 13 (eq. 32) and the condensate's h_w = 4186 x 13 (ch. 1, the coil equation
+///   m (h1 - h2) - m (W1 - W2) h_w): 2,501,000 - 2326 x 13 = 2,501,000 - 30,238 = 2,470,762 J/kg.
 /// </summary>
 public class EconomizerHandWorkedTests
 {
     private const double MassFlow = 1.201384753; // 1 m3/s x 0.075 lb/ft3 (common practice)
     private const double Wr = 0.0092985052; // psychrolib 1.1.1, GetHumRatioFromRelHum(24, 0.5, 101325)
     private const double Wlim = 0.0083859349; // psychrolib 1.1.1, GetHumRatioFromRelHum(13, 0.9, 101325)
-    private const double LatentAtTs = 2_525_180.0; // 2,501,000 + 1860 x 13 J/kg (eq. 32)
+    private const double LatentAtTs = 2_470_762.0; // 2,501,000 + 1860 x 13 - 4186 x 13 J/kg (eq. 32 less the condensate)
 
     private static readonly EconomizerModel Model = new(EconomizerTestSystems.HandWorked(), EconomizerTestSystems.SeaLevel);
 
@@ -63,15 +64,15 @@ public class EconomizerHandWorkedTests
         // Baseline, x = 0.2: T_mix = 0.2(13) + 0.8(24) = 21.8 C;
         // W_mix = 0.2(0.008) + 0.8(0.0092985052) = 0.0016 + 0.0074388042 = 0.0090388042;
         // sensible = 1.2013848 (1006 + 1860 x 0.0090388042)(21.8 - 13) = 1.2013848 x 1022.8122 x 8.8 = 10,813.36 W;
-        // W_leave = W_lim; latent = 1.2013848 (0.0090388042 - 0.0083859349) 2,525,180 = 1,980.62 W; total 12,793.98 W.
+        // W_leave = W_lim; latent = 1.2013848 (0.0090388042 - 0.0083859349) 2,470,762 = 1,937.94 W; total 12,751.30 W.
         var b = Hour(EconomizerControl.None, 13.0, 0.008);
         Assert.Equal(EconomizerMode.MinimumOutdoorAir, b.Mode);
         Assert.Equal(0.2, b.OutdoorFraction, 12);
         Close(21.8, b.MixedDryBulbC, 1e-12);
         Close(0.0090388042, b.MixedHumidityRatio, 1e-6);
         Close(10_813.36, b.CoilSensibleW, 2e-6);
-        Close(1_980.62, b.CoilLatentW, 2e-5);
-        Close(12_793.98, b.CoilTotalW, 2e-6);
+        Close(1_937.94, b.CoilLatentW, 2e-5);
+        Close(12_751.30, b.CoilTotalW, 2e-6);
         Close(Wlim, b.LeavingHumidityRatio, 1e-6);
     }
 
@@ -106,14 +107,14 @@ public class EconomizerHandWorkedTests
         // Non-integrated: the coil must run, so the economizer locks out to x = 0.2:
         //   T_mix = 0.2(18) + 0.8(24) = 22.8 C; W_mix = 0.0014 + 0.0074388042 = 0.0088388042;
         //   sensible = 1.2013848 (1006 + 16.4402)(9.8) = 12,037.77 W;
-        //   latent = 1.2013848 (0.0088388042 - 0.0083859349) 2,525,180 = 1,373.88 W; total 13,411.65 W.
+        //   latent = 1.2013848 (0.0088388042 - 0.0083859349) 2,470,762 = 1,344.27 W; total 13,382.04 W.
         var n = Hour(NonIntegrated(HighLimitKind.DifferentialDryBulb), 18.0, 0.007);
         Assert.Equal(EconomizerMode.MinimumOutdoorAir, n.Mode);
         Assert.Equal(0.2, n.OutdoorFraction, 12);
         Close(22.8, n.MixedDryBulbC, 1e-12);
         Close(12_037.77, n.CoilSensibleW, 2e-6);
-        Close(1_373.88, n.CoilLatentW, 3e-5);
-        Close(13_411.65, n.CoilTotalW, 2e-6);
+        Close(1_344.27, n.CoilLatentW, 3e-5);
+        Close(13_382.04, n.CoilTotalW, 2e-6);
         Assert.Equal(Hour(EconomizerControl.None, 18.0, 0.007), n);
     }
 
@@ -124,7 +125,7 @@ public class EconomizerHandWorkedTests
         // Every control: x = x_min = 0.2; T_mix = 0.2(30) + 0.8(24) = 25.2 C;
         // W_mix = 0.0024 + 0.0074388042 = 0.0098388042;
         // sensible = 1.2013848 (1006 + 18.3002)(12.2) = 15,013.06 W;
-        // latent = 1.2013848 (0.0098388042 - 0.0083859349) 2,525,180 = 4,407.59 W; total 19,420.65 W.
+        // latent = 1.2013848 (0.0098388042 - 0.0083859349) 2,470,762 = 4,312.60 W; total 19,325.66 W.
         foreach (var c in EconomizerTestSystems.AllControls(true).Append(EconomizerControl.None))
         {
             var h = Hour(c, 30.0, 0.012);
@@ -132,8 +133,8 @@ public class EconomizerHandWorkedTests
             Assert.Equal(0.2, h.OutdoorFraction, 12);
             Close(25.2, h.MixedDryBulbC, 1e-12);
             Close(15_013.06, h.CoilSensibleW, 2e-6);
-            Close(4_407.59, h.CoilLatentW, 1e-5);
-            Close(19_420.65, h.CoilTotalW, 2e-6);
+            Close(4_312.60, h.CoilLatentW, 1e-5);
+            Close(19_325.66, h.CoilTotalW, 2e-6);
         }
     }
 
@@ -144,11 +145,11 @@ public class EconomizerHandWorkedTests
         // Fixed dry-bulb: disabled (minimum outdoor air). Differential dry-bulb: 21 < 24, enabled, x = 1:
         //   sensible 1.2013848 (1006 + 9.3)(8) = 9,758.13 W, no latent (W_mix 0.005 < W_lim).
         // Baseline x = 0.2: T_mix = 23.4 C, W_mix = 0.0084388042:
-        //   sensible 1.2013848 (1006 + 15.6962)(10.4) = 12,765.48 W; latent 1.2013848 (0.0000528693) 2,525,180 = 160.39 W.
+        //   sensible 1.2013848 (1006 + 15.6962)(10.4) = 12,765.48 W; latent 1.2013848 (0.0000528693) 2,470,762 = 156.93 W.
         var f = Hour(Integrated(HighLimitKind.FixedDryBulb), 21.0, 0.005);
         Assert.Equal(EconomizerMode.MinimumOutdoorAir, f.Mode);
         Close(12_765.48, f.CoilSensibleW, 2e-6);
-        Close(160.39, f.CoilLatentW, 3e-4);
+        Close(156.93, f.CoilLatentW, 3e-4);
         var d = Hour(Integrated(HighLimitKind.DifferentialDryBulb), 21.0, 0.005);
         Assert.Equal(EconomizerMode.Integrated, d.Mode);
         Close(9_758.13, d.CoilSensibleW, 2e-6);
@@ -180,19 +181,19 @@ public class EconomizerHandWorkedTests
         // T_o = 18 C, W_o = 0.010: h_o = 18,108 + 0.010 (2,534,480) = 43,452.8 J/kg > limit 40,000.
         // Fixed enthalpy: disabled. Differential enthalpy: 43,452.8 < h_r 47,814.65 and 18 < 20: enabled, x = 1:
         //   sensible 1.2013848 (1006 + 18.6)(5) = 6,154.69 W;
-        //   latent 1.2013848 (0.010 - 0.0083859349) 2,525,180 = 4,896.61 W; total 11,051.30 W.
+        //   latent 1.2013848 (0.010 - 0.0083859349) 2,470,762 = 4,791.09 W; total 10,945.78 W.
         // Baseline: T_mix = 22.8 C, W_mix = 0.002 + 0.0074388042 = 0.0094388042:
-        //   sensible 1.2013848 (1006 + 17.5562)(9.8) = 12,050.91 W; latent 1.2013848 (0.0010528693) 2,525,180 = 3,194.10 W;
-        //   total 15,245.01 W.
+        //   sensible 1.2013848 (1006 + 17.5562)(9.8) = 12,050.91 W; latent 1.2013848 (0.0010528693) 2,470,762 = 3,125.27 W;
+        //   total 15,176.18 W.
         var f = Hour(Integrated(HighLimitKind.FixedEnthalpy), 18.0, 0.010);
         Assert.Equal(EconomizerMode.MinimumOutdoorAir, f.Mode);
-        Close(15_245.01, f.CoilTotalW, 2e-6);
-        Close(3_194.10, f.CoilLatentW, 2e-5);
+        Close(15_176.18, f.CoilTotalW, 2e-6);
+        Close(3_125.27, f.CoilLatentW, 2e-5);
         var d = Hour(Integrated(HighLimitKind.DifferentialEnthalpy), 18.0, 0.010);
         Assert.Equal(EconomizerMode.Integrated, d.Mode);
         Close(6_154.69, d.CoilSensibleW, 2e-6);
-        Close(4_896.61, d.CoilLatentW, 2e-5);
-        Close(11_051.30, d.CoilTotalW, 2e-6);
+        Close(4_791.09, d.CoilLatentW, 2e-5);
+        Close(10_945.78, d.CoilTotalW, 2e-6);
     }
 
     [Fact]
@@ -200,20 +201,20 @@ public class EconomizerHandWorkedTests
     {
         // T_o = 19 C, W_o = 0.0125: h_o = 19,114 + 0.0125 (2,536,340) = 50,818.25 J/kg > h_r 47,814.65.
         // Differential enthalpy: disabled -> baseline, x = 0.2: T_mix = 23.0 C, W_mix = 0.0025 + 0.0074388042 = 0.0099388042:
-        //   sensible 1.2013848 (1006 + 18.4862)(10) = 12,308.02 W; latent 1.2013848 (0.0015528693) 2,525,180 = 4,710.96 W;
-        //   total 17,018.98 W.
+        //   sensible 1.2013848 (1006 + 18.4862)(10) = 12,308.02 W; latent 1.2013848 (0.0015528693) 2,470,762 = 4,609.44 W;
+        //   total 16,917.46 W.
         // Differential dry-bulb: 19 < 24, enabled, x = 1: T_mix = 19 C, W_mix = 0.0125:
-        //   sensible 1.2013848 (1006 + 23.25)(6) = 7,419.15 W; latent 1.2013848 (0.0041140651) 2,525,180 = 12,480.89 W;
-        //   total 19,900.04 W: 2,881.06 W MORE than the baseline (negative savings).
+        //   sensible 1.2013848 (1006 + 23.25)(6) = 7,419.15 W; latent 1.2013848 (0.0041140651) 2,470,762 = 12,211.93 W;
+        //   total 19,631.08 W: 2,713.62 W MORE than the baseline (negative savings).
         var e = Hour(Integrated(HighLimitKind.DifferentialEnthalpy), 19.0, 0.0125);
         Assert.Equal(EconomizerMode.MinimumOutdoorAir, e.Mode);
-        Close(17_018.98, e.CoilTotalW, 2e-6);
+        Close(16_917.46, e.CoilTotalW, 2e-6);
         var d = Hour(Integrated(HighLimitKind.DifferentialDryBulb), 19.0, 0.0125);
         Assert.Equal(EconomizerMode.Integrated, d.Mode);
         Close(7_419.15, d.CoilSensibleW, 2e-6);
-        Close(12_480.89, d.CoilLatentW, 2e-6);
-        Close(19_900.04, d.CoilTotalW, 2e-6);
-        Close(-2_881.06, e.CoilTotalW - d.CoilTotalW, 2e-5);
+        Close(12_211.93, d.CoilLatentW, 2e-6);
+        Close(19_631.08, d.CoilTotalW, 2e-6);
+        Close(-2_713.62, e.CoilTotalW - d.CoilTotalW, 2e-5);
     }
 
     [Fact]
@@ -221,17 +222,17 @@ public class EconomizerHandWorkedTests
     {
         // T_o = 15 C, W_o = 0.0085: dew point 11.60 C (psychrolib 1.1.1 GetTDewPointFromHumRatio) > limit 10 C.
         // h_o = 15,090 + 0.0085 (2,528,900) = 36,585.65 J/kg < 40,000: fixed enthalpy enabled, x = 1:
-        //   sensible 1.2013848 (1006 + 15.81)(2) = 2,455.17 W; latent 1.2013848 (0.0001140651) 2,525,180 = 346.04 W.
+        //   sensible 1.2013848 (1006 + 15.81)(2) = 2,455.17 W; latent 1.2013848 (0.0001140651) 2,470,762 = 338.58 W.
         // Fixed dew point: disabled -> baseline: T_mix = 22.2 C, W_mix = 0.0017 + 0.0074388042 = 0.0091388042:
-        //   sensible 1.2013848 (1006 + 16.9982)(9.2) = 11,306.93 W; latent 1.2013848 (0.0007528693) 2,525,180 = 2,283.99 W.
+        //   sensible 1.2013848 (1006 + 16.9982)(9.2) = 11,306.93 W; latent 1.2013848 (0.0007528693) 2,470,762 = 2,234.77 W.
         var dp = Hour(Integrated(HighLimitKind.FixedDewPoint), 15.0, 0.0085);
         Assert.Equal(EconomizerMode.MinimumOutdoorAir, dp.Mode);
         Close(11_306.93, dp.CoilSensibleW, 2e-6);
-        Close(2_283.99, dp.CoilLatentW, 2e-5);
+        Close(2_234.77, dp.CoilLatentW, 2e-5);
         var fh = Hour(Integrated(HighLimitKind.FixedEnthalpy), 15.0, 0.0085);
         Assert.Equal(EconomizerMode.Integrated, fh.Mode);
         Close(2_455.17, fh.CoilSensibleW, 2e-6);
-        Close(346.04, fh.CoilLatentW, 2e-4);
+        Close(338.58, fh.CoilLatentW, 2e-4);
     }
 
     [Fact]
@@ -251,12 +252,12 @@ public class EconomizerHandWorkedTests
     {
         // T_o = 12 C, W_o = 0.0088 (saturated near 12.3 C: fog). x = (24 - 13)/(24 - 12) = 0.916667, T_mix = 13 C;
         // W_mix = 0.916667(0.0088) + 0.083333(0.0092985052) = 0.0080667 + 0.0007749 = 0.0088415 > W_lim:
-        // the coil must dehumidify (latent 1.2013848 (0.0088415 - 0.0083859) 2,525,180 = 1,382 W): "integrated".
+        // the coil must dehumidify (latent 1.2013848 (0.0088415 - 0.0083859) 2,470,762 = 1,352 W): "integrated".
         var i = Hour(Integrated(HighLimitKind.DifferentialDryBulb), 12.0, 0.0088);
         Assert.Equal(EconomizerMode.Integrated, i.Mode);
         Close(11.0 / 12.0, i.OutdoorFraction, 1e-12);
         Assert.Equal(0.0, i.CoilSensibleW);
-        Close(1_382.0, i.CoilLatentW, 2e-3);
+        Close(1_352.0, i.CoilLatentW, 2e-3);
         var n = Hour(NonIntegrated(HighLimitKind.DifferentialDryBulb), 12.0, 0.0088);
         Assert.Equal(EconomizerMode.MinimumOutdoorAir, n.Mode);
     }

@@ -86,7 +86,9 @@ public class EconomizerModelInvariantTests
     [MemberData(nameof(Systems))]
     public void CoilLoad_EqualsMassFlowTimesEnthalpyDrop(bool variable, FlowBasis basis)
     {
-        // Sensible + latent must equal m_s (h_mix - h_leave) of eq. 32 whenever the mix is at or above T_s.
+        // Sensible + latent must equal the coil load of Handbook—Fundamentals 2017 ch. 1 ("cooling and
+        // dehumidifying of moist air"): m_s (h_mix - h_leave) - m_s (W_mix - W_leave) h_w, with h from eq. 32
+        // and the condensate at T_s, h_w = 4.186 T_s kJ/kg, whenever the mix is at or above T_s.
         var settings = EconomizerTestSystems.Office(variable, basis);
         var model = new EconomizerModel(settings, P);
         double ts = settings.SupplyTemperature.Celsius;
@@ -100,7 +102,8 @@ public class EconomizerModelInvariantTests
                     continue;
                 }
 
-                double expected = h.SupplyMassFlowKgPerS * (h.MixedEnthalpyJPerKg - MoistAir.Enthalpy(ts, h.LeavingHumidityRatio));
+                double condensate = (h.MixedHumidityRatio - h.LeavingHumidityRatio) * 4186.0 * ts; // h_w = 4.186 t kJ/kg (ch. 1)
+                double expected = h.SupplyMassFlowKgPerS * (h.MixedEnthalpyJPerKg - MoistAir.Enthalpy(ts, h.LeavingHumidityRatio) - condensate);
                 Assert.Equal(expected, h.CoilTotalW, 1e-6 * Math.Max(1.0, expected));
             }
         }

@@ -237,7 +237,7 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
         var header = lines[1].Split(',');
         int col = Array.IndexOf(header, "Dry-bulb (C)");
         Assert.True(col > 0);
-        var settings = EconomizerRealFiles.Reference(true) with { SupplyAirflowMin = null, FlowBasis = Core.Psychrometrics.FlowBasis.Standard };
+        var settings = EconomizerRealFiles.Reference(true) with { System = AirSystemType.ConstantVolumeReheat, SupplyAirflowMin = null, FlowBasis = Core.Psychrometrics.FlowBasis.Standard };
         var model = new EconomizerModel(settings, w.Site.SitePressurePa);
         double ms = 10_000 * 0.3048 * 0.3048 * 0.3048 / 60 * (0.075 * 0.45359237 / (0.3048 * 0.3048 * 0.3048)); // kg/s, 0.075 lb/ft3 (common practice)
         double ts = (55 - 32) / 1.8, tr = (75 - 32) / 1.8, tbal = (50 - 32) / 1.8;

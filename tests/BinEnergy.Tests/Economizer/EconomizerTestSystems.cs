@@ -11,13 +11,14 @@ internal static class EconomizerTestSystems
     public const double SeaLevel = 101_325.0;
 
     /// <summary>
-    /// A small hand-workable system: constant 1,000 L/s supply, 200 L/s minimum outdoor air
+    /// A small hand-workable system: constant volume with reheat, 1,000 L/s supply, 200 L/s minimum outdoor air
     /// (x_min = 0.2), standard flow basis (1.2014 kg/m3), T_s 13 C, T_r 24 C at 50 % RH,
     /// load line 50 kW at 35 C from a 10 C balance point, coil-leaving RH 90 %, limits
     /// 20 C dry-bulb, 40 kJ/kg enthalpy, 10 C dew point.
     /// </summary>
     public static EconomizerSettings HandWorked(bool integrated = true) => new EconomizerSettings
     {
+        System = AirSystemType.ConstantVolumeReheat,
         SupplyAirflow = VolumeFlow.FromLitresPerSecond(1000),
         MinOutdoorAirflow = VolumeFlow.FromLitresPerSecond(200),
         FlowBasis = FlowBasis.Standard,
@@ -37,6 +38,7 @@ internal static class EconomizerTestSystems
     public static EconomizerSettings Office(bool variable = false, FlowBasis basis = FlowBasis.Site) => new EconomizerSettings
     {
         SupplyAirflow = VolumeFlow.FromCfm(10_000),
+        System = variable ? AirSystemType.VariableVolume : AirSystemType.ConstantVolumeReheat,
         SupplyAirflowMin = variable ? VolumeFlow.FromCfm(4_000) : null,
         MinOutdoorAirflow = VolumeFlow.FromCfm(2_000),
         FlowBasis = basis,

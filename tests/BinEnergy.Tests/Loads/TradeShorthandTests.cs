@@ -65,4 +65,26 @@ public class TradeShorthandTests
         Assert.Equal(watts * 100 / 1000, result.Annual.Hourly.Loads.FanEnergy.KilowattHours, 0.002 * watts * 100 / 1000);
         Assert.Equal(result.Annual.Hourly.Loads.FanEnergy.Joules, result.Annual.Bin.Loads.FanEnergy.Joules, 1e-6);
     }
+
+    [Fact]
+    public void VentilationFan_IsSpecificFanPowerTimesAirflowTimesHours_AndAddsToTheRecoveryFan()
+    {
+        var weather = SyntheticWeather.Year(hours: 100);
+        // 0.4 W/cfm x 1,000 cfm = 400 W (the specific-fan-power shorthand, common practice), 100 ventilated hours: 40 kWh.
+        double perFlow = 0.4 / Conversions.CubicMetresPerSecondPerCfm; // W per m3/s
+        var fanOnly = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical() with { VentilationFanWattsPerCubicMetrePerSecond = perFlow },
+            DryBulbBinScale.Default(UnitSystem.IP));
+        Assert.Equal(400.0, fanOnly.Assumptions.VentilationFanPower.Watts, 1e-9);
+        Assert.Equal(40.0, fanOnly.Annual.Hourly.Loads.FanEnergy.KilowattHours, 1e-9);
+        Assert.Equal(40.0, fanOnly.Annual.Bin.Loads.FanEnergy.KilowattHours, 1e-9);
+
+        // With a recovery device that bypasses when idle, the ventilation fan still runs every ventilated hour.
+        var both = OutdoorAirCalculator.Compute(weather, OutdoorAirTestSettings.Typical() with
+        {
+            VentilationFanWattsPerCubicMetrePerSecond = perFlow,
+            Recovery = new EnergyRecoverySettings { SensibleEffectiveness = 0.7, PressureDropPa = 248.84, FanEfficiency = 0.6, BypassWhenIdle = true },
+        }, DryBulbBinScale.Default(UnitSystem.IP));
+        Assert.True(both.Annual.Hourly.Loads.FanEnergy.KilowattHours >= 40.0);
+        Assert.True(both.Annual.Hourly.Loads.FanEnergy.KilowattHours <= 40.0 + both.Assumptions.FanPenalty.Watts * 100 / 1000 + 1e-9);
+    }
 }

@@ -21,6 +21,68 @@ public class PlantCostCarbonTests
         });
 
     [Fact]
+    public void Humidifiers_HandWorked_SteamFromSupplyWaterOrHeatForAdiabatic()
+    {
+        // 100 kg of water added: the load is 100 x 2,501 kJ/kg = 250,100 kJ (h_fg at 0 C, Handbook ch. 1 eq. 32).
+        // Steam-electric, efficiency 1: 100 kg x 2,630 kJ/kg (saturated steam at 100 C, 2,675.6, less 10 C water, 42.0:
+        //   Handbook ch. 1 table 3, recalled from memory) = 263,000 kJ = 73.056 kWh.
+        // Steam-gas, efficiency 0.8: 263,000 / 0.8 = 328,750 kJ = 3.1159 therm (1 therm = 105,505.6 kJ).
+        // Adiabatic: the air is reheated by 250,100 kJ, bought through the gas furnace at 85 %: 294,235 kJ of gas.
+        double load = 100 * 2_501_000.0;
+        var clamps = new CurveClampCounter();
+        var electric = new PlantModel(GasPlant()).Humidification(load, 0, 1, clamps);
+        Assert.Equal(263_000_000.0 / 3_600_000.0, electric.ElectricityJ / 3_600_000.0, 6);
+        Assert.Equal(0.0, electric.GasJ);
+
+        var gas = new PlantModel(GasPlant() with { Humidifier = HumidifierType.SteamGas, HumidifierEfficiency = 0.8 }).Humidification(load, 0, 1, clamps);
+        Assert.Equal(328_750_000.0, gas.GasJ, 1e-3);
+        Assert.Equal(3.1159, gas.GasJ / FuelUnits.JoulesPerTherm, 4);
+        Assert.Equal(0.0, gas.ElectricityJ);
+
+        var adiabatic = new PlantModel(GasPlant() with { Humidifier = HumidifierType.Adiabatic }).Humidification(load, 0, 1, clamps);
+        Assert.Equal(load / 0.85, adiabatic.GasJ, 1e-3);
+        Assert.Equal(0.0, adiabatic.ElectricityJ);
+    }
+
+    [Fact]
+    public void HeatPump_CapacityLockoutDefrostAndBackup_HandWorked()
+    {
+        // Invented heat pump: COP 3.0 flat; capacity 10 kW at -10 C rising linearly to 20 kW at 10 C; lockout below -15 C;
+        // defrost below 2 C costs 10 % of the COP; electric-resistance backup at 1.0.
+        var plant = GasPlant() with
+        {
+            Heating = HeatingSource.HeatPump,
+            HeatPumpCop = PerformanceCurve.Constant(3.0),
+            HeatPumpCapacity = PerformanceCurve.Create([(-10.0, 10_000.0), (10.0, 20_000.0)]),
+            HeatPumpLockout = Temperature.FromCelsius(-15),
+            DefrostBelow = Temperature.FromCelsius(2),
+            DefrostPenalty = 0.10,
+        };
+        var model = new PlantModel(plant);
+        var clamps = new CurveClampCounter();
+
+        // 5 C, 10 kW for 1 h = 36 MJ: capacity 10 + 10 x 15/20 = 17.5 kW carries it all; 36 / 3.0 = 12 MJ; no backup.
+        var (a, aBackup) = model.HeatingSplit(36e6, 5, 1, clamps);
+        Assert.Equal(12e6, a.ElectricityJ, 1e-3);
+        Assert.Equal(0.0, aBackup.ElectricityJ);
+
+        // 0 C, 20 kW = 72 MJ: capacity 15 kW carries 54 MJ at COP 3.0 x 0.9 = 2.7 -> 20 MJ; the backup buys 72 - 54 = 18 MJ.
+        var (b, bBackup) = model.HeatingSplit(72e6, 0, 1, clamps);
+        Assert.Equal(20e6, b.ElectricityJ, 1e-3);
+        Assert.Equal(18e6, bBackup.ElectricityJ, 1e-3);
+
+        // -20 C, below the lockout: all 72 MJ by the backup.
+        var (c, cBackup) = model.HeatingSplit(72e6, -20, 1, clamps);
+        Assert.Equal(0.0, c.ElectricityJ);
+        Assert.Equal(72e6, cBackup.ElectricityJ, 1e-3);
+        Assert.Equal(72e6, model.Heating(72e6, -20, 1, clamps).ElectricityJ, 1e-3); // the sum is what Heating returns
+
+        // A gas backup at 0.8 buys 18 / 0.8 = 22.5 MJ of gas.
+        var gas = new PlantModel(plant with { Backup = HeatingSource.Gas, BackupEfficiency = 0.8 });
+        Assert.Equal(22.5e6, gas.HeatingSplit(72e6, 0, 1, clamps).Backup.GasJ, 1e-3);
+    }
+
+    [Fact]
     public void GasHeating_HandWorkedCostAndCarbon()
     {
         // Hand-worked: 85,000 kBtu of heating delivered to the outdoor air, furnace 85 % efficient.

@@ -25,6 +25,7 @@ internal static class ExampleStudy
         heat_to_f = 70
         cool_to_f = 75
         max_rh_pct = 50
+        fan_pressure_inwc = 1.0           # ventilation fan at plant.fan_efficiency; or fan_power_w_per_cfm, 0 for none
         # min_rh_pct = 30                 # humidify below this
 
         [recovery]                        # leave the table out for none
@@ -35,7 +36,9 @@ internal static class ExampleStudy
         pressure_drop_inwc = 0.8
 
         [economizer]                      # leave the table out for none
-        supply_airflow_cfm = 10000        # add supply_airflow_min_cfm for variable volume
+        system = "variable-volume"        # or "single-zone", "constant-volume-reheat"
+        supply_airflow_cfm = 10000
+        supply_airflow_min_cfm = 3000     # variable volume only
         min_outdoor_airflow_cfm = 2000
         supply_temp_f = 55
         return_temp_f = 75

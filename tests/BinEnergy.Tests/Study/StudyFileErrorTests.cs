@@ -36,7 +36,22 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("negative airflow", "airflow_cfm = 2000", "airflow_cfm = -2000", "key ventilation.airflow_cfm", "-2000 cfm is out of range (negative values have no physical meaning here)");
         Replace("variant overriding an unknown key", "ventilation.airflow_cfm = 2600", "ventilation.airflow_cfn = 2600", "key variant.ventilation.airflow_cfn",
             "this variant overrides an unknown key: unknown key 'airflow_cfn' in [ventilation]; did you mean airflow_cfm?");
-        Replace("duplicate variant names", "name = \"plus-30\"", "name = \"minimum\"", "key variant.name", "variant \"minimum\" is already defined on line 57; variant names must be unique");
+        Replace("duplicate variant names", "name = \"plus-30\"", "name = \"minimum\"", "key variant.name", $"variant \"minimum\" is already defined on line {ExampleStudy.LineOf(ExampleStudy.Text, "name = \"minimum\"")}; variant names must be unique");
+        Replace("ventilation fan given twice", "fan_pressure_inwc = 1.0", "fan_pressure_inwc = 1.0\nfan_power_w_per_cfm = 0.3", "key ventilation.fan_pressure_inwc",
+            "give the ventilation fan either as fan_power or as fan_pressure");
+        Replace("air-system type unknown", "system = \"variable-volume\"", "system = \"dual-duct\"", "key economizer.system", "single-zone");
+        var singleZone = ExampleStudy.ReplaceLine("system = \"variable-volume\"", "system = \"single-zone\"");
+        Add("minimum airflow on a single-zone system", (singleZone.Text, ExampleStudy.LineOf(singleZone.Text, "supply_airflow_min_cfm")), "key economizer.supply_airflow_min_cfm",
+            "a minimum supply airflow belongs to a variable-volume system");
+        var reset = ExampleStudy.ReplaceLine("supply_airflow_cfm = 10000", "supply_airflow_cfm = 10000\nsupply_temp_reset_max_f = 62");
+        Add("partial supply-temperature reset", (reset.Text, ExampleStudy.LineOf(reset.Text, "supply_temp_reset_max_f")), "key economizer.supply_temp_reset_max_f",
+            "supply_temp_reset_outdoor_low is missing");
+        var adiabatic = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nhumidifier = \"adiabatic\"\nhumidifier_efficiency = 0.9");
+        Add("adiabatic humidifier with an efficiency", (adiabatic.Text, ExampleStudy.LineOf(adiabatic.Text, "humidifier_efficiency")), "key plant.humidifier_efficiency",
+            "an adiabatic humidifier has no efficiency here");
+        var capacity = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nheating_capacity_btuh = 120000");
+        Add("heat-pump capacity on a gas plant", (capacity.Text, ExampleStudy.LineOf(capacity.Text, "heating_capacity_btuh")), "key plant.heating_capacity_btuh",
+            "heating_capacity applies to heating_fuel = \"heat-pump\" only");
         Replace("misspelled table", "[plant]", "[plnat]", "key plnat", "unknown table [plnat]; did you mean [plant]?");
         Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
         Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");

@@ -85,6 +85,7 @@ public sealed class StudyRunTests : IDisposable
             CoolTo = Temperature.FromFahrenheit(75),
             MaxRelativeHumidity = 0.50,
             Recovery = recovery,
+            VentilationFanWattsPerCubicMetrePerSecond = 1.0 * Conversions.PascalsPerInchOfWater / 0.6, // dp / eta (FanPower)
         };
         var variants = new Dictionary<string, OutdoorAirSettings>
         {
@@ -197,6 +198,23 @@ public sealed class StudyRunTests : IDisposable
     }
 
     [Fact]
+    public void HeatPumpWithSmallCapacity_ReportsBackupHeatSeparately()
+    {
+        // A heat pump of 20,000 Btu/h (invented) for 2,000 cfm of outdoor air cannot carry the cold hours: the backup does.
+        string text = ExampleStudy.Text
+            .Replace("heating_fuel = \"gas\"", "heating_fuel = \"heat-pump\"\nheating_cop = 3.0\nheating_capacity_btuh = 20000\nheat_pump_lockout_f = 0", StringComparison.Ordinal)
+            .Replace("\nheating_efficiency = 0.85", "\n", StringComparison.Ordinal);
+        string out1 = Path.Combine(folder, "out-hp");
+        var (code, _, err) = Cli("run", StudyPath(text), "--out", out1);
+        Assert.True(code == 0, err);
+        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        var row = annual.First(r => r["variant"] == "no-recovery" && r["method"] == "hourly");
+        double backup = D(row["backup_heating_electricity_kwh"]);
+        Assert.True(backup > 0, "the backup carries what the heat pump cannot");
+        Assert.True(D(row["electricity_kwh"]) > backup);
+    }
+
+    [Fact]
     public void ParquetTables_ReadByDuckDb_MatchCsvAndSummary()
     {
         string out1 = Path.Combine(folder, "out");
@@ -223,7 +241,7 @@ public sealed class StudyRunTests : IDisposable
             foreach (var c in seen.columns)
             {
                 // Proper types: names are strings, quantities doubles, hours and months 32-bit integers.
-                string expected = c.name is "climate" or "variant" or "method" or "control" or "integration" or "condition" or "time" or "year" ? "VARCHAR"
+                string expected = c.name is "climate" or "variant" or "method" or "control" or "integration" or "condition" or "time" or "year" or "system" ? "VARCHAR"
                     : c.name is "hours_ventilated" or "hours" or "hours_occupied" or "month" or "hour" or "occupied" or "complete_year" ? "INTEGER" : "DOUBLE";
                 Assert.True(expected == c.type, $"{table}.{c.name} is {c.type}, expected {expected}");
             }
