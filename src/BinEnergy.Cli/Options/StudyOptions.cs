@@ -66,7 +66,9 @@ internal static class StudyOptions
     public static UsageException Explain(StudyInput input, StudyFileException e)
     {
         string? origin = input.OriginOf(e.Line, e.Key);
-        return new UsageException(origin is null ? e.Problem : origin + ": " + e.Problem);
+        // On the command line a unit slip is fixed with the other --units, not with another key.
+        string problem = System.Text.RegularExpressions.Regex.Replace(e.Problem, ": if that is what you meant, write [a-z0-9_]+$", ": if that is what you meant, give the other --units (ip or si)");
+        return new UsageException(origin is null ? problem : origin + ": " + problem);
     }
 
     private static string KeyName(StudyKeyAttribute key, DisplayUnits u) => key.Unit is null

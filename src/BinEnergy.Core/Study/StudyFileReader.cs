@@ -258,8 +258,16 @@ public static class StudyFileReader
             }
 
             string sign = low && written < 0 && def.Min >= 0 ? " (negative values have no physical meaning here)" : string.Empty;
-            throw new StudyFileException(file, e.Line, fullKey, $"{writtenText} is out of range{sign}: expected {limit}");
+
+            // A unit slip: the number is in range read in another of the key's units (21 for a heating setpoint in F is 21 C).
+            var other = def.Alternatives.FirstOrDefault(a => a.Unit != alt.Unit && a.Unit.Length > 0 && InRange(def, a.ToSi(written, units)));
+            string slip = other is null ? string.Empty
+                : $"; {written.ToString(CultureInfo.InvariantCulture)} would be in range in {other.Unit}: if that is what you meant, write {other.Key}";
+            throw new StudyFileException(file, e.Line, fullKey, $"{writtenText} is out of range{sign}: expected {limit}{slip}");
         }
+
+        private static bool InRange(KeyDefinition def, double si) =>
+            !(def.Min is double min && (def.MinExclusive ? si <= min : si < min)) && !(def.Max is double max && si > max);
 
         private string Show(double? siBound, KeyAlternative alt)
         {

@@ -72,7 +72,7 @@ internal static class StudySchema
             new KeyDefinition("heat_to", ValueKind.Number, Temperature("heat_to"), "Heating setpoint of the outdoor air.") { Min = 0, Max = 40, RangeHint = "0 to 40 C (32 to 104 F)" },
             new KeyDefinition("cool_to", ValueKind.Number, Temperature("cool_to"), "Cooling setpoint of the outdoor air.") { Min = 5, Max = 45, RangeHint = "5 to 45 C (41 to 113 F)" },
             new KeyDefinition("max_rh_pct", ValueKind.Number, Unitless("max_rh_pct"), "Maximum indoor relative humidity at the cooling setpoint, %.")
-            { Min = 0, MinExclusive = true, Max = 100, RangeHint = "a percentage above 0 and at most 100" },
+            { Min = 1, Max = 100, RangeHint = "a percentage from 1 to 100 (RH is in percent: 50 for 50 %, not 0.5)" },
             new KeyDefinition("min_rh_pct", ValueKind.Number, Unitless("min_rh_pct"), "Humidify below this indoor relative humidity at the heating setpoint, %.")
             { Min = 0, Max = 100, RangeHint = "a percentage from 0 to 100" },
             new KeyDefinition("fan_power", ValueKind.Number, FanPowerPerFlow("fan_power"), "Power of the fan that moves the outdoor air, per unit of outdoor airflow (or give fan_pressure).")

@@ -98,6 +98,11 @@ public static class EconomizerDocument
         }
 
         doc.NoteAll(NoteKind.Assumption, AssumptionText.Economizer(e, u, schedule, methods));
+        if (RecordPeriod.Warning(e.Weather) is string partial)
+        {
+            doc.Note(NoteKind.Warning, partial);
+        }
+
         doc.NoteAll(NoteKind.Caution, Cautions.Economizer);
         return doc;
     }

@@ -30,7 +30,7 @@ public static class OutdoorAirDocument
             .Text("headline_method", "Headline method", _ => IntegrationMethods.Name(headline))
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Title = "Estimate", Layout = TableLayout.Record }, [run]));
 
-        var check = MethodCheck.Columns(u).Fill(new ResultTable("method_check") { Title = "Annual outdoor-air energy by method" }, MethodCheck.Rows(r, null, u));
+        var check = MethodCheck.Columns(u).Fill(new ResultTable("method_check") { Title = RecordPeriod.Title(run.Weather, "outdoor-air energy by method") }, MethodCheck.Rows(r, null, u));
         check.Notes.Add($"Headline: {IntegrationMethods.Label(headline)}. The differences are each bin method's error against the hourly sum, in percent of it.");
         doc.Add(check);
         doc.Add(new ColumnSet<IntegrationMethod>()
@@ -70,6 +70,11 @@ public static class OutdoorAirDocument
         doc.NoteAll(NoteKind.Assumption, AssumptionText.OutdoorAir(a, u, noSchedule));
         doc.Note(NoteKind.Note, AssumptionText.LatentError);
         doc.NoteAll(NoteKind.Warning, run.Warnings);
+        if (RecordPeriod.Warning(run.Weather) is string partial)
+        {
+            doc.Note(NoteKind.Warning, partial);
+        }
+
         doc.NoteAll(NoteKind.Caution, Cautions.OutdoorAir);
         return doc;
     }

@@ -10,9 +10,14 @@ public sealed class UsageMessageTests
     [InlineData("synth,--monthly,a.csv,--seed,-1,--out,x.csv", "--seed -1: '-1' is not a whole number, 0 or more (see binenergy synth --help)")]
     [InlineData("outdoor-air,x.csv,--airflow,\"1,5\",--heat-to,70", "is not a number, with a dot as the decimal separator (see binenergy outdoor-air --help)")]
     [InlineData("inspect,-", "'-' (standard input) is not read: give the path of a file")]
+    [InlineData("outdoor-air,WEATHER,--airflow,1000,--heat-to,21,--cool-to,24,--max-rh,60", "--heat-to: 21 F is out of range: expected 0 to 40 C (32 to 104 F); 21 would be in range in C: if that is what you meant, give the other --units (ip or si)")]
+    [InlineData("outdoor-air,WEATHER,--airflow,1000,--heat-to,70,--cool-to,75,--max-rh,0.5", "--max-rh: 0.5 is out of range: expected a percentage from 1 to 100 (RH is in percent: 50 for 50 %, not 0.5)")]
     public void AMistake_IsExplained_WithTheCommandsHelp(string args, string message)
     {
-        var (code, _, err) = AirCommandTests.Run(Split(args));
+        // WEATHER: an open-layout year (the options are checked against the study schema once the file is known to read).
+        string weather = Path.Combine(Path.GetTempPath(), "binenergy-usage-year.csv");
+        File.WriteAllText(weather, Weather.OpenLayoutText.File(8760));
+        var (code, _, err) = AirCommandTests.Run(Split(args).Select(a => a == "WEATHER" ? weather : a).ToArray());
         Assert.Equal(2, code);
         Assert.Contains(message, err, StringComparison.Ordinal);
         Assert.DoesNotContain("Nullable", err, StringComparison.Ordinal);
@@ -53,5 +58,21 @@ public sealed class UsageMessageTests
         {
             Directory.Delete(folder, recursive: true);
         }
+    }
+
+    [Fact]
+    public void ARecordShorterThanAYear_IsNotCalledAnnual()
+    {
+        string weather = Path.Combine(Path.GetTempPath(), "binenergy-usage-2998.csv");
+        File.WriteAllText(weather, Weather.OpenLayoutText.File(2998));
+        var (code, stdout, _) = AirCommandTests.Run("outdoor-air", weather, "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60");
+        Assert.Equal(0, code);
+        Assert.DoesNotContain("Annual outdoor-air energy", stdout, StringComparison.Ordinal);
+        Assert.Contains("over the record's 2,998 hours (not a full year)", stdout, StringComparison.Ordinal);
+        Assert.Contains("not annual figures", stdout, StringComparison.Ordinal);
+        (code, stdout, _) = AirCommandTests.Run("economizer", weather, "--supply-airflow", "10000", "--min-outdoor-airflow", "2000", "--supply-temp", "55",
+            "--return-temp", "75", "--return-rh", "50", "--design-load", "216000", "--design-outdoor", "95", "--balance-point", "45");
+        Assert.Equal(0, code);
+        Assert.Contains("not annual figures", stdout, StringComparison.Ordinal);
     }
 }

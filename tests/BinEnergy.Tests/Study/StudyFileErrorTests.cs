@@ -56,7 +56,9 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
         Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");
         Replace("effectiveness above one", "sensible_effectiveness = 0.70", "sensible_effectiveness = 1.7", "key recovery.sensible_effectiveness", "1.7 is out of range: expected a value between 0 and 1");
-        Replace("relative humidity above 100", "max_rh_pct = 50", "max_rh_pct = 150", "key ventilation.max_rh_pct", "150 is out of range: expected a percentage above 0 and at most 100");
+        Replace("relative humidity above 100", "max_rh_pct = 50", "max_rh_pct = 150", "key ventilation.max_rh_pct", "150 is out of range: expected a percentage from 1 to 100");
+        Replace("relative humidity as a fraction", "max_rh_pct = 50", "max_rh_pct = 0.5", "key ventilation.max_rh_pct", "0.5 is out of range: expected a percentage from 1 to 100 (RH is in percent: 50 for 50 %, not 0.5)");
+        Replace("setpoint in the other unit", "heat_to_f = 70", "heat_to_f = 21", "key ventilation.heat_to_f", "21 F is out of range: expected 0 to 40 C (32 to 104 F); 21 would be in range in C: if that is what you meant, write heat_to_c");
         Replace("variant overriding a climate", "recovery.enabled = false", "climate.weather = \"other.csv\"", "key variant.climate.weather", "climates are the other axis of the run");
         Replace("a rating point that is not a pair", "cooling_cop = [[65, 4.2]", "cooling_cop = [[65, 4.2, 1], [95, 3.2]]", "key plant.cooling_cop", "each point must be a pair [outdoor temperature, value]");
         Replace("unknown economizer control", "controls = [", "controls = [\"fixed-drybulbs\"]", "key economizer.controls", "\"fixed-drybulbs\" is not one of none, fixed-drybulb, differential-drybulb, fixed-enthalpy, differential-enthalpy, fixed-dewpoint; did you mean \"fixed-drybulb\"?");
