@@ -177,12 +177,15 @@ internal static class StudySchema
                 "How the outdoor air is humidified: steam from supply water (about 2,630 kJ/kg) by electricity or gas, or adiabatic (the heating source reheats the air)."),
             new KeyDefinition("humidifier_efficiency", ValueKind.Number, Unitless("humidifier_efficiency"), "Steam humidifier efficiency.")
             { Min = 0, MinExclusive = true, Max = 1, DefaultText = "1.0 for steam-electric, 0.8 for steam-gas (recalled from memory)" },
-            Money("price_electricity", [("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Electricity price."),
-            Money("price_gas", [("per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Gas price."),
-            Money("price_oil", [("per_gal", (v, _) => v), ("per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Oil price."),
-            Money("carbon_electricity", [("kg_per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Carbon factor of electricity."),
-            Money("carbon_gas", [("kg_per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("kg_per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Carbon factor of gas."),
-            Money("carbon_oil", [("kg_per_gal", (v, _) => v), ("kg_per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Carbon factor of oil."),
+            // Upper bounds (SI: per joule; oil per gallon) only stop nonsense such as 1e308 that would make a cost infinite: a
+            // million currency units per kWh is above any market in any currency, and 10 kg CO2 per kWh above any fuel or grid
+            // (coal-fired electricity is about 1 kg/kWh; recalled from memory). A gallon of oil holds about 40 kWh.
+            Money("price_electricity", [("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Electricity price.", 1e6 / FuelUnits.JoulesPerKilowattHour),
+            Money("price_gas", [("per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Gas price.", 1e6 / FuelUnits.JoulesPerKilowattHour),
+            Money("price_oil", [("per_gal", (v, _) => v), ("per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Oil price.", 4e7),
+            Money("carbon_electricity", [("kg_per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Carbon factor of electricity.", 10 / FuelUnits.JoulesPerKilowattHour),
+            Money("carbon_gas", [("kg_per_therm", (v, _) => v / FuelUnits.JoulesPerTherm), ("kg_per_kwh", (v, _) => v / FuelUnits.JoulesPerKilowattHour)], "Carbon factor of gas.", 10 / FuelUnits.JoulesPerKilowattHour),
+            Money("carbon_oil", [("kg_per_gal", (v, _) => v), ("kg_per_l", (v, _) => v * FuelUnits.LitresPerGallon)], "Carbon factor of oil.", 400),
             new KeyDefinition("oil_heat_content", ValueKind.Number,
             [
                 new("oil_heat_content_btu_gal", "Btu/gal", (v, _) => v * Conversions.JoulesPerBtu),
@@ -205,9 +208,9 @@ internal static class StudySchema
     private static KeyDefinition Choice(string name, string[] choices, string defaultText, string description) =>
         new(name, ValueKind.Choice, Unitless(name), description) { Choices = choices, DefaultText = defaultText };
 
-    private static KeyDefinition Money(string name, (string Suffix, Func<double, UnitSystem, double> ToSi)[] units, string description) =>
+    private static KeyDefinition Money(string name, (string Suffix, Func<double, UnitSystem, double> ToSi)[] units, string description, double maxSi) =>
         new(name, ValueKind.Number, units.Select(u => new KeyAlternative(name + "_" + u.Suffix, u.Suffix.Replace('_', ' '), u.ToSi)).ToArray(), description)
-        { Min = 0, DefaultText = "0" };
+        { Min = 0, Max = maxSi, DefaultText = "0" };
 
     private static KeyAlternative[] Unitless(string name) => [new(name, string.Empty, (v, _) => v)];
 

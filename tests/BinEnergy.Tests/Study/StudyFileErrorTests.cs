@@ -69,6 +69,7 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("balance point below absolute plausibility", "balance_point_f = 55", "balance_point_f = -400", "key economizer.balance_point_f", "-400 F is out of range");
         Replace("price that is negative", "price_gas_per_therm = 1.10", "price_gas_per_therm = -1.10", "key plant.price_gas_per_therm", "out of range (negative values have no physical meaning here): expected zero or more");
         Replace("misspelled humidity convention", "# elevation_ft = 40", "humidity_over = \"frost\"", "key climate.humidity_over", "\"frost\" is not one of \"water\", \"ice\"");
+        Replace("a price so large the cost would be infinite", "price_gas_per_therm = 1.10", "price_gas_per_therm = 1e308", "key plant.price_gas_per_therm", "1E+308 per therm is out of range: expected a value between 0 per therm and 2.931E+07 per therm");
         Replace("a key above every table", "[study]", "name = \"x\"\n[study]", "key name", "keys must be inside a table");
 
         // Demand-controlled ventilation: the profile resets the people part of the people-and-area rates.
