@@ -16,6 +16,8 @@ internal static class WeatherRecordBuilder
         var (name, latitude, longitude, elevation, utcOffset) = SiteMetadata(raw, options);
         var calendar = WeatherCalendar.Place(raw, ShiftHours(raw, utcOffset), options);
         var grid = HourlyGrid.Build(raw, calendar, options);
+        WeatherChecks.DewPointsAgainstDryBulb(grid, raw);
+        WeatherChecks.DryBulbOutliers(grid, raw.Quality, calendar.Calendar.IsTypicalYear);
         var (sitePressure, source, pressureColumn) = SitePressure(grid, elevation, raw.Quality);
         var pressure = pressureColumn ?? Enumerable.Repeat(sitePressure, grid.Times.Length).ToArray();
         var over = HumidityConvention(raw, options);
