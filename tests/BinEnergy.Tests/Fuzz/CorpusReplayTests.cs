@@ -24,16 +24,19 @@ public sealed class CorpusReplayTests
         Assert.True(e is null || e.Message.StartsWith(path, StringComparison.Ordinal), $"{name}: the message names the file: {e?.Message}");
     }
 
+    /// <summary>The files of a corpus folder (git keeps no empty folder: none has crashed a map or study reader yet).</summary>
+    private static string[] Files(string kind) => Directory.Exists(Corpus(kind)) ? Directory.GetFiles(Corpus(kind), "*.toml") : [];
+
     [Fact]
     public void MapsAndStudies_ReadOrFailWithAnInputError()
     {
-        foreach (var path in Directory.GetFiles(Corpus("maps"), "*.toml"))
+        foreach (var path in Files("maps"))
         {
             var e = Record.Exception(() => ColumnMap.Load(path));
             Assert.True(e is null or InputDataException, $"{path}: {e}");
         }
 
-        foreach (var path in Directory.GetFiles(Corpus("studies"), "*.toml"))
+        foreach (var path in Files("studies"))
         {
             var e = Record.Exception(() => StudyCaseBuilder.Build(StudyFileReader.Read(path)));
             Assert.True(e is null or InputDataException, $"{path}: {e}");
