@@ -2,6 +2,7 @@ using System.ComponentModel;
 using BinEnergy.Core.Study;
 using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Study;
+using BinEnergy.Reporting.Tables;
 using Spectre.Console;
 using Spectre.Console.Cli;
 
@@ -72,7 +73,7 @@ public sealed class RunCommand : Command<RunCommand.Settings>
             run = StudyRunner.Run(study, hourly, null, cancellationToken);
         }
 
-        var runAt = DateTimeOffset.UtcNow;
+        var runAt = RunClock.Now();
         var tables = StudyOutputWriter.WriteAsync(run, folder, force, hourly,
             extra: o => StudyReport.WriteInto(o, run, runAt), ct: cancellationToken,
             recovered: note => output.Error.WriteLine("binenergy: note: " + PrintableText.Of(note))).GetAwaiter().GetResult();

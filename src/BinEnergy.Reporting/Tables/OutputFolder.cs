@@ -147,7 +147,7 @@ public sealed class OutputFolder : IDisposable
         Directory.CreateDirectory(staging);
         string version = typeof(OutputFolder).Assembly.GetName().Version?.ToString() ?? "unknown";
         File.WriteAllText(Path.Combine(staging, MarkerName),
-            string.Create(System.Globalization.CultureInfo.InvariantCulture, $"binenergy output folder\nversion {version}\nwritten {DateTime.UtcNow:yyyy-MM-ddTHH:mm:ssZ}\n"));
+            string.Create(System.Globalization.CultureInfo.InvariantCulture, $"binenergy output folder\nversion {version}\nwritten {RunClock.Now().UtcDateTime:yyyy-MM-ddTHH:mm:ssZ}\n"));
         return new OutputFolder(full, staging, lockFile, recovered);
     }
 
