@@ -47,29 +47,10 @@ internal static partial class UsageMessages
     /// <summary>The known name nearest <paramref name="name"/>: within two edits, or one that starts with it.</summary>
     internal static string? Nearest(string name, IEnumerable<string> known)
     {
-        var best = known.Select(k => (Name: k, Distance: Distance(name.ToLowerInvariant(), k)))
+        var best = known.Select(k => (Name: k, Distance: Core.Study.KeySuggester.Distance(name.ToLowerInvariant(), k)))
             .Where(c => c.Distance <= Math.Max(1, Math.Min(2, name.Length / 3)) || c.Name.StartsWith(name, StringComparison.OrdinalIgnoreCase))
             .OrderBy(c => c.Distance).ThenBy(c => c.Name, StringComparer.Ordinal).FirstOrDefault();
         return best.Name;
-    }
-
-    /// <summary>Levenshtein distance (insertions, deletions, substitutions).</summary>
-    private static int Distance(string a, string b)
-    {
-        var row = Enumerable.Range(0, b.Length + 1).ToArray();
-        for (int i = 1; i <= a.Length; i++)
-        {
-            int diagonal = row[0];
-            row[0] = i;
-            for (int j = 1; j <= b.Length; j++)
-            {
-                int above = row[j];
-                row[j] = Math.Min(Math.Min(row[j] + 1, row[j - 1] + 1), diagonal + (a[i - 1] == b[j - 1] ? 0 : 1));
-                diagonal = above;
-            }
-        }
-
-        return row[b.Length];
     }
 
     [GeneratedRegex("^Unknown option '(.*)'\\.?$")]

@@ -5,8 +5,9 @@ namespace BinEnergy.Core.Study;
 /// deletions and substitutions each cost 1; V. I. Levenshtein, 1966), accepting a match within
 /// a third of the key's length (at least 2 edits), or a distance the caller sets.
 /// </summary>
-internal static class KeySuggester
+public static class KeySuggester
 {
+    /// <summary>The candidate nearest <paramref name="written"/>, or null when none is within the allowed distance.</summary>
     public static string? Nearest(string written, IEnumerable<string> candidates, int? maxDistance = null)
     {
         string? best = null;

@@ -3,6 +3,8 @@ using System.Security.Cryptography;
 using System.Text;
 using BinEnergy.Core.Units;
 
+using BinEnergy.Core.Weather;
+
 namespace BinEnergy.Core.Study;
 
 /// <summary>
@@ -393,6 +395,15 @@ public static class StudyFileReader
                 if (map is not null && (map.Contains('/', StringComparison.Ordinal) || map.EndsWith(".toml", StringComparison.OrdinalIgnoreCase)))
                 {
                     map = Path.GetFullPath(Path.Combine(baseFolder, map));
+                    if (!System.IO.File.Exists(map))
+                    {
+                        throw s.ErrorAt("map", $"column map file not found: {map} (paths are relative to the study file's folder)");
+                    }
+                }
+                else if (map is not null && ColumnMap.ShippedText(map) is null)
+                {
+                    throw s.ErrorAt("map", $"\"{map}\" is not a shipped column map (shipped: {string.Join(", ", ColumnMap.ShippedNames)})"
+                        + (KeySuggester.Nearest(map.ToLowerInvariant(), ColumnMap.ShippedNames, 2) is string near ? $"; did you mean \"{near}\"?" : "; give a shipped name or the path of a TOML map file"));
                 }
 
                 var dup = list.FirstOrDefault(c => c.Name == name);

@@ -12,10 +12,63 @@ namespace BinEnergy.Core.Study;
 /// </summary>
 internal static class TomlEntryReader
 {
+    /// <summary>
+    /// The first line, up to <paramref name="lastLine"/>, where a one-line string ("..." or '...') is left open; null when
+    /// there is none or the text has multi-line strings (the parser's own place is better then). A parser reading an open
+    /// string runs on into the next lines and reports a later one.
+    /// </summary>
+    internal static int? UnclosedString(string text, int lastLine)
+    {
+        if (text.Contains("\"\"\"", StringComparison.Ordinal) || text.Contains("'''", StringComparison.Ordinal))
+        {
+            return null;
+        }
+
+        var lines = text.Split('\n');
+        for (int n = 0; n < Math.Min(lastLine, lines.Length); n++)
+        {
+            char open = '\0';
+            for (int i = 0; i < lines[n].Length; i++)
+            {
+                char c = lines[n][i];
+                if (open == '\0' && c == '#')
+                {
+                    break;
+                }
+
+                if (open == '"' && c == '\\')
+                {
+                    i++;
+                }
+                else if (open == '\0' && c is '"' or '\'')
+                {
+                    open = c;
+                }
+                else if (c == open)
+                {
+                    open = '\0';
+                }
+            }
+
+            if (open != '\0')
+            {
+                return n + 1;
+            }
+        }
+
+        return null;
+    }
+
     public static List<TomlEntry> Read(string text, string file)
     {
         var doc = SyntaxParser.Parse(text, file, true);
         var error = doc.Diagnostics.FirstOrDefault(d => d.Kind == DiagnosticMessageKind.Error);
+        if (error is not null && UnclosedString(text, error.Span.Start.Line + 1) is int open)
+        {
+            throw new StudyFileException(file, open, null,
+                "a text value is not closed on this line: add the closing quote (a TOML string ends on the line it starts)");
+        }
+
         if (error is not null)
         {
             throw new StudyFileException(file, error.Span.Start.Line + 1, null,

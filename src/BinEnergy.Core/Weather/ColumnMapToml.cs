@@ -232,33 +232,9 @@ internal static class ColumnMapToml
     internal static string Suggest(string key, IEnumerable<string> known)
     {
         var list = known.ToList();
-        var best = list.Select(k => (k, d: Distance(key, k))).OrderBy(x => x.d).FirstOrDefault();
+        var best = list.Select(k => (k, d: Study.KeySuggester.Distance(key, k))).OrderBy(x => x.d).FirstOrDefault();
         return best.k is not null && best.d <= 3
             ? $", did you mean '{best.k}'?"
             : "; known keys: " + string.Join(", ", list);
-    }
-
-    private static int Distance(string a, string b)
-    {
-        var d = new int[a.Length + 1, b.Length + 1];
-        for (int i = 0; i <= a.Length; i++)
-        {
-            d[i, 0] = i;
-        }
-
-        for (int j = 0; j <= b.Length; j++)
-        {
-            d[0, j] = j;
-        }
-
-        for (int i = 1; i <= a.Length; i++)
-        {
-            for (int j = 1; j <= b.Length; j++)
-            {
-                d[i, j] = Math.Min(Math.Min(d[i - 1, j] + 1, d[i, j - 1] + 1), d[i - 1, j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1));
-            }
-        }
-
-        return d[a.Length, b.Length];
     }
 }

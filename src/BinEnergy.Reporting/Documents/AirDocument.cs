@@ -42,6 +42,11 @@ public static class AirDocument
             .Fill(new ResultTable("factors") { Title = "Airflow factors: q = factor x flow x difference", Layout = TableLayout.Keyed, KeyColumn = "basis", Transpose = true },
                 [("this state", state.Factors), ("standard air", AirflowFactors.StandardAir)]));
 
+        if (state.RelativeHumidity is > 0 and < 0.01)
+        {
+            doc.Note(NoteKind.Warning, FormattableString.Invariant($"The relative humidity is {state.RelativeHumidity * 100:0.###} %: RH is given in percent, so --rh 0.5 means 0.5 %; for 50 % write 50."));
+        }
+
         doc.Note(NoteKind.Note, Departure(state, u));
         doc.Note(NoteKind.Note, "Standard air: 0.075 lb/ft3 of dry air (1.2014 kg/m3), W = 0; the factors use this state's dry-air density (1 / specific volume).");
         return doc;

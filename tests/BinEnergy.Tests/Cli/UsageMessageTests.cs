@@ -75,4 +75,14 @@ public sealed class UsageMessageTests
         Assert.Equal(0, code);
         Assert.Contains("not annual figures", stdout, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void AnRhThatLooksLikeAFraction_IsWarnedAbout()
+    {
+        var (code, stdout, _) = AirCommandTests.Run("air", "--drybulb", "70", "--rh", "0.5");
+        Assert.Equal(0, code);
+        Assert.Contains("RH is given in percent, so --rh 0.5 means 0.5 %; for 50 % write 50", stdout, StringComparison.Ordinal);
+        (code, stdout, _) = AirCommandTests.Run("air", "--drybulb", "70", "--rh", "50");
+        Assert.DoesNotContain("RH is given in percent", stdout, StringComparison.Ordinal);
+    }
 }

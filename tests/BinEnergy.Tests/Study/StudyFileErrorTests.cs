@@ -70,6 +70,10 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("price that is negative", "price_gas_per_therm = 1.10", "price_gas_per_therm = -1.10", "key plant.price_gas_per_therm", "out of range (negative values have no physical meaning here): expected zero or more");
         Replace("misspelled humidity convention", "# elevation_ft = 40", "humidity_over = \"frost\"", "key climate.humidity_over", "\"frost\" is not one of \"water\", \"ice\"");
         Replace("a price so large the cost would be infinite", "price_gas_per_therm = 1.10", "price_gas_per_therm = 1e308", "key plant.price_gas_per_therm", "1E+308 per therm is out of range: expected a value between 0 per therm and 2.931E+07 per therm");
+        Replace("misspelled shipped map", "# elevation_ft = 40", "map = \"tmy33\"", "key climate.map", "\"tmy33\" is not a shipped column map (shipped: pvgis, tmy3); did you mean \"tmy3\"?");
+        Replace("map file that does not exist", "# elevation_ft = 40", "map = \"maps/missing.toml\"", "key climate.map", "column map file not found");
+        Replace("a text value left open", "name = \"Harbor office ventilation options\"", "name = \"Harbor office ventilation options", "harbor-study.toml",
+            "a text value is not closed on this line: add the closing quote");
         Replace("a key above every table", "[study]", "name = \"x\"\n[study]", "key name", "keys must be inside a table");
 
         // Demand-controlled ventilation: the profile resets the people part of the people-and-area rates.
