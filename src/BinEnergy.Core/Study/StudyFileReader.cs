@@ -355,7 +355,9 @@ public static class StudyFileReader
                 if (def.PointXRange is var (lo, hi) && (tc < lo || tc > hi))
                 {
                     throw new StudyFileException(file, e.Line, fullKey,
-                        $"outdoor temperature {t.ToString(CultureInfo.InvariantCulture)} is outside {Fmt(lo)} to {Fmt(hi)} C; pairs are [outdoor temperature, value]");
+                        units == UnitSystem.IP
+                            ? $"outdoor temperature {t.ToString(CultureInfo.InvariantCulture)} F is outside {Fmt(lo * 1.8 + 32)} to {Fmt(hi * 1.8 + 32)} F ({Fmt(lo)} to {Fmt(hi)} C; the study's units are ip); pairs are [outdoor temperature, value]"
+                            : $"outdoor temperature {t.ToString(CultureInfo.InvariantCulture)} C is outside {Fmt(lo)} to {Fmt(hi)} C; pairs are [outdoor temperature, value]");
                 }
 
                 points.Add((tc, ToNumber(e, fullKey, def, alt, pair[1])));

@@ -74,6 +74,8 @@ public sealed class StudyFileErrorTests : IDisposable
         Replace("map file that does not exist", "# elevation_ft = 40", "map = \"maps/missing.toml\"", "key climate.map", "column map file not found");
         Replace("a text value left open", "name = \"Harbor office ventilation options\"", "name = \"Harbor office ventilation options", "harbor-study.toml",
             "a text value is not closed on this line: add the closing quote");
+        Replace("a rating point's temperature out of range, in the study's F", "cooling_cop = [[65, 4.2]", "cooling_cop = [[0, 4.2], [95, 3.2]]", "key plant.cooling_cop",
+            "outdoor temperature 0 F is outside");
         Replace("a key above every table", "[study]", "name = \"x\"\n[study]", "key name", "keys must be inside a table");
 
         // Demand-controlled ventilation: the profile resets the people part of the people-and-area rates.
