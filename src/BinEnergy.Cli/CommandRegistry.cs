@@ -7,7 +7,8 @@ namespace BinEnergy.Cli;
 internal static class CommandRegistry
 {
     /// <summary>Each command's settings type, by name (for messages about its options).</summary>
-    public static Dictionary<string, Type> SettingsTypes { get; } = new(StringComparer.Ordinal);
+    /// <remarks>Filled as the commands are registered; concurrent runs (tests) write the same entries.</remarks>
+    public static System.Collections.Concurrent.ConcurrentDictionary<string, Type> SettingsTypes { get; } = new(StringComparer.Ordinal);
 
     public static void Register(IConfigurator config, CommandOutput output)
     {

@@ -44,13 +44,12 @@ internal static partial class UsageMessages
         settings.GetProperties(BindingFlags.Public | BindingFlags.Instance)
             .SelectMany(p => p.GetCustomAttribute<CommandOptionAttribute>()?.LongNames ?? []);
 
-    /// <summary>The known name nearest <paramref name="name"/>: within two edits, or one that starts with it.</summary>
+    /// <summary>The known name nearest <paramref name="name"/> (<see cref="Core.Study.KeySuggester"/>), or one that starts with it.</summary>
     internal static string? Nearest(string name, IEnumerable<string> known)
     {
-        var best = known.Select(k => (Name: k, Distance: Core.Study.KeySuggester.Distance(name.ToLowerInvariant(), k)))
-            .Where(c => c.Distance <= Math.Max(1, Math.Min(2, name.Length / 3)) || c.Name.StartsWith(name, StringComparison.OrdinalIgnoreCase))
-            .OrderBy(c => c.Distance).ThenBy(c => c.Name, StringComparer.Ordinal).FirstOrDefault();
-        return best.Name;
+        var names = known.ToList();
+        return Core.Study.KeySuggester.Nearest(name.ToLowerInvariant(), names)
+            ?? names.Where(k => k.StartsWith(name, StringComparison.OrdinalIgnoreCase)).Order(StringComparer.Ordinal).FirstOrDefault();
     }
 
     [GeneratedRegex("^Unknown option '(.*)'\\.?$")]

@@ -119,7 +119,13 @@ public static class InputFiles
     public static (string? Text, Problem? Problem) ReadText(string path, long maxBytes, string limitOption)
     {
         var (data, problem, _) = Read(path, maxBytes, limitOption, decompress: false);
-        return (data is null ? null : new StreamReader(new MemoryStream(data), detectEncodingFromByteOrderMarks: true).ReadToEnd(), problem);
+        if (data is null)
+        {
+            return (null, problem);
+        }
+
+        using var reader = new StreamReader(new MemoryStream(data), detectEncodingFromByteOrderMarks: true);
+        return (reader.ReadToEnd(), null);
     }
 
     private static Problem TooLarge(string text, string limitOption) => new(text, $"Raise the limit with {limitOption}, or split the file", ProblemKind.TooLarge);

@@ -17,11 +17,16 @@ internal static class HourlyStateSolver
     /// </summary>
     private const double Accuracy = 1e-6;
 
+    /// <summary>ln p_ws at the equations' lowest temperature, -100 C, over water and over ice.</summary>
+    private static readonly double LnAtMinimumOverWater = Saturation.LnVapourPressure(Saturation.MinTemperatureC, HumidityOver.Water);
+
+    private static readonly double LnAtMinimumOverIce = Saturation.LnVapourPressure(Saturation.MinTemperatureC, HumidityOver.Ice);
+
     /// <summary>Dew point in C from vapour pressure in Pa (eqs. 5 and 6 inverted), over water or over ice below 0 C; -100 C (the equations' lower end) for less vapour.</summary>
     public static double DewPointFromVapourPressure(double vapourPressurePa, HumidityOver over = HumidityOver.Ice)
     {
         double target = Math.Log(vapourPressurePa);
-        if (!(target > Saturation.LnVapourPressure(Saturation.MinTemperatureC, over)))
+        if (!(target > (over == HumidityOver.Water ? LnAtMinimumOverWater : LnAtMinimumOverIce)))
         {
             return Saturation.MinTemperatureC; // dry air, or so little vapour that its dew point is below the equations' -100 C
         }
@@ -58,8 +63,7 @@ internal static class HourlyStateSolver
     /// <param name="dewPointC">The dew point over water or over ice (either is a lower bound of the wet-bulb); null: solved here.</param>
     public static double WetBulb(double dryBulbC, double humidityRatio, double pressurePa, double? dewPointC = null)
     {
-        double pws = Math.Exp(Saturation.LnVapourPressure(dryBulbC));
-        if (humidityRatio >= MoistAir.MolecularMassRatio * pws / (pressurePa - pws))
+        if (humidityRatio >= Saturation.HumidityRatio(dryBulbC, pressurePa))
         {
             return dryBulbC; // at or above saturation (eq. 23)
         }

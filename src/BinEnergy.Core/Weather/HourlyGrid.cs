@@ -67,17 +67,23 @@ internal sealed record HourlyGrid(DateTime[] Times, int[] Lines, Dictionary<Weat
         var first = keys[order[0]];
         var times = Enumerable.Range(0, hours).Select(g => first.AddHours(g)).ToArray();
         var lines = new int[hours];
-        var columns = raw.Values.ToDictionary(c => c.Key, _ => Enumerable.Repeat(double.NaN, hours).ToArray());
         for (int i = 0; i < keys.Length; i++)
         {
             lines[slot[i]] = raw.Lines[i];
-            foreach (var (q, values) in raw.Values)
-            {
-                columns[q][slot[i]] = values[i];
-            }
         }
 
-        return new HourlyGrid(times, lines, columns);
+        double[] OnGrid(List<double> values)
+        {
+            var column = Enumerable.Repeat(double.NaN, hours).ToArray();
+            for (int i = 0; i < values.Count; i++)
+            {
+                column[slot[i]] = values[i];
+            }
+
+            return column;
+        }
+
+        return new HourlyGrid(times, lines, raw.Values.ToDictionary(c => c.Key, c => OnGrid(c.Value)));
     }
 
     /// <summary>Fills each run of missing hours of a column by linear interpolation, or marks it to drop, or refuses it.</summary>

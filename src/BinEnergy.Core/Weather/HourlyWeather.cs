@@ -50,7 +50,7 @@ public sealed class HourlyWeather
         return result;
     }
 
-    /// <summary>The record's columns, to build a changed copy from (e.g. <c>weather.Columns with { DryBulbC = ... }</c>, derived columns cleared).</summary>
+    /// <summary>The record's columns, to build a changed copy from (<c>weather.Columns with { ... }</c>; clear a derived column to have it solved again).</summary>
     public HourlyColumns Columns => new()
     {
         Times = Times,
@@ -110,7 +110,7 @@ public sealed class HourlyWeather
         ArgumentOutOfRangeException.ThrowIfNegative(start);
         ArgumentOutOfRangeException.ThrowIfGreaterThan(start + count, Count);
         double[] Cut(double[] column) => column.AsSpan(start, count).ToArray();
-        var columns = new HourlyColumns
+        var columns = Columns with
         {
             Times = Times.AsSpan(start, count).ToArray(),
             DryBulbC = Cut(DryBulbC),
@@ -119,7 +119,6 @@ public sealed class HourlyWeather
             DewPointC = Cut(DewPointC),
             WetBulbC = Cut(WetBulbC),
             EnthalpyJPerKg = Cut(EnthalpyJPerKg),
-            HumidityOver = HumidityOver,
         };
         return new HourlyWeather(Site, columns, Quality, Calendar)
         {

@@ -101,17 +101,8 @@ public sealed class OutputFolderSafetyTests : IDisposable
         File.WriteAllText(Path.Combine(scratch, "study.toml"), ExampleStudy.Text);
         File.WriteAllText(Path.Combine(scratch, "notes.txt"), "my notes");
         var before = Directory.GetFileSystemEntries(scratch).Order().ToList();
-        var psi = new System.Diagnostics.ProcessStartInfo("dotnet", [typeof(CliApp).Assembly.Location, "run", "study.toml", "--out", ".", "--force"])
-        {
-            WorkingDirectory = scratch,
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-        };
-        using var process = System.Diagnostics.Process.Start(psi)!;
-        string error = process.StandardError.ReadToEnd();
-        process.StandardOutput.ReadToEnd();
-        process.WaitForExit();
-        Assert.Equal(3, process.ExitCode);
+        var (code, _, error) = Support.CliProcess.Run(["run", "study.toml", "--out", ".", "--force"], scratch);
+        Assert.Equal(3, code);
         Assert.Contains("nothing was deleted", error, StringComparison.Ordinal);
         Assert.Equal(before, Directory.GetFileSystemEntries(scratch).Order().ToList());
         Assert.Equal("my notes", File.ReadAllText(Path.Combine(scratch, "notes.txt")));

@@ -3,6 +3,14 @@ namespace BinEnergy.Tests.Study;
 /// <summary>The example study of the study-file contract (its key names are the contract), with invented data.</summary>
 internal static class ExampleStudy
 {
+    /// <summary>Writes the study's invented mild coastal climate, "harbor" (8,760 hours from the test synthesizer), as harbor.csv in <paramref name="folder"/>.</summary>
+    public static void WriteWeather(string folder)
+    {
+        var weather = Support.SyntheticWeather.Year(meanC: 11, annualSwingK: 13, dailySwingK: 5, spreadK: 3, name: "Harbor (invented)");
+        using var writer = new StreamWriter(Path.Combine(folder, "harbor.csv"));
+        Core.Weather.OpenLayoutWriter.Write(weather, writer);
+    }
+
     public const string Text = """
         [study]
         name = "Harbor office ventilation options"

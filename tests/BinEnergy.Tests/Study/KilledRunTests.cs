@@ -1,6 +1,5 @@
 using System.Diagnostics;
 using System.Text.Json;
-using BinEnergy.Core.Weather;
 using BinEnergy.Tests.Support;
 
 namespace BinEnergy.Tests.Study;
@@ -15,13 +14,6 @@ public sealed class KilledRunTests(Xunit.Abstractions.ITestOutputHelper log) : I
 {
     private readonly string folder = Directory.CreateTempSubdirectory("binenergy-killed-").FullName;
 
-    private void Setup()
-    {
-        var weather = SyntheticWeather.Year(meanC: 11, annualSwingK: 13, dailySwingK: 5, spreadK: 3, name: "Harbor (invented)");
-        using var writer = new StreamWriter(Path.Combine(folder, "harbor.csv"));
-        OpenLayoutWriter.Write(weather, writer);
-    }
-
     public void Dispose() => Directory.Delete(folder, recursive: true);
 
     /// <summary>The example study with a given airflow, so each complete output can be told from the other by its summary.</summary>
@@ -32,21 +24,7 @@ public sealed class KilledRunTests(Xunit.Abstractions.ITestOutputHelper log) : I
         return path;
     }
 
-    private static Process Start(string study, string output)
-    {
-        var info = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
-        foreach (var a in new[] { typeof(BinEnergy.Cli.CliApp).Assembly.Location, "run", study, "--out", output, "--force" })
-        {
-            info.ArgumentList.Add(a);
-        }
-
-        var process = Process.Start(info)!;
-        process.OutputDataReceived += (_, _) => { };
-        process.ErrorDataReceived += (_, _) => { };
-        process.BeginOutputReadLine();
-        process.BeginErrorReadLine();
-        return process;
-    }
+    private static Process Start(string study, string output) => CliProcess.Start(["run", study, "--out", output, "--force"]);
 
     /// <summary>The study hash a complete output folder records, or null where the folder is not a complete output.</summary>
     private static string? CompleteRun(string output)
@@ -66,7 +44,7 @@ public sealed class KilledRunTests(Xunit.Abstractions.ITestOutputHelper log) : I
     [Fact]
     public void KilledAtRandomMoments_TheOutputIsTheOldOrTheNewRun_AndTheNextRunCleansUp()
     {
-        Setup();
+        ExampleStudy.WriteWeather(folder);
         string output = Path.Combine(folder, "out");
         string a = Study(2000), b = Study(2600);
         var clock = Stopwatch.StartNew();

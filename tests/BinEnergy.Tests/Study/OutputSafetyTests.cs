@@ -13,9 +13,7 @@ public sealed class OutputSafetyTests : IDisposable
 
     public OutputSafetyTests()
     {
-        var weather = SyntheticWeather.Year(meanC: 11, annualSwingK: 13, dailySwingK: 5, spreadK: 3, name: "Harbor (invented)");
-        using var writer = new StreamWriter(Path.Combine(folder, "harbor.csv"));
-        OpenLayoutWriter.Write(weather, writer);
+        ExampleStudy.WriteWeather(folder);
     }
 
     public void Dispose() => Directory.Delete(folder, recursive: true);

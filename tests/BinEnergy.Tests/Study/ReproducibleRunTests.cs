@@ -1,5 +1,3 @@
-using System.Diagnostics;
-using BinEnergy.Core.Weather;
 using BinEnergy.Tests.Support;
 
 namespace BinEnergy.Tests.Study;
@@ -11,24 +9,10 @@ public sealed class ReproducibleRunTests : IDisposable
 
     public void Dispose() => Directory.Delete(folder, recursive: true);
 
-    private (int Code, string Err) Run(string study, string output, string? epoch)
+    private static (int Code, string Err) Run(string study, string output, string epoch)
     {
-        var info = new ProcessStartInfo("dotnet") { RedirectStandardOutput = true, RedirectStandardError = true, UseShellExecute = false };
-        foreach (var a in new[] { typeof(BinEnergy.Cli.CliApp).Assembly.Location, "run", study, "--out", output })
-        {
-            info.ArgumentList.Add(a);
-        }
-
-        if (epoch is not null)
-        {
-            info.Environment["SOURCE_DATE_EPOCH"] = epoch;
-        }
-
-        using var process = Process.Start(info)!;
-        var stderr = process.StandardError.ReadToEndAsync();
-        process.StandardOutput.ReadToEnd();
-        process.WaitForExit();
-        return (process.ExitCode, stderr.Result);
+        var (code, _, err) = CliProcess.Run(["run", study, "--out", output], environment: new Dictionary<string, string> { ["SOURCE_DATE_EPOCH"] = epoch });
+        return (code, err);
     }
 
     private static Dictionary<string, byte[]> Files(string root) =>
@@ -37,11 +21,7 @@ public sealed class ReproducibleRunTests : IDisposable
     [Fact]
     public void TwoRunsWithTheSameEpoch_WriteTheSameBytes()
     {
-        var weather = SyntheticWeather.Year(meanC: 11, annualSwingK: 13, dailySwingK: 5, spreadK: 3, name: "Harbor (invented)");
-        using (var writer = new StreamWriter(Path.Combine(folder, "harbor.csv")))
-        {
-            OpenLayoutWriter.Write(weather, writer);
-        }
+        ExampleStudy.WriteWeather(folder);
 
         string study = Path.Combine(folder, "harbor-study.toml");
         File.WriteAllText(study, ExampleStudy.Text);
