@@ -49,12 +49,7 @@ public static class CliApp
 
             return app.Run(args);
         }
-        catch (CommandParseException e)
-        {
-            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : UsageMessages.Explain(e.Message, command, args));
-            return ExitCodes.Usage;
-        }
-        catch (CommandRuntimeException e)
+        catch (Exception e) when (e is CommandParseException or CommandRuntimeException)
         {
             Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : UsageMessages.Explain(e.Message, command, args));
             return ExitCodes.Usage;

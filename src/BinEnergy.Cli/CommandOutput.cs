@@ -48,4 +48,32 @@ public sealed class CommandOutput(IAnsiConsole console, TextWriter stdout, TextW
             TextRenderer.Render(document, settings.Format, Console, Out);
         }
     }
+
+    /// <summary>
+    /// The full path of the file a command writes (<c>--out</c>), after the checks every such command makes: it is given,
+    /// differs from the input (named <paramref name="inputName"/> in the message), its folder exists, and it does not exist unless <paramref name="force"/> (exit 3 then).
+    /// </summary>
+    public static string TargetFile(string? outPath, string input, bool force, string what, string inputName = "input")
+    {
+        if (string.IsNullOrWhiteSpace(outPath))
+        {
+            throw new UsageException($"--out FILE.csv is required: {what}");
+        }
+
+        string target = Path.GetFullPath(outPath);
+        if (string.Equals(target, Path.GetFullPath(input), StringComparison.Ordinal))
+        {
+            throw new UsageException($"--out must differ from the {inputName} file (it would be overwritten)");
+        }
+
+        if (Path.GetDirectoryName(target) is not { } folder || !Directory.Exists(folder))
+        {
+            throw new UsageException($"the folder of --out {outPath} does not exist; create it first");
+        }
+
+        return File.Exists(target) && !force ? throw InTheWay(outPath) : target;
+    }
+
+    /// <summary>The error for an output file that exists without <c>--force</c>.</summary>
+    public static OutputFolderException InTheWay(string outPath) => new($"{outPath} exists; add --force to replace it, or choose another --out");
 }

@@ -1,7 +1,6 @@
 using System.ComponentModel;
 using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
-using BinEnergy.Core.Weather;
 using BinEnergy.Reporting.Documents;
 using Spectre.Console;
 using Spectre.Console.Cli;
@@ -57,15 +56,13 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
     {
         var output = (CommandOutput)context.Data!;
         var blocks = ParseBlocks(settings.Blocks);
-        var schedule = settings.Schedule();
-        var options = settings.ReadOptions();
 
         // Everything is computed before anything is written: a failure leaves no half-written table.
-        var weather = WeatherReader.Read(settings.Weather, options);
-        var table = BinTable.Build(weather, settings.Scale(), schedule.Flags(weather));
+        var (_, weather, schedule, scale) = OneCaseStudy.ReadWeather(settings, "bins");
+        var table = BinTable.Build(weather, scale, schedule.Flags(weather));
         var split = settings.By is BinSplit by ? (by == BinSplit.Month ? "month" : "block", table.Split(by, blocks)) : ((string, IReadOnlyList<BinGroup>)?)null;
         var joint = settings.Joint ? table.Joint(settings.HumidityWidth ?? HumidityBinScale.Default(settings.Units).Width) : null;
-        output.Write(BinsDocument.Build(weather, table, schedule.Text, settings.DisplayUnits, settings.Source(options), split, joint), settings, settings.Csv);
+        output.Write(BinsDocument.Build(weather, table, schedule.Text, settings.DisplayUnits, settings.Source(), split, joint), settings, settings.Csv);
         return ExitCodes.Ok;
     }
 

@@ -23,49 +23,15 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        if (string.IsNullOrWhiteSpace(settings.Out))
-        {
-            throw new UsageException("--out FILE.csv is required: the open-layout file to write");
-        }
-
-        string target = Path.GetFullPath(settings.Out);
-        if (string.Equals(target, Path.GetFullPath(settings.Weather), StringComparison.Ordinal))
-        {
-            throw new UsageException("--out must differ from the input file");
-        }
-
-        if (File.Exists(target) && !settings.Force)
-        {
-            throw new Reporting.Tables.OutputFolderException($"{settings.Out} exists; add --force to replace it, or choose another --out");
-        }
-
-        var options = settings.ReadOptions();
-        var weather = WeatherReader.Read(settings.Weather, options);
-        var comments = new List<string>
-        {
-            "source: " + Path.GetFileName(settings.Weather) + " read with the " + (options.Map?.Source ?? "open layout"),
-            "calendar: " + weather.Calendar.Note,
-        };
-        if (weather.Calendar.IsTypicalYear)
-        {
-            comments.Add("typical_year: true");
-        }
-
-        comments.Add("repairs: " + (weather.Quality.Counts.Count == 0 ? "none" : string.Join(", ", weather.Quality.Counts.Select(kv => kv.Key + " " + kv.Value))));
-        comments.AddRange(weather.Quality.Warnings.Select(w => "note: " + w));
-
-        string? dir = Path.GetDirectoryName(target);
-        if (dir is not null && !Directory.Exists(dir))
-        {
-            throw new UsageException($"the folder of --out does not exist: {dir}");
-        }
-
+        string target = CommandOutput.TargetFile(settings.Out, settings.Weather, settings.Force, "the open-layout file to write");
+        var (_, weather, _, _) = OneCaseStudy.ReadWeather(settings, "convert");
+        var comments = OpenLayoutWriter.ConversionNotes(weather, Path.GetFileName(settings.Weather), settings.Map is null ? "open layout" : "map " + settings.Map);
         if (!TextFile.WriteAtomically(target, settings.Force, w => OpenLayoutWriter.Write(weather, w, comments)))
         {
-            throw new Reporting.Tables.OutputFolderException($"{settings.Out} exists; add --force to replace it, or choose another --out");
+            throw CommandOutput.InTheWay(settings.Out!);
         }
 
-        output.Write(ConvertDocument.Build(weather, settings.Out), settings);
+        output.Write(ConvertDocument.Build(weather, settings.Out!), settings);
         return ExitCodes.Ok;
     }
 }

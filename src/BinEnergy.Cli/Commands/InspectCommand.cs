@@ -1,5 +1,4 @@
 using BinEnergy.Core.Climate;
-using BinEnergy.Core.Weather;
 using BinEnergy.Reporting.Documents;
 using Spectre.Console.Cli;
 
@@ -11,11 +10,10 @@ public sealed class InspectCommand : Command<InspectSettings>
     public override int Execute(CommandContext context, InspectSettings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        var options = settings.ReadOptions();
-        var weather = WeatherReader.Read(settings.Weather, options);
+        var (study, weather, _, _) = OneCaseStudy.ReadWeather(settings, "inspect");
         var u = settings.DisplayUnits;
-        var climate = ClimateSummary.Of(weather, settings.DegreeDays, u.DegreeDayBaseC, u.DegreeDayCurveBasesC);
-        output.Write(InspectDocument.Build(weather, climate, settings.DisplayUnits, settings.Source(options)), settings);
+        var climate = ClimateSummary.Of(weather, study.DegreeDayMethod, u.DegreeDayBaseC, u.DegreeDayCurveBasesC);
+        output.Write(InspectDocument.Build(weather, climate, u, settings.Source()), settings);
         return ExitCodes.Ok;
     }
 }

@@ -9,7 +9,7 @@ namespace BinEnergy.Cli.Commands;
 public sealed class InspectSettings : WeatherFileSettings
 {
     [CommandOption("--degree-days <METHOD>")]
-    [Description("How degree-days are counted: daily-mean (default: the mean of each day's hours, as published degree-days are), hourly (degree-hours / 24) or max-min ((daily max + min) / 2).")]
     [TypeConverter(typeof(ChoiceConverter<DegreeDayMethod>))]
-    public DegreeDayMethod DegreeDays { get; init; } = DegreeDayMethod.DailyMean;
+    [StudyKey("study", "degree_days")]
+    public DegreeDayMethod? DegreeDays { get; init; }
 }

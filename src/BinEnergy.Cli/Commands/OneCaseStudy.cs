@@ -1,4 +1,6 @@
 using BinEnergy.Cli.Options;
+using BinEnergy.Core.Binning;
+using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Study;
 using BinEnergy.Core.Weather;
 
@@ -17,8 +19,27 @@ internal static class OneCaseStudy
     /// <summary>Builds, reads and runs the study the options of <paramref name="settings"/> describe.</summary>
     /// <param name="settings">The command's options.</param>
     /// <param name="name">The study name (the command's).</param>
-    /// <param name="extra">Keys the command sets beyond its options.</param>
-    public static StudyCaseResult Run(BinOptions settings, string name, Action<StudyInput>? extra = null)
+    public static StudyCaseResult Run(WeatherFileSettings settings, string name)
+    {
+        var (study, input) = Read(settings, name);
+        return Explained(input, study, () => StudyRunner.Run(study).Cases[0]);
+    }
+
+    /// <summary>
+    /// Reads the options through the study reader's checks, then the weather file they name, with the schedule and bin
+    /// scale they give (for the commands that only read or bin weather).
+    /// </summary>
+    public static (StudyDefinition Study, HourlyWeather Weather, OccupancySchedule Schedule, DryBulbBinScale Scale) ReadWeather(WeatherFileSettings settings, string name)
+    {
+        var (study, input) = Read(settings, name);
+        return Explained(input, study, () =>
+        {
+            var (schedule, scale) = StudyCaseBuilder.Binning(study);
+            return (study, StudyRunner.ReadWeather(study.Climates[0], settings.MaxBytes), schedule, scale);
+        });
+    }
+
+    private static (StudyDefinition Study, StudyInput Input) Read(WeatherFileSettings settings, string name)
     {
         if (!File.Exists(settings.Weather))
         {
@@ -32,12 +53,15 @@ internal static class OneCaseStudy
             .Set("study", "units", u.Name, "--units")
             .Set("climate", "name", ClimateName(settings.Weather), settings.Weather);
         StudyOptions.Add(input, settings, u);
-        extra?.Invoke(input);
-        var study = StudyOptions.Read(input, Source);
+        return (StudyOptions.Read(input, Source), input);
+    }
+
+    /// <summary>Runs <paramref name="work"/>; a study error about the options becomes a usage error naming the option.</summary>
+    private static T Explained<T>(StudyInput input, StudyDefinition study, Func<T> work)
+    {
         try
         {
-            var run = StudyRunner.Run(study);
-            return run.Cases[0];
+            return work();
         }
         catch (StudyFileException e) when (e.File == Source || e.File == study.Climates[0].Name)
         {

@@ -43,32 +43,20 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
         var output = (CommandOutput)context.Data!;
         string monthly = settings.Monthly ?? throw new UsageException("--monthly FILE is required (the monthly statistics to synthesize from)");
         ulong seed = settings.Seed ?? throw new UsageException("--seed N is required (any whole number; the same seed gives the same weather)");
-        string outPath = settings.Out ?? throw new UsageException("--out FILE.csv is required (where to write the hourly year)");
         if (settings.Year < 1900 || settings.Year > 2100 || DateTime.IsLeapYear(settings.Year))
         {
             throw new UsageException($"--year {settings.Year} must be a non-leap year from 1900 to 2100 (the synthesized year has 365 days)");
         }
 
-        string fullOut = Path.GetFullPath(outPath);
-        if (string.Equals(fullOut, Path.GetFullPath(monthly), StringComparison.Ordinal))
-        {
-            throw new UsageException("--out must differ from the --monthly input file (it would be overwritten)");
-        }
-
-        string? folder = Path.GetDirectoryName(fullOut);
-        if (folder is null || !Directory.Exists(folder))
-        {
-            throw new UsageException($"the folder of --out {outPath} does not exist; create it first");
-        }
-
+        string fullOut = CommandOutput.TargetFile(settings.Out, monthly, settings.Force, "where to write the hourly year", "--monthly input");
         var climate = MonthlyClimateReader.Read(monthly);
         var result = WeatherSynthesizer.Synthesize(climate, seed, settings.Year);
         if (!TextFile.WriteAtomically(fullOut, settings.Force, w => SynthesizedYearWriter.Write(result, monthly, w)))
         {
-            throw new Reporting.Tables.OutputFolderException($"{outPath} exists; add --force to replace it, or choose another --out");
+            throw CommandOutput.InTheWay(settings.Out!);
         }
 
-        output.Write(SynthDocument.Build(result, climate, outPath, settings.DisplayUnits), settings);
+        output.Write(SynthDocument.Build(result, climate, settings.Out!, settings.DisplayUnits), settings);
         return ExitCodes.Ok;
     }
 }

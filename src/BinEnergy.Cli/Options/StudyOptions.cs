@@ -17,15 +17,14 @@ internal static class StudyOptions
     {
         foreach (var property in settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance))
         {
-            var keys = property.GetCustomAttributes<StudyKeyAttribute>().ToList();
-            if (keys.Count == 0)
+            if (property.GetCustomAttribute<StudyKeyAttribute>() is not { } key)
             {
                 continue;
             }
 
             string origin = OptionName(property);
             object? value = property.GetValue(settings);
-            foreach (var key in keys)
+            foreach (var (table, name) in key.Keys)
             {
                 object? studyValue = value switch
                 {
@@ -41,7 +40,7 @@ internal static class StudyOptions
                 };
                 if (studyValue is not null)
                 {
-                    input.Set(key.Table, KeyName(key, u), studyValue, origin);
+                    input.Set(table, KeyName(name, key.Unit, u), studyValue, origin);
                 }
             }
         }
@@ -71,10 +70,20 @@ internal static class StudyOptions
         return new UsageException(origin is null ? problem : origin + ": " + problem);
     }
 
-    private static string KeyName(StudyKeyAttribute key, DisplayUnits u) => key.Unit is null
-        ? key.Key
-        : (typeof(DisplayUnits).GetProperty(key.Unit)?.GetValue(u) as DisplayUnit
-            ?? throw new InvalidOperationException($"DisplayUnits has no unit {key.Unit}")).NameFor(key.Key);
+    /// <summary>The key spelled in the display units (<c>airflow</c> with <c>Airflow</c> in ip: <c>airflow_cfm</c>).</summary>
+    internal static string KeyName(string key, string? unit, DisplayUnits u) => unit is null
+        ? key
+        : (typeof(DisplayUnits).GetProperty(unit)?.GetValue(u) as DisplayUnit
+            ?? throw new InvalidOperationException($"DisplayUnits has no unit {unit}")).NameFor(key);
+
+    /// <summary>The options marked <see cref="StudyKeyAttribute.Required"/> that were not given, as one message; null when none is missing.</summary>
+    public static string? Missing(CommandSettings settings)
+    {
+        var missing = settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance)
+            .Where(p => p.GetCustomAttribute<StudyKeyAttribute>() is { Required: true } && p.GetValue(settings) is null)
+            .Select(p => $"{OptionName(p)} is required: {p.GetCustomAttribute<StudyKeyAttribute>()!.What}").ToList();
+        return missing.Count == 0 ? null : string.Join("; ", missing);
+    }
 
     /// <summary>The option's long name as the user types it, e.g. <c>--airflow</c>; an argument's name in capitals.</summary>
     public static string OptionName(PropertyInfo property)

@@ -20,6 +20,14 @@ public static class StudyCaseBuilder
         return study.Climates.SelectMany(c => perVariant.Select(p => p.Parts with { Climate = c })).ToList();
     }
 
+    /// <summary>The occupancy schedule and dry-bulb bin scale of a study's base variant (for the commands that only bin weather).</summary>
+    public static (OccupancySchedule Schedule, DryBulbBinScale Scale) Binning(StudyDefinition study) =>
+        (Schedule(study.Variants[0].Sections["schedule"]), Scale(study, study.Variants[0].Sections["study"]));
+
+    private static DryBulbBinScale Scale(StudyDefinition study, StudySection s) => s.Number("bin_width") is double k
+        ? new DryBulbBinScale(TemperatureDifference.FromKelvin(k), study.Units)
+        : DryBulbBinScale.Default(study.Units);
+
     private static StudyCase BuildVariant(StudyDefinition study, StudyVariant variant)
     {
         var s = variant.Sections;
@@ -29,10 +37,7 @@ public static class StudyCaseBuilder
         {
             BinPoint = s["study"].Text("bin_point") is "midpoint" or "mid" ? BinEvaluationPoint.Midpoint : BinEvaluationPoint.MeanDryBulb,
         };
-        double? widthK = s["study"].Number("bin_width");
-        var scale = widthK is double k
-            ? new DryBulbBinScale(TemperatureDifference.FromKelvin(k), study.Units)
-            : DryBulbBinScale.Default(study.Units);
+        var scale = Scale(study, s["study"]);
         var plant = s["plant"].Present ? PlantSettingsBuilder.Build(s["plant"], assumptions) : null;
         if (plant is null)
         {

@@ -47,7 +47,9 @@ public static class StudyRunner
     }
 
     /// <summary>Reads a climate's weather with its map, elevation override, gap policy and calendar year.</summary>
-    public static HourlyWeather ReadWeather(StudyClimate climate)
+    /// <param name="climate">The climate.</param>
+    /// <param name="maxBytes">The largest file, or decompressed gzip data, read (<see cref="Errors.InputFiles.DefaultMaxBytes"/> unless raised).</param>
+    public static HourlyWeather ReadWeather(StudyClimate climate, long maxBytes = Errors.InputFiles.DefaultMaxBytes)
     {
         var options = new WeatherReadOptions
         {
@@ -56,6 +58,7 @@ public static class StudyRunner
             AllowDroppingLongGaps = climate.DropLongGaps,
             CalendarYear = climate.CalendarYear ?? CalendarInfo.DefaultTypicalYear,
             HumidityOver = climate.HumidityOver,
+            MaxBytes = maxBytes,
         };
         return WeatherReader.Read(climate.WeatherPath, options);
     }

@@ -25,7 +25,7 @@ internal static class StudySchema
         [
             Text("name", "Name of the study (used for the default output folder)."),
             Choice("units", ["ip", "si"], "ip", "Units of the tables, charts and report."),
-            new KeyDefinition("bin_width", ValueKind.Number, TemperatureDifference("bin_width"), "Width of the dry-bulb bins.")
+            new KeyDefinition("bin_width", ValueKind.Number, TemperatureDifference("bin_width"), "Width of the dry-bulb bins; bins sit on multiples of the width, lower edge inclusive.")
             { Min = 0.1 / 1.8, Max = 20.0, DefaultText = "5 F (ip) or 2 C (si)", RangeHint = "bins between 0.1 F and 20 K wide" },
             Choice("bin_point", ["mean", "midpoint", "mid"], "mean",
                 "Where the bin method evaluates each bin: the mean dry-bulb of its ventilated hours, or its midpoint (midpoint or mid: the classic method)."),
@@ -40,8 +40,8 @@ internal static class StudySchema
         [
             Text("name", "Name of the climate (a column of every table)."),
             Text("weather", "Weather file, relative to the study file."),
-            Text("map", "Column map for other layouts: a shipped map name or a path relative to the study file."),
-            new KeyDefinition("elevation", ValueKind.Number, Length("elevation"), "Site elevation; overrides the file's metadata.")
+            Text("map", "Column map for a layout other than the open one: a shipped map (tmy3, pvgis) or the path of a TOML map file (in a study, relative to the study file)."),
+            new KeyDefinition("elevation", ValueKind.Number, Length("elevation"), "Site elevation, overriding the file's metadata; it sets the site pressure.")
             { Min = -500, Max = 6000, RangeHint = "elevations between -500 m and 6,000 m" },
             Bool("drop_long_gaps", "Leave hours in gaps longer than 6 h out (counted and reported) instead of stopping with an error.", "false"),
             new KeyDefinition("calendar_year", ValueKind.Number, Unitless("calendar_year"), "Year whose weekdays a typical-year file uses.")
@@ -52,30 +52,30 @@ internal static class StudySchema
 
         new("schedule", false,
         [
-            Text("occupied", "Occupied hours, e.g. \"Mon-Fri 07:00-19:00; Sat 08:00-13:00\" or \"always\".", "always"),
-            new KeyDefinition("holidays", ValueKind.TextList, Unitless("holidays"), "Dates (YYYY-MM-DD) treated as unoccupied."),
+            Text("occupied", "Occupied hours, e.g. \"Mon-Fri 07:00-19:00; Sat 08:00-13:00\", \"always\" or \"never\" (whole hours; 'Hol' for holidays).", "always"),
+            new KeyDefinition("holidays", ValueKind.TextList, Unitless("holidays"), "Holiday dates (YYYY-MM-DD, in the record's calendar year), unoccupied unless the schedule has a 'Hol' clause."),
             Choice("daylight_saving", ["none", "north-america", "europe"], "none",
-                "The daylight-saving rule of the building's clocks: the schedule is read in clock time, the weather stays in standard time."),
+                "The building's clocks: none (the schedule is in standard time), north-america or europe (the schedule is in clock time; the weather stays in standard time)."),
         ], true, "The occupancy schedule."),
 
         new("ventilation", false,
         [
             new KeyDefinition("airflow", ValueKind.Number, Flow("airflow"), "Outdoor airflow.") { Min = 0, Max = 1000, RangeHint = "an airflow of zero or more (up to 1,000 m3/s)" },
-            new KeyDefinition("people", ValueKind.Number, Unitless("people"), "Number of people (ventilation rate procedure).") { Min = 0, Max = 1e6 },
-            new KeyDefinition("area", ValueKind.Number, Area("area"), "Floor area (ventilation rate procedure).") { Min = 0, Max = 1e7 },
-            new KeyDefinition("per_person", ValueKind.Number, Flow("per_person"), "Outdoor air per person.") { Min = 0, Max = 0.1 },
-            new KeyDefinition("per_area", ValueKind.Number, PerArea("per_area"), "Outdoor air per unit floor area (cfm/ft2 or L/s per m2).") { Min = 0, Max = 0.02 },
-            new KeyDefinition("zone_effectiveness", ValueKind.Number, Unitless("zone_effectiveness"), "Zone air-distribution effectiveness.")
+            new KeyDefinition("people", ValueKind.Number, Unitless("people"), "Zone population, for the people-and-area minimum of the ventilation rate procedure (ASHRAE 62.1; you supply the rates).") { Min = 0, Max = 1e6 },
+            new KeyDefinition("area", ValueKind.Number, Area("area"), "Zone floor area, for the people-and-area minimum.") { Min = 0, Max = 1e7 },
+            new KeyDefinition("per_person", ValueKind.Number, Flow("per_person"), "Outdoor air per person, from the standard your code adopts.") { Min = 0, Max = 0.1 },
+            new KeyDefinition("per_area", ValueKind.Number, PerArea("per_area"), "Outdoor air per unit floor area, from the standard your code adopts.") { Min = 0, Max = 0.02 },
+            new KeyDefinition("zone_effectiveness", ValueKind.Number, Unitless("zone_effectiveness"), "Zone air-distribution effectiveness E_z.")
             { Min = 0, MinExclusive = true, Max = 1.5, DefaultText = "1.0" },
-            Choice("flow_basis", ["site", "standard", "actual"], "site", "How volume flow turns into mass of dry air."),
-            Choice("operation", ["occupied", "always"], "occupied", "When outdoor air is supplied."),
-            new KeyDefinition("heat_to", ValueKind.Number, Temperature("heat_to"), "Heating setpoint of the outdoor air.") { Min = 0, Max = 40, RangeHint = "0 to 40 C (32 to 104 F)" },
-            new KeyDefinition("cool_to", ValueKind.Number, Temperature("cool_to"), "Cooling setpoint of the outdoor air.") { Min = 5, Max = 45, RangeHint = "5 to 45 C (41 to 113 F)" },
+            Choice("flow_basis", ["site", "standard", "actual"], "site", FlowBasisHelp),
+            Choice("operation", ["occupied", "always"], "occupied", "When outdoor air is supplied: occupied (the occupied hours of the schedule) or always."),
+            new KeyDefinition("heat_to", ValueKind.Number, Temperature("heat_to"), "Heating setpoint, to which the outdoor air is heated.") { Min = 0, Max = 40, RangeHint = "0 to 40 C (32 to 104 F)" },
+            new KeyDefinition("cool_to", ValueKind.Number, Temperature("cool_to"), "Cooling setpoint, to which the outdoor air is cooled.") { Min = 5, Max = 45, RangeHint = "5 to 45 C (41 to 113 F)" },
             new KeyDefinition("max_rh_pct", ValueKind.Number, Unitless("max_rh_pct"), "Maximum indoor relative humidity at the cooling setpoint, %.")
             { Min = 1, Max = 100, RangeHint = "a percentage from 1 to 100 (RH is in percent: 50 for 50 %, not 0.5)" },
-            new KeyDefinition("min_rh_pct", ValueKind.Number, Unitless("min_rh_pct"), "Humidify below this indoor relative humidity at the heating setpoint, %.")
-            { Min = 0, Max = 100, RangeHint = "a percentage from 0 to 100" },
-            new KeyDefinition("fan_power", ValueKind.Number, FanPowerPerFlow("fan_power"), "Power of the fan that moves the outdoor air, per unit of outdoor airflow (or give fan_pressure).")
+            new KeyDefinition("min_rh_pct", ValueKind.Number, Unitless("min_rh_pct"), "Minimum indoor relative humidity at the heating setpoint, %; the outdoor air is humidified to it.")
+            { Min = 0, Max = 100, DefaultText = "none (no humidification)", RangeHint = "a percentage from 0 to 100" },
+            new KeyDefinition("fan_power", ValueKind.Number, FanPowerPerFlow("fan_power"), "Power of the fan that moves the outdoor air, per unit of outdoor airflow; 0 for none (or give the fan pressure).")
             { Min = 0, Max = 5000, DefaultText = "from fan_pressure", RangeHint = "0 to 2.4 W/cfm (5 W per L/s)" },
             new KeyDefinition("fan_pressure", ValueKind.Number, PressureDrop("fan_pressure"), "Total pressure the ventilation fan works against, at plant.fan_efficiency.")
             { Min = 0, Max = 2500, DefaultText = "1 in. w.g. (250 Pa), recalled from memory", RangeHint = "0 to 2,500 Pa (10 in. w.g.)" },
@@ -86,11 +86,11 @@ internal static class StudySchema
         new("recovery", false,
         [
             Bool("enabled", "Set false to turn energy recovery off (e.g. in a variant).", "true"),
-            new KeyDefinition("sensible_effectiveness", ValueKind.Number, Unitless("sensible_effectiveness"), "Sensible effectiveness.") { Min = 0, Max = 1 },
-            new KeyDefinition("latent_effectiveness", ValueKind.Number, Unitless("latent_effectiveness"), "Latent effectiveness.") { Min = 0, Max = 1, DefaultText = "0" },
-            new KeyDefinition("frost_limit", ValueKind.Number, Temperature("frost_limit"), "Below this outdoor temperature the effectiveness drops (defrost).") { Min = -50, Max = 20 },
-            new KeyDefinition("frost_effectiveness", ValueKind.Number, Unitless("frost_effectiveness"), "Effectiveness below the frost limit.") { Min = 0, Max = 1 },
-            new KeyDefinition("pressure_drop", ValueKind.Number, PressureDrop("pressure_drop"), "Added pressure drop on each air stream.")
+            new KeyDefinition("sensible_effectiveness", ValueKind.Number, Unitless("sensible_effectiveness"), "Sensible effectiveness of the energy recovery device, 0 to 1 (e.g. 0.75).") { Min = 0, Max = 1 },
+            new KeyDefinition("latent_effectiveness", ValueKind.Number, Unitless("latent_effectiveness"), "Latent effectiveness of the device, 0 to 1 (0: sensible only).") { Min = 0, Max = 1, DefaultText = "0" },
+            new KeyDefinition("frost_limit", ValueKind.Number, Temperature("frost_limit"), "Outdoor dry-bulb below which the device defrosts and runs at the frost effectiveness (give both).") { Min = -50, Max = 20 },
+            new KeyDefinition("frost_effectiveness", ValueKind.Number, Unitless("frost_effectiveness"), "Sensible effectiveness below the frost limit (0: no recovery while defrosting).") { Min = 0, Max = 1 },
+            new KeyDefinition("pressure_drop", ValueKind.Number, PressureDrop("pressure_drop"), "Pressure drop the device adds on each air stream.")
             { Min = 0, Max = 2500, DefaultText = "0", RangeHint = "0 to 2,500 Pa (10 in. w.g.)" },
             Bool("bypass_when_idle", "The air bypasses the device when it does not recover (no fan penalty in those hours).", "false"),
             new KeyDefinition("fan_efficiency", ValueKind.Number, Unitless("fan_efficiency"), "Fan efficiency for the device's pressure drop (overrides plant.fan_efficiency).")
@@ -102,31 +102,31 @@ internal static class StudySchema
             Bool("enabled", "Set false to evaluate no economizer (e.g. in a variant).", "true"),
             Choice("system", [.. Economizer.AirSystemTypes.All.Select(Economizer.AirSystemTypes.Name)], Economizer.AirSystemTypes.Name(Economizer.AirSystemType.VariableVolume),
                 "How the air system meets the load: single-zone (constant airflow, supply temperature follows the load), variable-volume (airflow follows the load, reheat at minimum airflow) or constant-volume-reheat."),
-            new KeyDefinition("supply_airflow", ValueKind.Number, Flow("supply_airflow"), "Supply airflow (the maximum, for variable volume).") { Min = 0, MinExclusive = true, Max = 1000 },
+            new KeyDefinition("supply_airflow", ValueKind.Number, Flow("supply_airflow"), "Supply airflow: the constant flow, or the maximum of a variable-volume system.") { Min = 0, MinExclusive = true, Max = 1000 },
             new KeyDefinition("supply_airflow_min", ValueKind.Number, Flow("supply_airflow_min"), "Minimum supply airflow of a variable-volume system.")
             { Min = 0, MinExclusive = true, Max = 1000, DefaultText = "30 % of supply_airflow, not below min_outdoor_airflow (recalled from memory)" },
-            new KeyDefinition("supply_temp_reset_max", ValueKind.Number, Temperature("supply_temp_reset_max"), "Variable volume: the warmest supply temperature of an outdoor reset (with the two outdoor temperatures below).")
+            new KeyDefinition("supply_temp_reset_max", ValueKind.Number, Temperature("supply_temp_reset_max"), "Variable volume: the warmest supply temperature of an outdoor reset (give it with the reset's two outdoor temperatures).")
             { Min = 0, Max = 30, DefaultText = "no reset" },
             new KeyDefinition("supply_temp_reset_outdoor_low", ValueKind.Number, Temperature("supply_temp_reset_outdoor_low"), "Outdoor dry-bulb at and below which the reset supply is at its warmest.") { Min = -40, Max = 50 },
-            new KeyDefinition("supply_temp_reset_outdoor_high", ValueKind.Number, Temperature("supply_temp_reset_outdoor_high"), "Outdoor dry-bulb at and above which the supply is at supply_temp.") { Min = -40, Max = 50 },
-            new KeyDefinition("min_outdoor_airflow", ValueKind.Number, Flow("min_outdoor_airflow"), "Minimum outdoor airflow.") { Min = 0, Max = 1000 },
-            Choice("flow_basis", ["site", "standard", "actual"], "the ventilation flow basis", "How volume flow turns into mass of dry air."),
-            new KeyDefinition("supply_temp", ValueKind.Number, Temperature("supply_temp"), "Supply air temperature.") { Min = 0, Max = 30 },
+            new KeyDefinition("supply_temp_reset_outdoor_high", ValueKind.Number, Temperature("supply_temp_reset_outdoor_high"), "Outdoor dry-bulb at and above which the supply is at the supply temperature.") { Min = -40, Max = 50 },
+            new KeyDefinition("min_outdoor_airflow", ValueKind.Number, Flow("min_outdoor_airflow"), "Minimum outdoor airflow; it must meet the ventilation code.") { Min = 0, Max = 1000 },
+            Choice("flow_basis", ["site", "standard", "actual"], "the ventilation flow basis", FlowBasisHelp),
+            new KeyDefinition("supply_temp", ValueKind.Number, Temperature("supply_temp"), "Supply (coil-leaving) air temperature.") { Min = 0, Max = 30 },
             new KeyDefinition("return_temp", ValueKind.Number, Temperature("return_temp"), "Return air temperature.") { Min = 10, Max = 40 },
             new KeyDefinition("return_rh_pct", ValueKind.Number, Unitless("return_rh_pct"), "Return air relative humidity, %.") { Min = 0, MinExclusive = true, Max = 100 },
             new KeyDefinition("design_load", ValueKind.Number, PowerAlternatives("design_load"), "Building sensible cooling load at the design outdoor temperature.") { Min = 0, MinExclusive = true, Max = 1e8 },
-            new KeyDefinition("design_outdoor", ValueKind.Number, Temperature("design_outdoor"), "Design outdoor temperature of the load line.") { Min = 10, Max = 60 },
-            new KeyDefinition("balance_point", ValueKind.Number, Temperature("balance_point"), "Outdoor temperature at which the cooling load is zero.") { Min = -20, Max = 40 },
-            new KeyDefinition("controls", ValueKind.TextList, Unitless("controls"), "High-limit controls compared with the baseline.")
+            new KeyDefinition("design_outdoor", ValueKind.Number, Temperature("design_outdoor"), "Design outdoor dry-bulb of the design load.") { Min = 10, Max = 60 },
+            new KeyDefinition("balance_point", ValueKind.Number, Temperature("balance_point"), "Outdoor dry-bulb below which the building needs no cooling.") { Min = -20, Max = 40 },
+            new KeyDefinition("controls", ValueKind.TextList, Unitless("controls"), "High-limit controls compared with the baseline: fixed-drybulb, differential-drybulb, fixed-enthalpy, differential-enthalpy, fixed-dewpoint (or none).")
             {
                 Choices = ["none", "fixed-drybulb", "differential-drybulb", "fixed-enthalpy", "differential-enthalpy", "fixed-dewpoint"],
                 DefaultText = "all five",
             },
             Bool("integrated", "true: the economizer keeps running while the coil trims; false: it locks out.", "true"),
-            new KeyDefinition("high_limit_drybulb", ValueKind.Number, Temperature("high_limit_drybulb"), "Dry-bulb high limit.") { Min = 0, Max = 40 },
-            new KeyDefinition("high_limit_enthalpy", ValueKind.Number, Enthalpy("high_limit_enthalpy"), "Enthalpy high limit (datum converted through the state).") { Min = 0, Max = 150e3 },
-            new KeyDefinition("high_limit_dewpoint", ValueKind.Number, Temperature("high_limit_dewpoint"), "Dew-point high limit.") { Min = -20, Max = 35 },
-            new KeyDefinition("coil_leaving_rh_pct", ValueKind.Number, Unitless("coil_leaving_rh_pct"), "Relative humidity of the air leaving the coil, %.")
+            new KeyDefinition("high_limit_drybulb", ValueKind.Number, Temperature("high_limit_drybulb"), "Dry-bulb high limit; the local energy code governs.") { Min = 0, Max = 40, DefaultText = "75 F (23.9 C), recalled from memory" },
+            new KeyDefinition("high_limit_enthalpy", ValueKind.Number, Enthalpy("high_limit_enthalpy"), "Enthalpy high limit (0 F datum in Btu/lb, 0 C datum in kJ/kg); the local energy code governs.") { Min = 0, Max = 150e3, DefaultText = "28 Btu/lb (47.2 kJ/kg), recalled from memory" },
+            new KeyDefinition("high_limit_dewpoint", ValueKind.Number, Temperature("high_limit_dewpoint"), "Dew-point high limit; the local energy code governs.") { Min = -20, Max = 35, DefaultText = "55 F (12.8 C), recalled from memory" },
+            new KeyDefinition("coil_leaving_rh_pct", ValueKind.Number, Unitless("coil_leaving_rh_pct"), "Relative humidity of the air leaving the cooling coil at its wettest, %.")
             { Min = 50, Max = 100, DefaultText = "90" },
             new KeyDefinition("supply_fan_pressure", ValueKind.Number, PressureDrop("supply_fan_pressure"), "Total pressure of the supply fan at the supply airflow; 0 for no supply fan energy.")
             { Min = 0, Max = 5000, DefaultText = "3 in. w.g. (750 Pa), recalled from memory", RangeHint = "0 to 5,000 Pa (20 in. w.g.)" },
@@ -198,6 +198,9 @@ internal static class StudySchema
             Text("name", "Name of the variant (a column of every table)."),
         ], false, "One variant: a name and overrides of any key, e.g. ventilation.airflow_cfm = 2600."),
     ];
+
+    private const string FlowBasisHelp =
+        "How volume flow turns into mass of dry air: site (dry air at 70 F and the site pressure), standard (0.075 lb/ft3) or actual (the air's own state each hour).";
 
     private static KeyDefinition Text(string name, string description, string? defaultText = null) =>
         new(name, ValueKind.Text, Unitless(name), description) { DefaultText = defaultText };

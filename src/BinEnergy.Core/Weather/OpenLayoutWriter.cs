@@ -14,6 +14,26 @@ public static class OpenLayoutWriter
     /// <summary>The header line of the open layout as this writer emits it.</summary>
     public const string Header = "time,drybulb_c,dewpoint_c,rh_pct,pressure_kpa";
 
+    /// <summary>
+    /// The comment lines of a record converted from another file: its source and how it was read, the calendar, whether
+    /// it is a typical year, the repairs counted and the reader's notes, so the converted file says where it came from.
+    /// </summary>
+    public static IEnumerable<string> ConversionNotes(HourlyWeather weather, string sourceFile, string readWith)
+    {
+        yield return "source: " + sourceFile + " read with the " + readWith;
+        yield return "calendar: " + weather.Calendar.Note;
+        if (weather.Calendar.IsTypicalYear)
+        {
+            yield return "typical_year: true";
+        }
+
+        yield return "repairs: " + (weather.Quality.Counts.Count == 0 ? "none" : string.Join(", ", weather.Quality.Counts.Select(kv => kv.Key + " " + kv.Value)));
+        foreach (string w in weather.Quality.Warnings)
+        {
+            yield return "note: " + w;
+        }
+    }
+
     /// <summary>Writes the record. Numbers use the invariant culture (dot decimal separator).</summary>
     public static void Write(HourlyWeather weather, TextWriter writer, IEnumerable<string>? commentLines = null)
     {

@@ -92,7 +92,7 @@ public class BinsCommandTests
     [InlineData(new[] { "--occupied", "Mon-Fry 07:00-19:00" }, 2, "character 5")]
     [InlineData(new[] { "--by", "week" }, 2, "--by week: 'week' is not a split; write month or block")]
     [InlineData(new[] { "--csv", "--json" }, 2, "not both")]
-    [InlineData(new[] { "--width", "0" }, 2, "--width 0")]
+    [InlineData(new[] { "--width", "0" }, 2, "--width: 0 F is out of range")]
     [InlineData(new[] { "--holidays", "25/12/2018" }, 2, "YYYY-MM-DD")]
     public void BadOptions_AreUsageErrors(string[] extra, int exitCode, string message)
     {

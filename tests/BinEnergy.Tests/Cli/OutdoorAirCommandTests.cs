@@ -126,7 +126,7 @@ public class OutdoorAirCommandTests
     }
 
     [Theory]
-    [InlineData(new[] { "--airflow", "1000" }, "--heat-to, --cool-to, --max-rh")]
+    [InlineData(new[] { "--airflow", "1000" }, "--heat-to is required: heating setpoint, to which the outdoor air is heated; --cool-to is required: cooling setpoint, to which the outdoor air is cooled; --max-rh is required")]
     [InlineData(new[] { "--heat-to", "70", "--cool-to", "75", "--max-rh", "60" }, "--airflow")]
     [InlineData(new[] { "--airflow", "1000", "--heat-to", "80", "--cool-to", "75", "--max-rh", "60" }, "above the cooling setpoint")]
     [InlineData(new[] { "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60", "--flow-basis", "metric" }, "--flow-basis")]
