@@ -22,9 +22,8 @@ public class BinOptions : WeatherFileSettings
     public string? Holidays { get; init; }
 
     [CommandOption("--daylight-saving <RULE>")]
-    [TypeConverter(typeof(ChoiceConverter<DaylightSaving>))]
     [StudyKey("schedule", "daylight_saving")]
-    public DaylightSaving? DaylightSaving { get; init; }
+    public string? DaylightSaving { get; init; }
 
     [CommandOption("--csv")]
     [Description("Write the main table as CSV to standard output (the same column names and units as the study tables).")]

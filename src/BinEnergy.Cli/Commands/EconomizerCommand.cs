@@ -20,9 +20,8 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
     public sealed class Settings : EstimateOptions
     {
         [CommandOption("--system <TYPE>")]
-        [TypeConverter(typeof(ChoiceConverter<AirSystemType>))]
         [StudyKey("economizer", "system")]
-        public AirSystemType? System { get; init; }
+        public string? System { get; init; }
 
         [CommandOption("--supply-airflow <N>")]
         [StudyKey("economizer", "supply_airflow", nameof(DisplayUnits.Airflow), Required = true)]
@@ -37,9 +36,8 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         public double? MinOutdoorAirflow { get; init; }
 
         [CommandOption("--flow-basis <BASIS>")]
-        [TypeConverter(typeof(ChoiceConverter<FlowBasis>))]
         [StudyKey("economizer", "flow_basis", Also = ["ventilation.flow_basis"])]
-        public FlowBasis? FlowBasis { get; init; }
+        public string? FlowBasis { get; init; }
 
         [CommandOption("--supply-temp <T>")]
         [StudyKey("economizer", "supply_temp", nameof(DisplayUnits.Temperature), Required = true)]
@@ -125,11 +123,11 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        var run = OneCaseStudy.Run(settings, "economizer");
+        var (run, headline) = OneCaseStudy.Run(settings, "economizer");
         var u = settings.DisplayUnits;
         var a = run.OutdoorAir.Assumptions;
         string methods = AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol);
-        var doc = EconomizerDocument.Build(run.Economizer!, u, settings.Headline ?? IntegrationMethod.Hourly, a.Schedule, methods);
+        var doc = EconomizerDocument.Build(run.Economizer!, u, headline, a.Schedule, methods);
         output.Write(doc, settings, settings.Csv);
         return ExitCodes.Ok;
     }

@@ -14,14 +14,12 @@ namespace BinEnergy.Cli.Commands;
 public class EstimateOptions : BinOptions
 {
     [CommandOption("--bin-point <POINT>")]
-    [TypeConverter(typeof(ChoiceConverter<BinEvaluationPoint>))]
     [StudyKey("study", "bin_point")]
-    public BinEvaluationPoint? BinPoint { get; init; }
+    public string? BinPoint { get; init; }
 
     [CommandOption("--headline <METHOD>")]
-    [TypeConverter(typeof(ChoiceConverter<IntegrationMethod>))]
     [StudyKey("study", "headline_method")]
-    public IntegrationMethod? Headline { get; init; }
+    public string? Headline { get; init; }
 
     public override ValidationResult Validate() =>
         StudyOptions.Missing(this) is { } missing ? ValidationResult.Error(missing) : base.Validate();

@@ -9,7 +9,6 @@ namespace BinEnergy.Cli.Commands;
 public sealed class InspectSettings : WeatherFileSettings
 {
     [CommandOption("--degree-days <METHOD>")]
-    [TypeConverter(typeof(ChoiceConverter<DegreeDayMethod>))]
     [StudyKey("study", "degree_days")]
-    public DegreeDayMethod? DegreeDays { get; init; }
+    public string? DegreeDays { get; init; }
 }

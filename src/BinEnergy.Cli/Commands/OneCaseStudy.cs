@@ -16,13 +16,13 @@ internal static class OneCaseStudy
     /// <summary>The source name study errors carry for option values.</summary>
     public const string Source = "the command line";
 
-    /// <summary>Builds, reads and runs the study the options of <paramref name="settings"/> describe.</summary>
+    /// <summary>Builds, reads and runs the study the options of <paramref name="settings"/> describe; returns its one case and headline method.</summary>
     /// <param name="settings">The command's options.</param>
     /// <param name="name">The study name (the command's).</param>
-    public static StudyCaseResult Run(WeatherFileSettings settings, string name)
+    public static (StudyCaseResult Case, Core.Loads.IntegrationMethod Headline) Run(WeatherFileSettings settings, string name)
     {
         var (study, input) = Read(settings, name);
-        return Explained(input, study, () => StudyRunner.Run(study).Cases[0]);
+        return (Explained(input, study, () => StudyRunner.Run(study).Cases[0]), study.HeadlineMethod);
     }
 
     /// <summary>

@@ -19,9 +19,8 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
         public double? Airflow { get; init; }
 
         [CommandOption("--flow-basis <BASIS>")]
-        [TypeConverter(typeof(ChoiceConverter<FlowBasis>))]
         [StudyKey("ventilation", "flow_basis")]
-        public FlowBasis? FlowBasis { get; init; }
+        public string? FlowBasis { get; init; }
 
         [CommandOption("--heat-to <T>")]
         [StudyKey("ventilation", "heat_to", nameof(DisplayUnits.Temperature), Required = true)]
@@ -40,9 +39,8 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
         public double? MinRh { get; init; }
 
         [CommandOption("--ventilate <WHEN>")]
-        [TypeConverter(typeof(ChoiceConverter<VentilationOperation>))]
         [StudyKey("ventilation", "operation")]
-        public VentilationOperation? Ventilate { get; init; }
+        public string? Ventilate { get; init; }
 
         [CommandOption("--people <N>")]
         [StudyKey("ventilation", "people")]
@@ -131,8 +129,8 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        var run = OneCaseStudy.Run(settings, "outdoor-air");
-        var doc = OutdoorAirDocument.Build(run, settings.DisplayUnits, settings.Source(), settings.Headline ?? IntegrationMethod.Hourly,
+        var (run, headline) = OneCaseStudy.Run(settings, "outdoor-air");
+        var doc = OutdoorAirDocument.Build(run, settings.DisplayUnits, settings.Source(), headline,
             settings.Occupied is null && run.Case.OutdoorAir.Operation == VentilationOperation.Occupied);
         output.Write(doc, settings, settings.Csv);
         return ExitCodes.Ok;

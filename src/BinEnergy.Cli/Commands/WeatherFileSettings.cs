@@ -32,9 +32,8 @@ public class WeatherFileSettings : CommonSettings
     public int? CalendarYear { get; init; }
 
     [CommandOption("--humidity-over <WATER|ICE>")]
-    [TypeConverter(typeof(ChoiceConverter<Core.Psychrometrics.HumidityOver>))]
     [StudyKey("climate", "humidity_over")]
-    public Core.Psychrometrics.HumidityOver? HumidityOver { get; init; }
+    public string? HumidityOver { get; init; }
 
     [CommandOption("--max-input-mb <MB>")]
     [Description("Largest weather file read, and the largest its gzip data may decompress to, MB. Default 1024 (about 1,000 station-years).")]

@@ -5,17 +5,14 @@ namespace BinEnergy.Cli.Options;
 
 /// <summary>
 /// Reads an option whose value is one of a few words into an enum (Spectre.Console.Cli calls it
-/// through the property's <see cref="TypeConverterAttribute"/>), with the words of <see cref="Choices"/>,
-/// and gives the word of a value back for the study key the option sets.
+/// through the property's <see cref="TypeConverterAttribute"/>), with the words of <see cref="Choices"/>.
+/// Options that set a study key take text instead, and the study reader checks it against the key's words.
 /// </summary>
 /// <typeparam name="T">The enum.</typeparam>
 internal sealed class ChoiceConverter<T> : TypeConverter
     where T : struct, Enum
 {
     private static readonly (string Option, string What, (string Word, T Value)[] Words) Table = Choices.Of<T>();
-
-    /// <summary>The word of a value (its name in study files).</summary>
-    public static string WordOf(T value) => Table.Words.First(c => c.Value.Equals(value)).Word;
 
     public override bool CanConvertFrom(ITypeDescriptorContext? context, Type sourceType) => sourceType == typeof(string);
 

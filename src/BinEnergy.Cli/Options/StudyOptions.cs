@@ -35,7 +35,6 @@ internal static class StudyOptions
                     string text => text,
                     double number => number,
                     int number => number,
-                    Enum choice => WordOf(property, choice),
                     _ => throw new InvalidOperationException($"option {origin} has a value of type {value.GetType().Name} that no study key takes"),
                 };
                 if (studyValue is not null)
@@ -111,11 +110,5 @@ internal static class StudyOptions
         }
 
         return list;
-    }
-
-    private static string WordOf(PropertyInfo property, Enum value)
-    {
-        var converter = property.GetCustomAttribute<TypeConverterAttribute>()?.ConverterTypeName is string name ? Type.GetType(name) : null;
-        return converter?.GetMethod("WordOf")?.Invoke(null, [value]) as string ?? value.ToString().ToLowerInvariant();
     }
 }

@@ -184,7 +184,7 @@ public class EconomizerCommandTests
     [InlineData(new[] { "--min-outdoor-airflow", "5000" }, "--min-outdoor-airflow: the minimum outdoor airflow is above the minimum supply airflow")]
     [InlineData(new[] { "--supply-temp", "80" }, "--supply-temp: the supply temperature must be below the return temperature")]
     [InlineData(new[] { "--occupied", "Mon-Fri 07:00-25:00" }, "--occupied")]
-    [InlineData(new[] { "--flow-basis", "metric" }, "--flow-basis metric: 'metric' is not a flow basis; write site, standard or actual")]
+    [InlineData(new[] { "--flow-basis", "metric" }, "--flow-basis: \"metric\" is not one of \"site\", \"standard\", \"actual\"")]
     [InlineData(new[] { "--balance-point", "99" }, "--design-outdoor: the design outdoor temperature must be above the balance point")]
     public void BadOption_IsAUsageErrorNamingTheOption(string[] replace, string message)
     {
