@@ -5,7 +5,8 @@ namespace BinEnergy.Core.Weather;
 /// <summary>
 /// Data-sanity checks of the reader: values that are physical one by one but not together. A dew point above the
 /// dry-bulb in a large share of the hours is a unit slip (a column in the other unit) and stops the read; single-hour
-/// spikes and hours far outside their month's own spread are warned about with examples and used as they are.
+/// spikes, hours far outside their month's own spread and an annual mean no place at the latitude has are warned about
+/// and used as they are.
 /// </summary>
 internal static class WeatherChecks
 {
@@ -73,6 +74,50 @@ internal static class WeatherChecks
             quality.Warn(Inv($"{outliers.Count} hour(s) with a dry-bulb more than {OutlierSigmas:0} standard deviations and {OutlierMinimumK:0} K from their month's median: ") + Examples(outliers, grid, t, typical)
                 + "; check the data (the values are used as they are)");
         }
+    }
+
+    /// <summary>
+    /// Warns when a record of about a year or more has a mean dry-bulb no place at its latitude and elevation has: the
+    /// usual sign of a dry-bulb column in the other unit (F read as C lands far above any annual mean; C read as F far
+    /// below it). The band is wide on purpose, so it only catches slips; see <see cref="PlausibleAnnualMeanC"/>.
+    /// </summary>
+    public static void AnnualMeanForLatitude(HourlyGrid grid, double? latitude, double? elevationM, QualityReport quality)
+    {
+        var t = grid.Columns[WeatherQuantity.DryBulb];
+        if (latitude is not double lat || t.Length < 360 * 24)
+        {
+            return;
+        }
+
+        double mean = t.Average();
+        var (low, high) = PlausibleAnnualMeanC(lat, elevationM);
+        if (mean >= low && mean <= high)
+        {
+            return;
+        }
+
+        // The mean read in the other unit: values written in F but labelled C are (x - 32) / 1.8 in C, and the reverse.
+        double asF = (mean - 32) / 1.8, asC = mean * 1.8 + 32;
+        string other = asF >= low && asF <= high ? Inv($"; read as F it would be {asF:0.#} C, which fits")
+            : asC >= low && asC <= high ? Inv($"; if the values were C read as F it would be {asC:0.#} C, which fits") : string.Empty;
+        quality.Warn(Inv($"the mean dry-bulb of the record is {mean:0.#} C, outside {low:0} to {high:0} C, the widest range of annual means at latitude {lat:0.#}")
+            + (elevationM is double z ? Inv($" and {z:0} m") : " (elevation unknown)") + other
+            + "; check the unit of the dry-bulb column (the values are used as they are)");
+    }
+
+    /// <summary>
+    /// The widest plausible annual mean dry-bulb at a latitude and elevation, C (recalled from memory, no source: annual
+    /// means at sea level are above about 18 C within 20 degrees of the equator and fall to about -20 C near 65 degrees and
+    /// -35 C at the poles; no place's annual mean is above about 36 C (the hottest, in the Afar, are near 35 C); the lower
+    /// bound falls with the standard lapse rate of 6.5 K/km, or by 26 K when the elevation is unknown).
+    /// </summary>
+    internal static (double Low, double High) PlausibleAnnualMeanC(double latitude, double? elevationM)
+    {
+        double a = Math.Abs(latitude);
+        double seaLevelLow = a <= 20 ? 18 : a <= 65 ? 18 - (a - 20) * 38 / 45 : -20 - (a - 65) * 15 / 25;
+        double high = a <= 30 ? 36 : 36 - (a - 30) * 0.6;
+        double lapse = elevationM is double z ? 6.5 * Math.Max(z, 0) / 1000 : 26;
+        return (seaLevelLow - lapse, high);
     }
 
     private static string Examples(List<int> hours, HourlyGrid grid, double[] t, bool typical) =>

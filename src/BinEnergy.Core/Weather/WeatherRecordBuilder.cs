@@ -18,6 +18,7 @@ internal static class WeatherRecordBuilder
         var grid = HourlyGrid.Build(raw, calendar, options);
         WeatherChecks.DewPointsAgainstDryBulb(grid, raw);
         WeatherChecks.DryBulbOutliers(grid, raw.Quality, calendar.Calendar.IsTypicalYear);
+        WeatherChecks.AnnualMeanForLatitude(grid, latitude, elevation, raw.Quality);
         var (sitePressure, source, pressureColumn) = SitePressure(grid, elevation, raw.Quality);
         var pressure = pressureColumn ?? Enumerable.Repeat(sitePressure, grid.Times.Length).ToArray();
         var over = HumidityConvention(raw, options);
