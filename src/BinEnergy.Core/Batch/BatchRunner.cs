@@ -28,20 +28,31 @@ public static class BatchRunner
     {
         var placeholder = new StudyClimate("batch", string.Empty, null, null, 0);
         var variants = StudyCaseBuilder.Build(study with { Climates = [placeholder] });
-        int n = Math.Max(1, workers ?? Environment.ProcessorCount);
-        var channel = Channel.CreateBounded<BatchFileResult>(new BoundedChannelOptions(n) { SingleReader = true, FullMode = BoundedChannelFullMode.Wait });
+        ForEachFile(stations, s => RunOne(study, variants, s.Station, s.Position), handle, workers, ct);
+    }
+
+    /// <summary>
+    /// The engine's pipeline: <paramref name="work"/> on every item, one item per worker on <paramref name="workers"/> cores
+    /// (default every core), and <paramref name="handle"/> on the calling thread with each result as it finishes, through
+    /// a channel that holds at most one result per worker, so finished results wait for the handler, not pile up.
+    /// </summary>
+    /// <remarks>An exception from <paramref name="work"/> or <paramref name="handle"/> stops the other workers and is rethrown (the first one, unwrapped).</remarks>
+    public static void ForEachFile<TItem, TResult>(IReadOnlyList<TItem> items, Func<TItem, TResult> work, Action<TResult> handle, int? workers = null, CancellationToken ct = default)
+    {
+        int n = Math.Max(1, Math.Min(workers ?? Environment.ProcessorCount, Math.Max(1, items.Count)));
+        var channel = Channel.CreateBounded<TResult>(new BoundedChannelOptions(n) { SingleReader = true, FullMode = BoundedChannelFullMode.Wait });
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(ct);
         var producer = Task.Run(() =>
         {
             try
             {
-                Parallel.ForEach(stations, new ParallelOptions { MaxDegreeOfParallelism = n, CancellationToken = stop.Token },
-                    s => channel.Writer.WriteAsync(RunOne(study, variants, s.Station, s.Position), stop.Token).AsTask().GetAwaiter().GetResult());
+                Parallel.ForEach(items, new ParallelOptions { MaxDegreeOfParallelism = n, CancellationToken = stop.Token },
+                    item => channel.Writer.WriteAsync(work(item), stop.Token).AsTask().GetAwaiter().GetResult());
                 channel.Writer.Complete();
             }
             catch (Exception e)
             {
-                channel.Writer.Complete(e);
+                channel.Writer.Complete(e is AggregateException a ? a.Flatten().InnerExceptions.FirstOrDefault(x => x is not OperationCanceledException) ?? a.InnerExceptions[0] : e);
             }
         }, CancellationToken.None);
 
@@ -58,7 +69,7 @@ public static class BatchRunner
         }
         catch (ChannelClosedException e) when (e.InnerException is not null)
         {
-            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerException is AggregateException { InnerExceptions.Count: 1 } a ? a.InnerExceptions[0] : e.InnerException).Throw();
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerException).Throw();
         }
         finally
         {
