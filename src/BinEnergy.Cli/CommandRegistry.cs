@@ -79,7 +79,7 @@ internal static class CommandRegistry
 
         Add<BatchCommand>("batch")
             .WithData(output)
-            .WithDescription("Run a study's variants on many weather files (the files replace its [[climate]] tables), one file per core, into Hive-partitioned Parquet tables; resumable, splittable into shards.")
+            .WithDescription("Run a study on many weather files, one per core, into partitioned Parquet tables.")
             .WithExample("batch", "national.toml", "--weather", "stations.csv", "--out", "reports/national")
             .WithExample("batch", "national.toml", "--weather", "'weather/**/*.csv'", "--out", "reports/national", "--shard", "0/4");
 

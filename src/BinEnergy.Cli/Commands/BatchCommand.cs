@@ -20,7 +20,7 @@ public sealed class BatchCommand : Command<BatchCommand.Settings>
     public sealed class Settings : OutputSettings
     {
         [CommandArgument(0, "<STUDY>")]
-        [Description("The study file (TOML): its settings and variants run on every weather file; its own [[climate]] tables are not used (the weather files replace them).")]
+        [Description("The study file (TOML): its settings and variants run on every weather file; its own [[[[climate]]]] tables are not used (the weather files replace them).")]
         public string Study { get; init; } = string.Empty;
 
         [CommandOption("--weather <INPUTS>")]
