@@ -94,4 +94,35 @@ public sealed class BatchRunTests
         // Names from the files: the site name and the file's id.
         Assert.Contains(one["annual"].all!, r => r["climate"].GetString() == "Aster Flats (station-00)");
     }
+
+    [Fact]
+    public void PartitionByAStationListColumn_FoldersByItsValues_SameRowsAsByShard()
+    {
+        using var f = new BatchFolder(4);
+        string list = f.StationList(4);
+        string byShard = Path.Combine(f.Path, "by-shard"), byRegion = Path.Combine(f.Path, "by-region");
+        var (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", list, "--out", byShard);
+        Assert.True(code == 0, err);
+        (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", list, "--out", byRegion, "--partition-by", "region");
+        Assert.True(code == 0, err);
+
+        Assert.True(File.Exists(Path.Combine(byRegion, "tables", "annual", "region=north", "part-0000.parquet")));
+        Assert.True(File.Exists(Path.Combine(byRegion, "tables", "annual", "region=south", "part-0000.parquet")));
+        Assert.False(Directory.Exists(Path.Combine(byRegion, "tables", "annual", "shard=0")));
+
+        var one = BatchFolder.Read(byShard, hive: true, Order);
+        var two = BatchFolder.Read(byRegion, hive: true, Order);
+        foreach (var table in Order.Keys)
+        {
+            Assert.Equal(BatchFolder.Rows(one[table], "shard"), BatchFolder.Rows(two[table]));
+        }
+
+        // The region comes from the folder name, once: it is not also a column of the files.
+        Assert.Single(two["annual"].columns, c => c.name == "region");
+
+        // A column the list does not have is refused, naming the ones it has.
+        (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", list, "--out", Path.Combine(f.Path, "x"), "--partition-by", "state");
+        Assert.Equal(3, code);
+        Assert.Contains("the station list has no such column (it has region)", err, StringComparison.Ordinal);
+    }
 }
