@@ -77,6 +77,12 @@ internal static class CommandRegistry
             .WithExample("run", "harbor-study.toml")
             .WithExample("run", "harbor-study.toml", "--out", "reports/harbor", "--hourly", "--force");
 
+        Add<BatchCommand>("batch")
+            .WithData(output)
+            .WithDescription("Run a study on many weather files, one per core, into partitioned Parquet tables.")
+            .WithExample("batch", "national.toml", "--weather", "stations.csv", "--out", "reports/national")
+            .WithExample("batch", "national.toml", "--weather", "'weather/**/*.csv'", "--out", "reports/national", "--shard", "0/4");
+
         Add<DemoCommand>("demo")
             .WithData(output)
             .WithDescription("Runs the bundled demo study (invented climates, four ventilation options, economizer comparison) into reports/demo/.")

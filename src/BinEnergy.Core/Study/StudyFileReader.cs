@@ -17,8 +17,11 @@ namespace BinEnergy.Core.Study;
 public static class StudyFileReader
 {
     /// <summary>Reads the study file at <paramref name="path"/>.</summary>
+    /// <param name="path">The study file.</param>
+    /// <param name="climatesElsewhere">The climates come from elsewhere (a batch's weather files): the study's own
+    /// <c>[[climate]]</c> tables are not read and may be absent; <see cref="StudyDefinition.Climates"/> is empty.</param>
     /// <exception cref="StudyFileException">The file is missing, not TOML, or not a valid study.</exception>
-    public static StudyDefinition Read(string path)
+    public static StudyDefinition Read(string path, bool climatesElsewhere = false)
     {
         if (!System.IO.File.Exists(path) && !Directory.Exists(path))
         {
@@ -32,7 +35,8 @@ public static class StudyFileReader
             throw new StudyFileException(path, null, null, "the study file " + problem.Text + "; " + char.ToLowerInvariant(problem.Fix[0]) + problem.Fix[1..]);
         }
 
-        return Parse(text!, path, Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".");
+        var entries = TomlEntryReader.Read(text!, path);
+        return new Reader(path, Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".") { ClimatesElsewhere = climatesElsewhere }.Build(entries, Hash(text!));
     }
 
     /// <summary>
@@ -63,6 +67,9 @@ public static class StudyFileReader
     {
         private UnitSystem units = UnitSystem.IP;
 
+        /// <summary>Leave the [[climate]] tables unread (a batch supplies the climates).</summary>
+        public bool ClimatesElsewhere { get; init; }
+
         public StudyDefinition Build(List<TomlEntry> entries, string hash)
         {
             CheckTables(entries);
@@ -87,7 +94,7 @@ public static class StudyFileReader
                 throw study.ErrorAt("name", "the study name is empty; give it a name such as \"Harbor office ventilation options\"");
             }
 
-            var climates = ReadClimates(groups);
+            var climates = ClimatesElsewhere ? [] : ReadClimates(groups);
             var variants = ReadVariants(groups, baseSections);
             string currency = study.Text("currency") ?? "usd";
             if (currency.Length is < 1 or > 8 || !currency.All(char.IsAsciiLetterLower))

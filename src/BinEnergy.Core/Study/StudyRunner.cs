@@ -28,22 +28,29 @@ public static class StudyRunner
     public static StudyRunResult Run(StudyDefinition study, bool keepHours = false, IProgress<string>? progress = null, CancellationToken ct = default)
     {
         var cases = StudyCaseBuilder.Build(study);
-        var results = new List<StudyCaseResult>();
-        foreach (var climateCases in cases.GroupBy(c => c.Climate.Name, StringComparer.Ordinal))
+        var climates = cases.GroupBy(c => c.Climate.Name, StringComparer.Ordinal).Select((g, i) => (Index: i, Cases: g.ToList())).ToList();
+        var results = new StudyCaseResult[climates.Count][];
+
+        // The batch engine's pipeline: one climate per worker on every core; results put back in the study's order.
+        Batch.BatchRunner.ForEachFile(climates, climate =>
         {
-            ct.ThrowIfCancellationRequested();
-            var climate = climateCases.First().Climate;
-            progress?.Report($"reading {climate.Name}");
-            var weather = ReadWeather(climate);
-            foreach (var c in climateCases)
+            var weather = ReadWeather(climate.Cases[0].Climate);
+            return (climate.Index, Results: climate.Cases.Select(c =>
             {
                 ct.ThrowIfCancellationRequested();
-                progress?.Report($"{c.Climate.Name} / {c.Variant.Name}");
-                results.Add(RunCase(c, weather, study.HeadlineMethod, keepHours));
+                return RunCase(c, weather, study.HeadlineMethod, keepHours);
+            }).ToArray());
+        }, done =>
+        {
+            results[done.Index] = done.Results;
+            progress?.Report($"reading {climates[done.Index].Cases[0].Climate.Name}");
+            foreach (var r in done.Results)
+            {
+                progress?.Report($"{r.Case.Climate.Name} / {r.Case.Variant.Name}");
             }
-        }
+        }, ct: ct);
 
-        return new StudyRunResult(study, results, EngineVersion);
+        return new StudyRunResult(study, [.. results.SelectMany(r => r)], EngineVersion);
     }
 
     /// <summary>Reads a climate's weather with its map, elevation override, gap policy and calendar year.</summary>

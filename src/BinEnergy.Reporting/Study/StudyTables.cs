@@ -24,7 +24,7 @@ public static class StudyTables
     {
         var u = Units(run);
         var show = Show(run);
-        var tables = new List<ResultTable> { Annual(run.Cases, u, show), Bins(run.Cases, u, show), Monthly(run.Cases, u, show), Economizer(run.Cases, u, show), Peaks(run.Cases, u, show) };
+        var tables = Build(run.Cases, u, show).ToList();
         if (hourly)
         {
             tables.Add(Hourly(run.Cases, u, show));
@@ -32,6 +32,10 @@ public static class StudyTables
 
         return tables;
     }
+
+    /// <summary>The tables but <c>hourly</c> of some cases, with given units and figures (a batch lays out one file's cases at a time, all with the same columns).</summary>
+    public static IReadOnlyList<ResultTable> Build(IReadOnlyList<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+        [Annual(cases, u, show), Bins(cases, u, show), Monthly(cases, u, show), Economizer(cases, u, show), Peaks(cases, u, show)];
 
     /// <summary>The display units of a run: the study's system, currency and oil heat content.</summary>
     public static DisplayUnits Units(StudyRunResult run) =>

@@ -114,6 +114,38 @@ public sealed partial class ResultTable
         }
     }
 
+    /// <summary>A copy with text columns of one value each added at the end (a batch's station attributes on every row).</summary>
+    public ResultTable WithConstantText(IReadOnlyList<KeyValuePair<string, string>> extra)
+    {
+        var copy = new ResultTable(Name) { Title = Title, Layout = Layout, KeyColumn = KeyColumn };
+        foreach (var c in columns)
+        {
+            copy.Declare(new ResultColumn(c.Name, c.Kind, c.Unit, c.Label, c.Detail));
+        }
+
+        foreach (var (name, _) in extra)
+        {
+            copy.Text(name);
+        }
+
+        for (int i = 0; i < columns.Count; i++)
+        {
+            copy.columns[i].AddRange(columns[i]);
+        }
+
+        int rows = RowCount;
+        for (int j = 0; j < extra.Count; j++)
+        {
+            var column = copy.columns[columns.Count + j];
+            for (int r = 0; r < rows; r++)
+            {
+                column.Add(extra[j].Value);
+            }
+        }
+
+        return copy;
+    }
+
     private ResultTable Declare(ResultColumn column)
     {
         string name = column.Name;
