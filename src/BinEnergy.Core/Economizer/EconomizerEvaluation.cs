@@ -267,20 +267,10 @@ public sealed class EconomizerEvaluation
                 int bin = cells.DryBulbBinOfCell[cell];
                 cellStats[cell].Add(t[i], w[i], 1.0);
                 double qb = model.BuildingLoadW(t[i]);
-                if (qb <= 0)
-                {
-                    var none = model.NoCooling(t[i], w[i]);
-                    for (int c = 0; c < nc; c++)
-                    {
-                        monthly[c * 12 + month].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
-                        byBin[c * nb + bin].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
-                    }
-
-                    continue;
-                }
-
-                double cop = Cop(t[i], 1.0, Clamps);
                 var baseline = model.AtMinimum(qb, t[i], w[i]);
+
+                // Clamped cooling COPs count in the hours the building needs cooling or the baseline coil runs.
+                double cop = Cop(t[i], 1.0, qb > 0 || baseline.CoilRuns ? Clamps : ignored);
                 for (int c = 0; c < nc; c++)
                 {
                     var r = c == 0 ? baseline : model.Resolve(controls[c], qb, in baseline, t[i], w[i], h[i], dp[i]);
