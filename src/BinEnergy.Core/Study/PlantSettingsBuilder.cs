@@ -14,7 +14,11 @@ internal static class PlantSettingsBuilder
     /// <summary>Default COP lost while a heat pump defrosts, % (recalled from memory).</summary>
     public const double DefaultDefrostPenaltyPct = 10.0;
 
-    public static PlantSettings Build(StudySection plant, List<string> assumptions)
+    /// <summary>Builds the plant of a variant.</summary>
+    /// <param name="plant">The [plant] table.</param>
+    /// <param name="assumptions">Where defaults taken are listed.</param>
+    /// <param name="designAirflow">The design airflow a capacity per unit of airflow multiplies, m3/s, and where it comes from (for messages).</param>
+    public static PlantSettings Build(StudySection plant, List<string> assumptions, (double CubicMetresPerSecond, string Source) designAirflow)
     {
         string fuel = plant.Text("heating_fuel") ?? "gas";
         var heating = fuel switch
@@ -80,10 +84,11 @@ internal static class PlantSettingsBuilder
             assumptions.Add(FormattableString.Invariant($"gas steam humidifier efficiency {DefaultGasSteamEfficiency} (plant.humidifier_efficiency not given; recalled from memory)"));
         }
 
-        string[] heatPumpKeys = ["heating_capacity", "heat_pump_lockout", "backup_fuel", "backup_efficiency", "defrost_below", "defrost_penalty_pct"];
+        string[] heatPumpKeys = ["heating_capacity", "heating_capacity_per_airflow", "heat_pump_lockout", "backup_fuel", "backup_efficiency", "defrost_below", "defrost_penalty_pct"];
         if (heating != HeatingSource.HeatPump && heatPumpKeys.FirstOrDefault(plant.Has) is string hpKey)
         {
-            throw plant.ErrorAt(hpKey, $"{hpKey} applies to heating_fuel = \"heat-pump\" only, not \"{fuel}\"; remove it or change the fuel");
+            string written = plant.Get(hpKey)?.WrittenKey ?? hpKey;
+            throw plant.ErrorAt(hpKey, $"{written} applies to heating_fuel = \"heat-pump\" only, not \"{fuel}\"; remove it or change the fuel");
         }
 
         var backup = plant.Text("backup_fuel") switch
@@ -110,7 +115,7 @@ internal static class PlantSettingsBuilder
         return new PlantSettings(heating, efficiency, heatPump, cooling, fan, humidifierEfficiency, tariffs)
         {
             Humidifier = humidifier,
-            HeatPumpCapacity = Curve(plant, "heating_capacity"),
+            HeatPumpCapacity = Capacity(plant, assumptions, designAirflow),
             HeatPumpLockout = plant.Number("heat_pump_lockout") is double lockout ? Units.Temperature.FromCelsius(lockout) : null,
             Backup = backup,
             BackupEfficiency = plant.Number("backup_efficiency") ?? 1.0,
@@ -120,14 +125,42 @@ internal static class PlantSettingsBuilder
         };
     }
 
-    private static PerformanceCurve? Curve(StudySection plant, string name)
+    /// <summary>
+    /// The heat pump's capacity curve, W: <c>heating_capacity</c> as written, or
+    /// <c>heating_capacity_per_airflow</c> (W per m3/s) times the design airflow; not both.
+    /// </summary>
+    private static PerformanceCurve? Capacity(StudySection plant, List<string> assumptions, (double CubicMetresPerSecond, string Source) designAirflow)
+    {
+        const string perAirflow = "heating_capacity_per_airflow";
+        if (!plant.Has(perAirflow))
+        {
+            return Curve(plant, "heating_capacity");
+        }
+
+        if (plant.Has("heating_capacity"))
+        {
+            throw plant.ErrorAt(perAirflow, $"give the heat pump's capacity once: either as heating_capacity (absolute) or per unit of airflow ({plant.Get(perAirflow)!.WrittenKey}), not both");
+        }
+
+        double v = designAirflow.CubicMetresPerSecond;
+        if (!(v > 0))
+        {
+            throw plant.ErrorAt(perAirflow, $"a capacity per unit of airflow needs a design airflow above zero, but {designAirflow.Source} is zero: give heating_capacity (absolute) instead");
+        }
+
+        assumptions.Add(FormattableString.Invariant(
+            $"heat-pump heating capacity per unit of airflow times {designAirflow.Source}, {v / Units.Conversions.CubicMetresPerSecondPerCfm:N0} cfm ({v * 1000:N0} L/s)"));
+        return Curve(plant, perAirflow, v);
+    }
+
+    private static PerformanceCurve? Curve(StudySection plant, string name, double scale = 1.0)
     {
         var v = plant.Get(name);
         return v?.Value switch
         {
             null => null,
-            double cop => PerformanceCurve.Constant(cop),
-            List<(double OutdoorC, double Value)> points => PerformanceCurve.Create(points),
+            double cop => PerformanceCurve.Constant(cop * scale),
+            List<(double OutdoorC, double Value)> points => PerformanceCurve.Create(points.Select(p => (p.OutdoorC, p.Value * scale))),
             _ => throw new InvalidOperationException("unexpected curve value"),
         };
     }

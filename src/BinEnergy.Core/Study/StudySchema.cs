@@ -155,6 +155,14 @@ internal static class StudySchema
                 new("heating_capacity_kw_c", "kW", (v, _) => v * 1000.0, (t, _) => t),
             ], "Heat-pump heating capacity: one number, or [outdoor temperature, capacity] pairs; the backup carries the rest.")
             { Min = 0, Max = 1e8, PointXRange = (-50, 40), DefaultText = "no limit" },
+            new KeyDefinition("heating_capacity_per_airflow", ValueKind.NumberOrPoints,
+            [
+                new("heating_capacity_btuh_per_cfm", "Btu/h per cfm", (v, _) => Units.Power.FromBtuPerHour(v).Watts / Conversions.CubicMetresPerSecondPerCfm, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_btuh_per_cfm_f", "Btu/h per cfm", (v, _) => Units.Power.FromBtuPerHour(v).Watts / Conversions.CubicMetresPerSecondPerCfm, (t, _) => Conversions.FahrenheitToCelsius(t)),
+                new("heating_capacity_w_per_ls", "W per L/s", (v, _) => v * 1000.0, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_w_per_ls_c", "W per L/s", (v, _) => v * 1000.0, (t, _) => t),
+            ], "Heat-pump heating capacity per unit of design airflow (the economizer's supply_airflow, else the ventilation airflow), instead of heating_capacity: one number, or [outdoor temperature, capacity] pairs.")
+            { Min = 0, Max = 1e6, PointXRange = (-50, 40), DefaultText = "no limit", RangeHint = "0 to 1,600 Btu/h per cfm (1,000 W per L/s)" },
             new KeyDefinition("heat_pump_lockout", ValueKind.Number, Temperature("heat_pump_lockout"), "Below this outdoor temperature the heat pump is off and the backup heats.")
             { Min = -50, Max = 20, DefaultText = "none" },
             Choice("backup_fuel", ["electric", "gas", "oil"], "electric", "The heat pump's backup heat: electric resistance, gas or oil."),

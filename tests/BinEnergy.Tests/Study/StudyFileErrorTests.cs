@@ -51,7 +51,13 @@ public sealed class StudyFileErrorTests : IDisposable
             "an adiabatic humidifier has no efficiency here");
         var capacity = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nheating_capacity_btuh = 120000");
         Add("heat-pump capacity on a gas plant", (capacity.Text, ExampleStudy.LineOf(capacity.Text, "heating_capacity_btuh")), "key plant.heating_capacity_btuh",
-            "heating_capacity applies to heating_fuel = \"heat-pump\" only");
+            "heating_capacity_btuh applies to heating_fuel = \"heat-pump\" only");
+        var perCfmOnGas = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nheating_capacity_w_per_ls = 10");
+        Add("heat-pump capacity per airflow on a gas plant", (perCfmOnGas.Text, ExampleStudy.LineOf(perCfmOnGas.Text, "heating_capacity_w_per_ls")), "key plant.heating_capacity_w_per_ls",
+            "heating_capacity_w_per_ls applies to heating_fuel = \"heat-pump\" only");
+        var bothCapacities = ExampleStudy.ReplaceLine("heating_fuel = \"gas\"", "heating_fuel = \"heat-pump\"\nheating_cop = 3.0\nheating_capacity_btuh = 120000\nheating_capacity_btuh_per_cfm = 12");
+        Add("heat-pump capacity given absolute and per airflow", (bothCapacities.Text, ExampleStudy.LineOf(bothCapacities.Text, "heating_capacity_btuh_per_cfm")), "key plant.heating_capacity_btuh_per_cfm",
+            "either as heating_capacity (absolute) or per unit of airflow (heating_capacity_btuh_per_cfm), not both");
         Replace("misspelled table", "[plant]", "[plnat]", "key plnat", "unknown table [plnat]; did you mean [plant]?");
         Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
         Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");
