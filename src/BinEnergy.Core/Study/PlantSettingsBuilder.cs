@@ -116,6 +116,7 @@ internal static class PlantSettingsBuilder
         {
             Humidifier = humidifier,
             HeatPumpCapacity = Capacity(plant, assumptions, designAirflow),
+            CoolingCopByWetBulb = WetBulbTable(plant, assumptions),
             HeatPumpLockout = plant.Number("heat_pump_lockout") is double lockout ? Units.Temperature.FromCelsius(lockout) : null,
             Backup = backup,
             BackupEfficiency = plant.Number("backup_efficiency") ?? 1.0,
@@ -123,6 +124,40 @@ internal static class PlantSettingsBuilder
             DefrostPenalty = (plant.Number("defrost_penalty_pct") ?? DefaultDefrostPenaltyPct) / 100.0,
             OilJoulesPerGallon = oilJPerGallon,
         };
+    }
+
+    /// <summary>
+    /// The optional cooling COP table against outdoor dry-bulb and coil-entering wet-bulb: its two
+    /// axes and its COPs row by row, all three or none.
+    /// </summary>
+    private static CoolingCopTable? WetBulbTable(StudySection plant, List<string> assumptions)
+    {
+        string[] keys = ["cooling_cop_table_outdoor", "cooling_cop_table_wetbulb", "cooling_cop_table"];
+        string[] spellings = ["cooling_cop_table_outdoor_f (or _c)", "cooling_cop_table_wetbulb_f (or _c)", "cooling_cop_table"];
+        var given = keys.Where(plant.Has).ToList();
+        if (given.Count == 0)
+        {
+            return null;
+        }
+
+        if (given.Count < keys.Length)
+        {
+            string missing = string.Join(" and ", keys.Select((k, i) => (k, i)).Where(p => !plant.Has(p.k)).Select(p => spellings[p.i]));
+            throw plant.ErrorAt(given[0], $"the cooling COP table needs its outdoor temperatures, its wet-bulbs and its COPs: {missing} is missing");
+        }
+
+        try
+        {
+            var table = CoolingCopTable.Create(plant.NumberList(keys[0])!, plant.NumberList(keys[1])!, plant.NumberList(keys[2])!);
+            assumptions.Add("the economizer's coil buys its compressor energy at the COP of the wet-bulb table, at the outdoor dry-bulb and the coil-entering (mixed) wet-bulb; the outdoor-air loads use cooling_cop at the outdoor temperature");
+            return table;
+        }
+        catch (ArgumentException e)
+        {
+            string key = e.Message.Contains("outdoor temperatures", StringComparison.Ordinal) ? keys[0]
+                : e.Message.Contains("wet-bulb temperatures", StringComparison.Ordinal) ? keys[1] : keys[2];
+            throw plant.ErrorAt(key, e.Message);
+        }
     }
 
     /// <summary>

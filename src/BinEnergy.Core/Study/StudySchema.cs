@@ -179,6 +179,13 @@ internal static class StudySchema
                 .. Rating("cooling_kw_per_ton", (v, _) => CoolingRating.CopFromKilowattsPerTon(v)),
             ], "Cooling efficiency: COP, EER or kW/ton; one number, or [outdoor temperature, value] pairs.")
             { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-10, 60), RangeHint = "a COP above 0 and at most 15" },
+            new KeyDefinition("cooling_cop_table_outdoor", ValueKind.NumberList, Temperature("cooling_cop_table_outdoor"), "Optional COP table: the outdoor dry-bulbs of its rows, ascending.")
+            { Min = -10, Max = 60, DefaultText = "no table", RangeHint = "-10 to 60 C (14 to 140 F)" },
+            new KeyDefinition("cooling_cop_table_wetbulb", ValueKind.NumberList, Temperature("cooling_cop_table_wetbulb"), "Optional COP table: the coil-entering wet-bulbs of its columns, ascending.")
+            { Min = -10, Max = 40, DefaultText = "no table", RangeHint = "-10 to 40 C (14 to 104 F)" },
+            new KeyDefinition("cooling_cop_table", ValueKind.NumberList, Unitless("cooling_cop_table"),
+                "Optional cooling COPs row by row (one row per outdoor temperature, one value per wet-bulb), interpolated bilinearly; used for the economizer's coil at its entering (mixed) state.")
+            { Min = 0, MinExclusive = true, Max = 15, DefaultText = "no table: cooling_cop at the outdoor temperature", RangeHint = "a COP above 0 and at most 15" },
             new KeyDefinition("fan_efficiency", ValueKind.Number, Unitless("fan_efficiency"), "Total fan efficiency for the fan energy of pressure drops.")
             { Min = 0, MinExclusive = true, Max = 1, DefaultText = "0.6" },
             Choice("humidifier", ["steam-electric", "steam-gas", "adiabatic"], "steam-electric",
