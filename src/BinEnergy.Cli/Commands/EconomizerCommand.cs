@@ -151,8 +151,88 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [StudyKey("economizer", "high_limit_dewpoint", nameof(DisplayUnits.Temperature))]
         public double? HighLimitDewPoint { get; init; }
 
+        [CommandOption("--cooling-cop <COP>")]
+        [Description("Cooling COP of the plant, for compressor energy (one number; a study file takes outdoor-temperature pairs and a wet-bulb table). Needed with any plant option.")]
+        [StudyKey("plant", "cooling_cop")]
+        public double? CoolingCop { get; init; }
+
+        [CommandOption("--heating-fuel <FUEL>")]
+        [Description("What buys the reheat and preheat: gas, oil, electric or heat-pump. Default gas (with --heating-efficiency).")]
+        [StudyKey("plant", "heating_fuel")]
+        public string? HeatingFuel { get; init; }
+
+        [CommandOption("--heating-efficiency <E>")]
+        [Description("Seasonal efficiency of gas, oil or electric heating. Default 1.0 for electric; required for gas and oil.")]
+        [StudyKey("plant", "heating_efficiency")]
+        public double? HeatingEfficiency { get; init; }
+
+        [CommandOption("--heating-cop <COP>")]
+        [Description("Heat pump: heating COP (one number).")]
+        [StudyKey("plant", "heating_cop")]
+        public double? HeatingCop { get; init; }
+
+        [CommandOption("--heating-capacity <Q>")]
+        [Description("Heat pump: heating capacity (Btu/h in ip, kW in si); the backup carries the rest. Default no limit.")]
+        [StudyKey("plant", "heating_capacity", nameof(DisplayUnits.Power))]
+        public double? HeatingCapacity { get; init; }
+
+        [CommandOption("--heat-pump-lockout <T>")]
+        [Description("Heat pump: outdoor dry-bulb below which the backup heats alone (F or C). Default none.")]
+        [StudyKey("plant", "heat_pump_lockout", nameof(DisplayUnits.Temperature))]
+        public double? HeatPumpLockout { get; init; }
+
+        [CommandOption("--backup-fuel <FUEL>")]
+        [Description("Heat pump: backup heat, electric (default), gas or oil (gas and oil with --backup-efficiency).")]
+        [StudyKey("plant", "backup_fuel")]
+        public string? BackupFuel { get; init; }
+
+        [CommandOption("--backup-efficiency <E>")]
+        [Description("Heat pump: efficiency of the backup heat. Default 1.0 (electric).")]
+        [StudyKey("plant", "backup_efficiency")]
+        public double? BackupEfficiency { get; init; }
+
+        [CommandOption("--defrost-below <T>")]
+        [Description("Heat pump: outdoor dry-bulb below which its COP drops by --defrost-penalty (F or C). Default no defrost penalty.")]
+        [StudyKey("plant", "defrost_below", nameof(DisplayUnits.Temperature))]
+        public double? DefrostBelow { get; init; }
+
+        [CommandOption("--defrost-penalty <PCT>")]
+        [Description("Heat pump: COP lost while defrosting, percent. Default 10 (recalled from memory).")]
+        [StudyKey("plant", "defrost_penalty_pct")]
+        public double? DefrostPenalty { get; init; }
+
+        [CommandOption("--humidifier <TYPE>")]
+        [Description("The plant's humidifier: steam-electric (default), steam-gas or adiabatic.")]
+        [StudyKey("plant", "humidifier")]
+        public string? Humidifier { get; init; }
+
+        [CommandOption("--humidifier-efficiency <E>")]
+        [Description("Steam humidifier efficiency. Default 1.0 steam-electric, 0.8 steam-gas (recalled from memory).")]
+        [StudyKey("plant", "humidifier_efficiency")]
+        public double? HumidifierEfficiency { get; init; }
+
+        [CommandOption("--price-electricity <PRICE>")]
+        [Description("Electricity price per kWh, for the cost columns. Default 0.")]
+        [StudyKey("plant", "price_electricity_per_kwh")]
+        public double? PriceElectricity { get; init; }
+
+        /// <summary>True when any option of the plant is given (then the command buys energy through a plant).</summary>
+        private bool HasPlant => HeatingFuel is not null || HeatingEfficiency is not null || HeatingCop is not null || HeatingCapacity is not null
+            || HeatPumpLockout is not null || BackupFuel is not null || BackupEfficiency is not null || DefrostBelow is not null
+            || DefrostPenalty is not null || Humidifier is not null || HumidifierEfficiency is not null || PriceElectricity is not null;
+
         public override ValidationResult Validate()
         {
+            if (HasPlant && CoolingCop is null)
+            {
+                return ValidationResult.Error("--cooling-cop is required with the plant options: the plant buys the coil energy at that COP");
+            }
+
+            if ((HasPlant || CoolingCop is not null) && HeatingEfficiency is null && (HeatingFuel is null or "gas" or "oil"))
+            {
+                return ValidationResult.Error($"--heating-efficiency is required for {HeatingFuel ?? "gas"} heating (the default --heating-fuel is gas): e.g. --heating-efficiency 0.85, or choose --heating-fuel electric or heat-pump");
+            }
+
             var missing = new (string Option, double? Value, string What)[]
             {
                 ("--supply-airflow", SupplyAirflow, "the supply airflow"),
