@@ -52,9 +52,13 @@ public sealed class CoolingCopTable
         return new CoolingCopTable([.. outdoorC], [.. wetBulbC], [.. copRowByRow]);
     }
 
-    /// <summary>True when the point lies outside the table on either axis (the COP is clamped there).</summary>
-    public bool IsOutside(double outdoorDryBulbC, double enteringWetBulbC) =>
-        outdoorDryBulbC < outdoorC[0] || outdoorDryBulbC > outdoorC[^1] || enteringWetBulbC < wetBulbC[0] || enteringWetBulbC > wetBulbC[^1];
+    /// <summary>
+    /// True when the point lies outside the table on an axis of two or more values (the COP is
+    /// clamped there); an axis of one value is constant, never outside.
+    /// </summary>
+    public bool IsOutside(double outdoorDryBulbC, double enteringWetBulbC) => Outside(outdoorC, outdoorDryBulbC) || Outside(wetBulbC, enteringWetBulbC);
+
+    private static bool Outside(double[] axis, double x) => axis.Length > 1 && (x < axis[0] || x > axis[^1]);
 
     /// <summary>
     /// The COP at an outdoor dry-bulb and a coil-entering wet-bulb, C: with i, j the cell and

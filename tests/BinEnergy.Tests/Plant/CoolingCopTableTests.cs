@@ -52,6 +52,10 @@ public class CoolingCopTableTests(EconomizerRealFiles files) : IClassFixture<Eco
         // Inside: not counted.
         _ = plant.CoolingCop(30, 20, 1, clamps);
         Assert.Equal(3.0, clamps.CoolingHours);
+
+        // An axis of one value is constant along it: never outside.
+        Assert.False(CoolingCopTable.Create([24, 35], [17], [4.0, 3.2]).IsOutside(30, 5));
+        Assert.True(CoolingCopTable.Create([24, 35], [17], [4.0, 3.2]).IsOutside(40, 17));
     }
 
     [Fact]

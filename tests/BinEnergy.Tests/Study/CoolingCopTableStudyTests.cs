@@ -1,0 +1,69 @@
+using BinEnergy.Core.Study;
+using BinEnergy.Tests.Weather;
+
+namespace BinEnergy.Tests.Study;
+
+/// <summary>
+/// The wet-bulb cooling COP table read from a study file and run on the Chicago check file (NREL
+/// TMY3, tmy3 map): the run warns about the coil hours outside the table, in the study's unit, and
+/// a flat table gives the compressor energy of the same constant COP.
+/// </summary>
+public sealed class CoolingCopTableStudyTests : IDisposable
+{
+    private readonly string folder = Directory.CreateTempSubdirectory("binenergy-cop-table-").FullName;
+
+    public void Dispose() => Directory.Delete(folder, recursive: true);
+
+    private StudyCaseResult Run(string plantLines)
+    {
+        string path = Path.Combine(folder, "study.toml");
+        File.WriteAllText(path, $"""
+            [study]
+            name = "cop table"
+            units = "ip"
+            [[climate]]
+            name = "chicago"
+            weather = "{TestData.Open("725300TYA.CSV").Replace("\\", "/", StringComparison.Ordinal)}"
+            map = "tmy3"
+            [schedule]
+            occupied = "Mon-Fri 07:00-19:00"
+            [ventilation]
+            airflow_cfm = 2000
+            heat_to_f = 75
+            cool_to_f = 75
+            max_rh_pct = 50
+            [economizer]
+            supply_airflow_cfm = 10000
+            min_outdoor_airflow_cfm = 2000
+            supply_temp_f = 55
+            return_temp_f = 75
+            return_rh_pct = 50
+            design_load_btuh = 216000
+            design_outdoor_f = 95
+            balance_point_f = 50
+            controls = ["differential-enthalpy"]
+            [plant]
+            heating_fuel = "electric"
+            cooling_cop = 3.0
+            {plantLines}
+            """);
+        return StudyRunner.Run(StudyFileReader.Read(path)).Cases[0];
+    }
+
+    [Fact]
+    public void NarrowTable_WarnsAboutTheHoursOutside_AndAFlatTableIsTheConstantCop()
+    {
+        // Invented table from 75 to 95 F outdoors and 60 to 70 F entering wet-bulb: Chicago's coil runs outside it.
+        var narrow = Run("cooling_cop_table_outdoor_f = [75, 95]\ncooling_cop_table_wetbulb_f = [60, 70]\ncooling_cop_table = [4.0, 3.6, 3.2, 2.9]");
+        Assert.Contains(narrow.Warnings, w => w.Contains("cooling COP table was held at its edges", StringComparison.Ordinal)
+            && w.Contains("outdoor 75 F to 95 F, entering wet-bulb 60 F to 70 F", StringComparison.Ordinal));
+        Assert.Contains(narrow.Case.Assumptions, a => a.Contains("wet-bulb table", StringComparison.Ordinal));
+
+        // A one-point table of 3.0 is the constant COP 3.0 of cooling_cop.
+        var flat = Run("cooling_cop_table_outdoor_f = [80]\ncooling_cop_table_wetbulb_f = [65]\ncooling_cop_table = [3.0]");
+        var constant = Run(string.Empty);
+        double expected = constant.Economizer!.Baseline.Totals.Hourly.Compressor.ElectricityJ;
+        Assert.Equal(expected, flat.Economizer!.Baseline.Totals.Hourly.Compressor.ElectricityJ, 1e-9 * expected);
+        Assert.DoesNotContain(flat.Warnings, w => w.Contains("cooling COP table", StringComparison.Ordinal));
+    }
+}
