@@ -52,33 +52,7 @@ public sealed class EconomizerPlantOptionsTests : IDisposable
         var command = JsonDocument.Parse(output).RootElement.GetProperty("controls");
 
         string study = Path.Combine(folder, "plant.toml");
-        File.WriteAllText(study, $"""
-            [study]
-            name = "plant"
-            units = "ip"
-            [[climate]]
-            name = "melbourne"
-            weather = "{Melbourne.Replace("\\", "/", StringComparison.Ordinal)}"
-            map = "tmy3"
-            [schedule]
-            occupied = "Mon-Fri 07:00-19:00"
-            [ventilation]
-            airflow_cfm = 2000
-            heat_to_f = 75
-            cool_to_f = 75
-            max_rh_pct = 50
-            [economizer]
-            supply_airflow_cfm = 10000
-            supply_airflow_min_cfm = 3000
-            min_outdoor_airflow_cfm = 2000
-            supply_temp_f = 55
-            return_temp_f = 75
-            return_rh_pct = 50
-            design_load_btuh = 216000
-            design_outdoor_f = 95
-            balance_point_f = 50
-            controls = ["differential-enthalpy"]
-            [plant]
+        File.WriteAllText(study, Study.ReferenceOfficeStudy.Text(Melbourne, "supply_airflow_min_cfm = 3000", """
             cooling_cop = 3.2
             heating_fuel = "heat-pump"
             heating_cop = 3
@@ -91,7 +65,7 @@ public sealed class EconomizerPlantOptionsTests : IDisposable
             humidifier = "steam-gas"
             humidifier_efficiency = 0.8
             price_electricity_per_kwh = 0.2
-            """);
+            """));
         string outDir = Path.Combine(folder, "out");
         var (runCode, _, runErr) = Cli("run", study, "--out", outDir);
         Assert.True(runCode == 0, runErr);

@@ -17,36 +17,7 @@ public sealed class CoolingCopTableStudyTests : IDisposable
     private StudyCaseResult Run(string plantLines)
     {
         string path = Path.Combine(folder, "study.toml");
-        File.WriteAllText(path, $"""
-            [study]
-            name = "cop table"
-            units = "ip"
-            [[climate]]
-            name = "chicago"
-            weather = "{TestData.Open("725300TYA.CSV").Replace("\\", "/", StringComparison.Ordinal)}"
-            map = "tmy3"
-            [schedule]
-            occupied = "Mon-Fri 07:00-19:00"
-            [ventilation]
-            airflow_cfm = 2000
-            heat_to_f = 75
-            cool_to_f = 75
-            max_rh_pct = 50
-            [economizer]
-            supply_airflow_cfm = 10000
-            min_outdoor_airflow_cfm = 2000
-            supply_temp_f = 55
-            return_temp_f = 75
-            return_rh_pct = 50
-            design_load_btuh = 216000
-            design_outdoor_f = 95
-            balance_point_f = 50
-            controls = ["differential-enthalpy"]
-            [plant]
-            heating_fuel = "electric"
-            cooling_cop = 3.0
-            {plantLines}
-            """);
+        File.WriteAllText(path, ReferenceOfficeStudy.Text(TestData.Open("725300TYA.CSV"), string.Empty, "heating_fuel = \"electric\"\ncooling_cop = 3.0\n" + plantLines));
         return StudyRunner.Run(StudyFileReader.Read(path)).Cases[0];
     }
 
