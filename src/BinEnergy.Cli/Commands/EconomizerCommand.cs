@@ -118,6 +118,78 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [CommandOption("--high-limit-dewpoint <T>")]
         [StudyKey("economizer", "high_limit_dewpoint", nameof(DisplayUnits.Temperature))]
         public double? HighLimitDewPoint { get; init; }
+
+        [CommandOption("--cooling-cop <COP>")]
+        [StudyKey("plant", "cooling_cop", Note = "One number here; a study file also takes outdoor-temperature pairs and a wet-bulb table. Needed with any plant option.")]
+        public double? CoolingCop { get; init; }
+
+        [CommandOption("--heating-fuel <FUEL>")]
+        [StudyKey("plant", "heating_fuel")]
+        public string? HeatingFuel { get; init; }
+
+        [CommandOption("--heating-efficiency <E>")]
+        [StudyKey("plant", "heating_efficiency")]
+        public double? HeatingEfficiency { get; init; }
+
+        [CommandOption("--heating-cop <COP>")]
+        [StudyKey("plant", "heating_cop")]
+        public double? HeatingCop { get; init; }
+
+        [CommandOption("--heating-capacity <Q>")]
+        [StudyKey("plant", "heating_capacity", nameof(DisplayUnits.Power))]
+        public double? HeatingCapacity { get; init; }
+
+        [CommandOption("--heat-pump-lockout <T>")]
+        [StudyKey("plant", "heat_pump_lockout", nameof(DisplayUnits.Temperature))]
+        public double? HeatPumpLockout { get; init; }
+
+        [CommandOption("--backup-fuel <FUEL>")]
+        [StudyKey("plant", "backup_fuel")]
+        public string? BackupFuel { get; init; }
+
+        [CommandOption("--backup-efficiency <E>")]
+        [StudyKey("plant", "backup_efficiency")]
+        public double? BackupEfficiency { get; init; }
+
+        [CommandOption("--defrost-below <T>")]
+        [StudyKey("plant", "defrost_below", nameof(DisplayUnits.Temperature))]
+        public double? DefrostBelow { get; init; }
+
+        [CommandOption("--defrost-penalty <PCT>")]
+        [StudyKey("plant", "defrost_penalty_pct")]
+        public double? DefrostPenalty { get; init; }
+
+        [CommandOption("--humidifier <TYPE>")]
+        [StudyKey("plant", "humidifier")]
+        public string? Humidifier { get; init; }
+
+        [CommandOption("--humidifier-efficiency <E>")]
+        [StudyKey("plant", "humidifier_efficiency")]
+        public double? HumidifierEfficiency { get; init; }
+
+        [CommandOption("--price-electricity <PRICE>")]
+        [StudyKey("plant", "price_electricity_per_kwh", Note = "Per kWh, for the cost columns.")]
+        public double? PriceElectricity { get; init; }
+
+        /// <summary>True when any option of the plant is given (then the command buys energy through a plant).</summary>
+        private bool HasPlant => HeatingFuel is not null || HeatingEfficiency is not null || HeatingCop is not null || HeatingCapacity is not null
+            || HeatPumpLockout is not null || BackupFuel is not null || BackupEfficiency is not null || DefrostBelow is not null
+            || DefrostPenalty is not null || Humidifier is not null || HumidifierEfficiency is not null || PriceElectricity is not null;
+
+        public override ValidationResult Validate()
+        {
+            if (HasPlant && CoolingCop is null)
+            {
+                return ValidationResult.Error("--cooling-cop is required with the plant options: the plant buys the coil energy at that COP");
+            }
+
+            if ((HasPlant || CoolingCop is not null) && HeatingEfficiency is null && (HeatingFuel is null or "gas" or "oil"))
+            {
+                return ValidationResult.Error($"--heating-efficiency is required for {HeatingFuel ?? "gas"} heating (the default --heating-fuel is gas): e.g. --heating-efficiency 0.85, or choose --heating-fuel electric or heat-pump");
+            }
+
+            return base.Validate();
+        }
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)

@@ -67,6 +67,12 @@ public sealed class EconomizerEvaluation
     /// <summary>True when compressor energy was bought through a plant.</summary>
     public bool HasPlant { get; }
 
+    /// <summary>
+    /// Occupied hours (hourly sum, baseline) in which the plant's cooling COP, outdoor curve or wet-bulb
+    /// table, was held at its end value outside the points given.
+    /// </summary>
+    public double CoolingClampHours { get; private init; }
+
     /// <summary>How many complete years the figures are the mean of (1 for a single or typical year).</summary>
     public int YearsAveraged { get; private init; } = 1;
 
@@ -83,6 +89,7 @@ public sealed class EconomizerEvaluation
         return new EconomizerEvaluation(Model, Weather, (int)Math.Round(OccupiedHours * f), bins, Baseline.Scaled(f), [.. Controls.Select(c => c.Scaled(f))], HasPlant)
         {
             YearsAveraged = years,
+            CoolingClampHours = CoolingClampHours * f,
         };
     }
 
@@ -197,7 +204,7 @@ public sealed class EconomizerEvaluation
             };
         }
 
-        return new EconomizerEvaluation(model, weather, occupiedHours, rows, results[0], results[1..], plant is not null);
+        return new EconomizerEvaluation(model, weather, occupiedHours, rows, results[0], results[1..], plant is not null) { CoolingClampHours = run.Clamps.CoolingHours };
     }
 
     /// <summary>The dew point of a bin's mean humidity ratio, in the record's convention (so a dew-point high limit reads it as the hours do).</summary>
@@ -237,7 +244,13 @@ public sealed class EconomizerEvaluation
         /// <summary>The hours in which a cooling COP was held at its end value (hourly method).</summary>
         public CurveClampCounter Clamps { get; } = new();
 
+        private readonly bool byWetBulb = plant?.CoolingCopUsesWetBulb == true;
+
         private double Cop(double t, double hours, CurveClampCounter counter) => plant?.CoolingCop(t, hours, counter) ?? 1.0;
+
+        /// <summary>The cooling COP of the plant's wet-bulb table at the outdoor dry-bulb and the coil-entering (mixed) wet-bulb (a fogged mix at its dry-bulb); 1 when the coil is off.</summary>
+        private double EnteringCop(in EconomizerHour r, double t, double hours, CurveClampCounter counter) =>
+            r.CoilRuns ? plant!.CoolingCop(t, HourlyStateSolver.WetBulb(r.MixedDryBulbC, r.MixedHumidityRatio, model.SitePressurePa), hours, counter) : 1.0;
 
         /// <summary>
         /// The hourly sum: every occupied hour under every control, into per-month and per-bin sums,
@@ -267,25 +280,17 @@ public sealed class EconomizerEvaluation
                 int bin = cells.DryBulbBinOfCell[cell];
                 cellStats[cell].Add(t[i], w[i], 1.0);
                 double qb = model.BuildingLoadW(t[i]);
-                if (qb <= 0)
-                {
-                    var none = model.NoCooling(t[i], w[i]);
-                    for (int c = 0; c < nc; c++)
-                    {
-                        monthly[c * 12 + month].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
-                        byBin[c * nb + bin].Add(in none, 1.0, plant, 1.0, t[i], Clamps);
-                    }
-
-                    continue;
-                }
-
-                double cop = Cop(t[i], 1.0, Clamps);
                 var baseline = model.AtMinimum(qb, t[i], w[i]);
+
+                // Clamped cooling COPs count in the hours the building needs cooling or the baseline coil runs
+                // (with a wet-bulb table: in the hours the baseline coil runs, at its entering state).
+                double cop = byWetBulb ? 1.0 : Cop(t[i], 1.0, qb > 0 || baseline.CoilRuns ? Clamps : ignored);
                 for (int c = 0; c < nc; c++)
                 {
                     var r = c == 0 ? baseline : model.Resolve(controls[c], qb, in baseline, t[i], w[i], h[i], dp[i]);
-                    monthly[c * 12 + month].Add(in r, 1.0, plant, cop, t[i], c == 0 ? Clamps : ignored);
-                    byBin[c * nb + bin].Add(in r, 1.0, plant, cop, t[i], ignored);
+                    double copR = byWetBulb ? EnteringCop(in r, t[i], 1.0, c == 0 ? Clamps : ignored) : cop;
+                    monthly[c * 12 + month].Add(in r, 1.0, plant, copR, t[i], c == 0 ? Clamps : ignored);
+                    byBin[c * nb + bin].Add(in r, 1.0, plant, copR, t[i], ignored);
                 }
             }
 
@@ -303,11 +308,12 @@ public sealed class EconomizerEvaluation
             double w = stats.MeanHumidityRatio;
             double h = MoistAir.Enthalpy(t, w);
             double dp = DewPointOf(w, model.SitePressurePa, over);
-            double cop = Cop(t, stats.Hours, clamps);
+            double cop = byWetBulb ? 1.0 : Cop(t, stats.Hours, clamps);
             for (int c = 0; c < controls.Length; c++)
             {
                 var r = model.Evaluate(controls[c], t, w, h, dp);
-                sums[offset + c].Add(in r, stats.Hours, plant, cop, t, clamps);
+                double copR = byWetBulb ? EnteringCop(in r, t, stats.Hours, clamps) : cop;
+                sums[offset + c].Add(in r, stats.Hours, plant, copR, t, clamps);
             }
         }
     }

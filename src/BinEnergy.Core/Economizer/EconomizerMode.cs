@@ -3,7 +3,11 @@ namespace BinEnergy.Core.Economizer;
 /// <summary>What the air system does in one occupied hour (DESIGN 8).</summary>
 public enum EconomizerMode
 {
-    /// <summary>The building load line is zero (outdoor at or below the balance point): no cooling needed.</summary>
+    /// <summary>
+    /// The building load line is zero (outdoor at or below the balance point): the building needs no
+    /// cooling, but the system still conditions its supply, so reheat, preheat and (mixed air above
+    /// the coil-leaving temperature) coil energy are counted in these hours too.
+    /// </summary>
     NoCooling,
 
     /// <summary>The economizer is enabled and the coil does not run: outdoor air alone meets the supply temperature.</summary>

@@ -12,7 +12,12 @@ namespace BinEnergy.Core.Economizer;
 /// dew point T_dp,o:</para>
 /// <list type="number">
 /// <item>Building sensible load Q_b from the load line (<see cref="BuildingLoadLine"/>); Q_b = 0
-/// gives the mode "no cooling" and no coil load.</item>
+/// (at or below the balance point) gives the mode "no cooling", but the system still conditions
+/// its supply as a real air handler does: the steps below run with Q_b = 0, so a variable-volume
+/// system at its minimum airflow and a constant-volume system at its fixed supply temperature
+/// reheat the supply to room temperature, cold mixed air is preheated, an enabled economizer
+/// mixes towards the coil-leaving temperature, and mixed air above it is cooled. The building's
+/// own heating load (envelope, below the balance point) is outside this evaluation.</item>
 /// <item>Supply mass flow and supply temperature by the system type (<see cref="AirSystemType"/>):
 /// variable volume m_s = Q_b / (c_p (T_r - T_set)) bounded to [rho V_min, rho V_max] at T_set (the set
 /// supply temperature, or its outdoor reset); single zone m_s = rho V_s at
@@ -147,11 +152,6 @@ public sealed class EconomizerModel
         double outdoorDewPointC)
     {
         double qb = BuildingLoadW(outdoorDryBulbC);
-        if (qb <= 0)
-        {
-            return NoCooling(outdoorDryBulbC, outdoorHumidityRatio);
-        }
-
         var baseline = AtMinimum(qb, outdoorDryBulbC, outdoorHumidityRatio);
         return Resolve(control, qb, in baseline, outdoorDryBulbC, outdoorHumidityRatio, outdoorEnthalpyJPerKg, outdoorDewPointC);
     }
@@ -165,13 +165,6 @@ public sealed class EconomizerModel
     public bool IsEnabled(EconomizerControl control, double outdoorDryBulbC, double outdoorEnthalpyJPerKg, double outdoorDewPointC) =>
         outdoorDryBulbC < _tR
         && control.HighLimitAllows(outdoorDryBulbC, outdoorEnthalpyJPerKg, outdoorDewPointC, _tR, ReturnEnthalpyJPerKg, Settings.Limits);
-
-    /// <summary>The no-cooling hour: minimum outdoor air at the smallest supply flow, no coil load.</summary>
-    internal EconomizerHour NoCooling(double tO, double wO)
-    {
-        var hour = AtMinimum(0.0, tO, wO);
-        return hour with { Mode = EconomizerMode.NoCooling, CoilSensibleW = 0.0, CoilLatentW = 0.0, ReheatW = 0.0, PreheatW = 0.0, UnmetW = 0.0 };
-    }
 
     /// <summary>
     /// Fan power at a supply mass flow, W: design power times the part-load curve at the flow
@@ -202,12 +195,14 @@ public sealed class EconomizerModel
         }
 
         var economizer = Enabled(qb, tO, wO);
-        if (!economizer.CoilRuns)
+        if (economizer.CoilRuns && !control.Integrated)
         {
-            return economizer with { Mode = EconomizerMode.FreeCooling };
+            return baseline;
         }
 
-        return control.Integrated ? economizer with { Mode = EconomizerMode.Integrated } : baseline;
+        // With no building load the mode stays "no cooling"; the supply is conditioned all the same.
+        return qb <= 0 ? economizer
+            : economizer with { Mode = economizer.CoilRuns ? EconomizerMode.Integrated : EconomizerMode.FreeCooling };
     }
 
     /// <summary>Minimum outdoor air (x = x_min): the baseline, or a disabled or locked-out economizer.</summary>
@@ -287,7 +282,8 @@ public sealed class EconomizerModel
         double delivered = ms * _cpReturn * (_tR - tSup);
         double excess = delivered - qb;
         double tolerance = 1e-9 * Math.Max(qb, 1.0);
-        return new EconomizerHour(EconomizerMode.MinimumOutdoorAir, x, tMix, wMix, hMix, wLeave, ms, sensible, latent)
+        var mode = qb > 0 ? EconomizerMode.MinimumOutdoorAir : EconomizerMode.NoCooling;
+        return new EconomizerHour(mode, x, tMix, wMix, hMix, wLeave, ms, sensible, latent)
         {
             SupplyDryBulbC = tSup,
             PreheatW = preheat,

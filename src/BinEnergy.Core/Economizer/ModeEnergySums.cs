@@ -38,7 +38,7 @@ internal struct ModeEnergySums
         {
             case EconomizerMode.NoCooling:
                 _noCooling += hours;
-                return;
+                break;
             case EconomizerMode.FreeCooling:
                 _free += hours;
                 break;

@@ -45,6 +45,29 @@ public sealed class PlantModel(PlantSettings settings)
         return Settings.CoolingCop.Evaluate(outdoorC);
     }
 
+    /// <summary>True when the cooling COP depends on the coil-entering wet-bulb (<see cref="PlantSettings.CoolingCopByWetBulb"/>).</summary>
+    public bool CoolingCopUsesWetBulb => Settings.CoolingCopByWetBulb is not null;
+
+    /// <summary>
+    /// The cooling COP at an outdoor dry-bulb and a coil-entering wet-bulb: the two-axis table when
+    /// the plant has one (held at its edges outside it, and counted for <paramref name="hours"/>),
+    /// else the outdoor curve.
+    /// </summary>
+    public double CoolingCop(double outdoorC, double enteringWetBulbC, double hours, CurveClampCounter clamps)
+    {
+        if (Settings.CoolingCopByWetBulb is not { } table)
+        {
+            return CoolingCop(outdoorC, hours, clamps);
+        }
+
+        if (table.IsOutside(outdoorC, enteringWetBulbC))
+        {
+            clamps.CoolingHours += hours;
+        }
+
+        return table.Evaluate(outdoorC, enteringWetBulbC);
+    }
+
     /// <summary>Energy bought to meet a heating load.</summary>
     /// <param name="heatingJ">Heating delivered to the air, J.</param>
     /// <param name="outdoorC">Outdoor dry-bulb, C (for a heat pump's COP).</param>

@@ -33,6 +33,12 @@ public sealed record PlantSettings(
     /// </summary>
     public const double SteamJoulesPerKilogram = 2_630_000.0;
 
+    /// <summary>
+    /// Optional cooling COP against outdoor dry-bulb and coil-entering wet-bulb; where the coil's
+    /// entering state is known (the economizer's mixed air) it replaces <see cref="CoolingCop"/>.
+    /// </summary>
+    public CoolingCopTable? CoolingCopByWetBulb { get; init; }
+
     /// <summary>The humidifier type (default steam-electric).</summary>
     public HumidifierType Humidifier { get; init; } = HumidifierType.SteamElectric;
 

@@ -14,7 +14,11 @@ internal static class PlantSettingsBuilder
     /// <summary>Default COP lost while a heat pump defrosts, % (recalled from memory).</summary>
     public const double DefaultDefrostPenaltyPct = 10.0;
 
-    public static PlantSettings Build(StudySection plant, List<string> assumptions)
+    /// <summary>Builds the plant of a variant.</summary>
+    /// <param name="plant">The [plant] table.</param>
+    /// <param name="assumptions">Where defaults taken are listed.</param>
+    /// <param name="designAirflow">The design airflow a capacity per unit of airflow multiplies, m3/s, and where it comes from (for messages).</param>
+    public static PlantSettings Build(StudySection plant, List<string> assumptions, (double CubicMetresPerSecond, string Source) designAirflow)
     {
         string fuel = plant.Text("heating_fuel") ?? "gas";
         var heating = fuel switch
@@ -80,10 +84,11 @@ internal static class PlantSettingsBuilder
             assumptions.Add(FormattableString.Invariant($"gas steam humidifier efficiency {DefaultGasSteamEfficiency} (plant.humidifier_efficiency not given; recalled from memory)"));
         }
 
-        string[] heatPumpKeys = ["heating_capacity", "heat_pump_lockout", "backup_fuel", "backup_efficiency", "defrost_below", "defrost_penalty_pct"];
+        string[] heatPumpKeys = ["heating_capacity", "heating_capacity_per_airflow", "heat_pump_lockout", "backup_fuel", "backup_efficiency", "defrost_below", "defrost_penalty_pct"];
         if (heating != HeatingSource.HeatPump && heatPumpKeys.FirstOrDefault(plant.Has) is string hpKey)
         {
-            throw plant.ErrorAt(hpKey, $"{hpKey} applies to heating_fuel = \"heat-pump\" only, not \"{fuel}\"; remove it or change the fuel");
+            string written = plant.Get(hpKey)?.WrittenKey ?? hpKey;
+            throw plant.ErrorAt(hpKey, $"{written} applies to heating_fuel = \"heat-pump\" only, not \"{fuel}\"; remove it or change the fuel");
         }
 
         var backup = plant.Text("backup_fuel") switch
@@ -110,7 +115,8 @@ internal static class PlantSettingsBuilder
         return new PlantSettings(heating, efficiency, heatPump, cooling, fan, humidifierEfficiency, tariffs)
         {
             Humidifier = humidifier,
-            HeatPumpCapacity = Curve(plant, "heating_capacity"),
+            HeatPumpCapacity = Capacity(plant, assumptions, designAirflow),
+            CoolingCopByWetBulb = WetBulbTable(plant, assumptions),
             HeatPumpLockout = plant.Number("heat_pump_lockout") is double lockout ? Units.Temperature.FromCelsius(lockout) : null,
             Backup = backup,
             BackupEfficiency = plant.Number("backup_efficiency") ?? 1.0,
@@ -120,14 +126,76 @@ internal static class PlantSettingsBuilder
         };
     }
 
-    private static PerformanceCurve? Curve(StudySection plant, string name)
+    /// <summary>
+    /// The optional cooling COP table against outdoor dry-bulb and coil-entering wet-bulb: its two
+    /// axes and its COPs row by row, all three or none.
+    /// </summary>
+    private static CoolingCopTable? WetBulbTable(StudySection plant, List<string> assumptions)
+    {
+        string[] keys = ["cooling_cop_table_outdoor", "cooling_cop_table_wetbulb", "cooling_cop_table"];
+        string[] spellings = ["cooling_cop_table_outdoor_f (or _c)", "cooling_cop_table_wetbulb_f (or _c)", "cooling_cop_table"];
+        var given = keys.Where(plant.Has).ToList();
+        if (given.Count == 0)
+        {
+            return null;
+        }
+
+        if (given.Count < keys.Length)
+        {
+            string missing = string.Join(" and ", keys.Select((k, i) => (k, i)).Where(p => !plant.Has(p.k)).Select(p => spellings[p.i]));
+            throw plant.ErrorAt(given[0], $"the cooling COP table needs its outdoor temperatures, its wet-bulbs and its COPs: {missing} is missing");
+        }
+
+        try
+        {
+            var table = CoolingCopTable.Create(plant.NumberList(keys[0])!, plant.NumberList(keys[1])!, plant.NumberList(keys[2])!);
+            assumptions.Add("the economizer's coil buys its compressor energy at the COP of the wet-bulb table, at the outdoor dry-bulb and the coil-entering (mixed) wet-bulb; the outdoor-air loads use cooling_cop at the outdoor temperature");
+            return table;
+        }
+        catch (ArgumentException e)
+        {
+            string key = e.Message.Contains("outdoor temperatures", StringComparison.Ordinal) ? keys[0]
+                : e.Message.Contains("wet-bulb temperatures", StringComparison.Ordinal) ? keys[1] : keys[2];
+            throw plant.ErrorAt(key, e.Message);
+        }
+    }
+
+    /// <summary>
+    /// The heat pump's capacity curve, W: <c>heating_capacity</c> as written, or
+    /// <c>heating_capacity_per_airflow</c> (W per m3/s) times the design airflow; not both.
+    /// </summary>
+    private static PerformanceCurve? Capacity(StudySection plant, List<string> assumptions, (double CubicMetresPerSecond, string Source) designAirflow)
+    {
+        const string perAirflow = "heating_capacity_per_airflow";
+        if (!plant.Has(perAirflow))
+        {
+            return Curve(plant, "heating_capacity");
+        }
+
+        if (plant.Has("heating_capacity"))
+        {
+            throw plant.ErrorAt(perAirflow, $"give the heat pump's capacity once: either as heating_capacity (absolute) or per unit of airflow ({plant.Get(perAirflow)!.WrittenKey}), not both");
+        }
+
+        double v = designAirflow.CubicMetresPerSecond;
+        if (!(v > 0))
+        {
+            throw plant.ErrorAt(perAirflow, $"a capacity per unit of airflow needs a design airflow above zero, but {designAirflow.Source} is zero: give heating_capacity (absolute) instead");
+        }
+
+        assumptions.Add(FormattableString.Invariant(
+            $"heat-pump heating capacity per unit of airflow times {designAirflow.Source}, {v / Units.Conversions.CubicMetresPerSecondPerCfm:N0} cfm ({v * 1000:N0} L/s)"));
+        return Curve(plant, perAirflow, v);
+    }
+
+    private static PerformanceCurve? Curve(StudySection plant, string name, double scale = 1.0)
     {
         var v = plant.Get(name);
         return v?.Value switch
         {
             null => null,
-            double cop => PerformanceCurve.Constant(cop),
-            List<(double OutdoorC, double Value)> points => PerformanceCurve.Create(points),
+            double cop => PerformanceCurve.Constant(cop * scale),
+            List<(double OutdoorC, double Value)> points => PerformanceCurve.Create(points.Select(p => (p.OutdoorC, p.Value * scale))),
             _ => throw new InvalidOperationException("unexpected curve value"),
         };
     }

@@ -38,7 +38,7 @@ public static class StudyCaseBuilder
             BinPoint = s["study"].Text("bin_point") is "midpoint" or "mid" ? BinEvaluationPoint.Midpoint : BinEvaluationPoint.MeanDryBulb,
         };
         var scale = Scale(study, s["study"]);
-        var plant = s["plant"].Present ? PlantSettingsBuilder.Build(s["plant"], assumptions) : null;
+        var plant = s["plant"].Present ? PlantSettingsBuilder.Build(s["plant"], assumptions, DesignAirflow(s["economizer"], outdoorAir)) : null;
         if (plant is null)
         {
             assumptions.Add("no [plant] table: loads only; no energy bought, cost or carbon");
@@ -47,6 +47,15 @@ public static class StudyCaseBuilder
         var economizer = EconomizerSettingsBuilder.Build(s["economizer"], outdoorAir, schedule, assumptions, s["plant"]);
         return new StudyCase(study.Climates[0], variant, outdoorAir, scale, plant, assumptions) { Economizer = economizer };
     }
+
+    /// <summary>
+    /// The design airflow a heat-pump capacity per unit of airflow multiplies, m3/s: the air system's
+    /// supply airflow when the study has an enabled [economizer], else the ventilation airflow.
+    /// </summary>
+    private static (double CubicMetresPerSecond, string Source) DesignAirflow(StudySection economizer, OutdoorAirSettings outdoorAir) =>
+        economizer.Present && economizer.Bool("enabled") != false && economizer.Number("supply_airflow") is double supply
+            ? (supply, "economizer.supply_airflow")
+            : ((outdoorAir.Airflow ?? outdoorAir.Ventilation?.OutdoorAirflow)?.CubicMetresPerSecond ?? 0.0, "the ventilation airflow");
 
     private static OccupancySchedule Schedule(StudySection schedule)
     {

@@ -3,11 +3,12 @@ namespace BinEnergy.Core.Study;
 /// <summary>What the study schema says about a key, for the help of the command-line options that set it.</summary>
 public static class StudyKeys
 {
-    /// <summary>The description and documented default (null when the key has none) of <c>[table] key</c>.</summary>
+    /// <summary>The description and documented default (null when the key has none) of <c>[table] key</c>, named without its unit or as one of its spellings.</summary>
     /// <exception cref="KeyNotFoundException">The schema has no such key.</exception>
     public static (string Description, string? Default) Describe(string table, string key)
     {
-        var def = StudySchema.Get(table).Keys.FirstOrDefault(k => k.Name == key) ?? throw new KeyNotFoundException($"[{table}] {key}");
+        var section = StudySchema.Get(table);
+        var def = section.Keys.FirstOrDefault(k => k.Name == key) ?? section.Find(key)?.Definition ?? throw new KeyNotFoundException($"[{table}] {key}");
         return (def.Description, def.DefaultText);
     }
 

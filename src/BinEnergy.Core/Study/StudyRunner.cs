@@ -129,6 +129,12 @@ public static class StudyRunner
                 $"The cooling COP was held at its end value for {result.Clamps.CoolingHours:0} cooling hours outside the points given ({Show(ps.CoolingCop.MinOutdoorC, c)} to {Show(ps.CoolingCop.MaxOutdoorC, c)}): add points to cover them."));
         }
 
+        if (c.Plant?.CoolingCopByWetBulb is { } table && economizer?.CoolingClampHours > 0)
+        {
+            warnings.Add(FormattableString.Invariant(
+                $"The economizer's cooling COP table was held at its edges for {economizer.CoolingClampHours:0} coil hours outside it (outdoor {Show(table.OutdoorC[0], c)} to {Show(table.OutdoorC[^1], c)}, entering wet-bulb {Show(table.WetBulbC[0], c)} to {Show(table.WetBulbC[^1], c)}): add rows or columns to cover them."));
+        }
+
         if (result.Clamps.HeatingHours > 0)
         {
             warnings.Add(FormattableString.Invariant(

@@ -142,7 +142,7 @@ internal static class StudySchema
 
         new("plant", false,
         [
-            Choice("heating_fuel", ["gas", "oil", "electric", "heat-pump"], "gas", "What heats."),
+            Choice("heating_fuel", ["gas", "oil", "electric", "heat-pump"], "gas", "What heats (the outdoor air, reheat and preheat): gas, oil, electric or heat-pump."),
             new KeyDefinition("heating_efficiency", ValueKind.Number, Unitless("heating_efficiency"), "Seasonal efficiency of a gas, oil or electric heater.")
             { Min = 0, MinExclusive = true, Max = 1.2, DefaultText = "1.0 for electric; required for gas and oil", RangeHint = "an efficiency above 0 and at most 1.2" },
             new KeyDefinition("heating_cop", ValueKind.NumberOrPoints, Rating("heating_cop", (v, _) => v), "Heat-pump COP: one number, or [outdoor temperature, COP] pairs.")
@@ -155,6 +155,14 @@ internal static class StudySchema
                 new("heating_capacity_kw_c", "kW", (v, _) => v * 1000.0, (t, _) => t),
             ], "Heat-pump heating capacity: one number, or [outdoor temperature, capacity] pairs; the backup carries the rest.")
             { Min = 0, Max = 1e8, PointXRange = (-50, 40), DefaultText = "no limit" },
+            new KeyDefinition("heating_capacity_per_airflow", ValueKind.NumberOrPoints,
+            [
+                new("heating_capacity_btuh_per_cfm", "Btu/h per cfm", (v, _) => Units.Power.FromBtuPerHour(v).Watts / Conversions.CubicMetresPerSecondPerCfm, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_btuh_per_cfm_f", "Btu/h per cfm", (v, _) => Units.Power.FromBtuPerHour(v).Watts / Conversions.CubicMetresPerSecondPerCfm, (t, _) => Conversions.FahrenheitToCelsius(t)),
+                new("heating_capacity_w_per_ls", "W per L/s", (v, _) => v * 1000.0, (t, u) => u == UnitSystem.IP ? Conversions.FahrenheitToCelsius(t) : t),
+                new("heating_capacity_w_per_ls_c", "W per L/s", (v, _) => v * 1000.0, (t, _) => t),
+            ], "Heat-pump heating capacity per unit of design airflow (the economizer's supply_airflow, else the ventilation airflow), instead of heating_capacity: one number, or [outdoor temperature, capacity] pairs.")
+            { Min = 0, Max = 1e6, PointXRange = (-50, 40), DefaultText = "no limit", RangeHint = "0 to 1,600 Btu/h per cfm (1,000 W per L/s)" },
             new KeyDefinition("heat_pump_lockout", ValueKind.Number, Temperature("heat_pump_lockout"), "Below this outdoor temperature the heat pump is off and the backup heats.")
             { Min = -50, Max = 20, DefaultText = "none" },
             Choice("backup_fuel", ["electric", "gas", "oil"], "electric", "The heat pump's backup heat: electric resistance, gas or oil."),
@@ -171,6 +179,13 @@ internal static class StudySchema
                 .. Rating("cooling_kw_per_ton", (v, _) => CoolingRating.CopFromKilowattsPerTon(v)),
             ], "Cooling efficiency: COP, EER or kW/ton; one number, or [outdoor temperature, value] pairs.")
             { Min = 0, MinExclusive = true, Max = 15, PointXRange = (-10, 60), RangeHint = "a COP above 0 and at most 15" },
+            new KeyDefinition("cooling_cop_table_outdoor", ValueKind.NumberList, Temperature("cooling_cop_table_outdoor"), "Optional COP table: the outdoor dry-bulbs of its rows, ascending.")
+            { Min = -10, Max = 60, DefaultText = "no table", RangeHint = "-10 to 60 C (14 to 140 F)" },
+            new KeyDefinition("cooling_cop_table_wetbulb", ValueKind.NumberList, Temperature("cooling_cop_table_wetbulb"), "Optional COP table: the coil-entering wet-bulbs of its columns, ascending.")
+            { Min = -10, Max = 40, DefaultText = "no table", RangeHint = "-10 to 40 C (14 to 104 F)" },
+            new KeyDefinition("cooling_cop_table", ValueKind.NumberList, Unitless("cooling_cop_table"),
+                "Optional cooling COPs row by row (one row per outdoor temperature, one value per wet-bulb), interpolated bilinearly; used for the economizer's coil at its entering (mixed) state.")
+            { Min = 0, MinExclusive = true, Max = 15, DefaultText = "no table: cooling_cop at the outdoor temperature", RangeHint = "a COP above 0 and at most 15" },
             new KeyDefinition("fan_efficiency", ValueKind.Number, Unitless("fan_efficiency"), "Total fan efficiency for the fan energy of pressure drops.")
             { Min = 0, MinExclusive = true, Max = 1, DefaultText = "0.6" },
             Choice("humidifier", ["steam-electric", "steam-gas", "adiabatic"], "steam-electric",

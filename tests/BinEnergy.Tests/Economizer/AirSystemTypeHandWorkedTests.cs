@@ -242,4 +242,71 @@ public class AirSystemTypeHandWorkedTests
         Close(1_000 * FanPartLoadCurve.Default.Fraction(0.3), idle.FanW);
         Assert.Equal(0.0, idle.CoilTotalW);
     }
+
+    [Fact]
+    public void BelowTheBalancePoint_VariableVolume_PreheatsTheMixAndReheatsTheMinimumAirflow()
+    {
+        // T_o = 5 C < T_bal = 10 C: Q_b = 0, mode "no cooling", but the system still supplies 13 C air at its minimum.
+        // m = 0.3 x 1.201385 = 0.3604154 kg/s; x_min = 1.201385 x 0.2 / 0.3604154 = 0.666667.
+        // T_mix = 0.666667 x 5 + 0.333333 x 24 = 11.33333 C < 13 C; W_mix = 0.666667 x 0.003 + 0.333333 x W_r = 0.00509950.
+        // Preheat = 0.3604154 x (1006 + 1860 x 0.0050995)(13 - 11.33333) = 0.3604154 x 1015.4851 x 1.66667 = 610.0 W.
+        // Reheat to room temperature (the zones need no cooling): 0.3604154 x 1023.2952 x (24 - 13) = 4,056.9 W. Coil 0.
+        var m = Model(AirSystemType.VariableVolume);
+        double ms = 0.3 * MassFlow;
+        double x = MassFlow * 0.2 / ms;
+        double wMix = x * 0.003 + (1 - x) * Wr;
+        double tMix = x * 5 + (1 - x) * 24;
+        foreach (var c in new[] { EconomizerControl.None, Differential })
+        {
+            // The economizer would mix to (24 - 13)/(24 - 5) = 0.579 < x_min: it stays at the minimum, the same hour.
+            var h = Hour(m, c, 5, 0.003);
+            Assert.Equal(EconomizerMode.NoCooling, h.Mode);
+            Close(x, h.OutdoorFraction);
+            Close(ms * Cp(wMix) * (13 - tMix), h.PreheatW);
+            Assert.InRange(h.PreheatW, 609, 611);
+            Close(ms * CpR * 11, h.ReheatW);
+            Assert.InRange(h.ReheatW, 4_055, 4_059);
+            Assert.Equal(0.0, h.CoilTotalW);
+        }
+    }
+
+    [Fact]
+    public void BelowTheBalancePoint_ConstantVolumeReheat_CoolsAndReheats_AndTheEconomizerSavesTheCoil()
+    {
+        // T_o = 8 C, W_o = 0.004: Q_b = 0. Baseline x = 0.2: T_mix = 0.2 x 8 + 0.8 x 24 = 20.8 C, above T_s = 13 C:
+        // W_mix = 0.2 x 0.004 + 0.8 x W_r = 0.00823880 (below W_lim at 13 C, 90 % RH, about 0.00839: no latent).
+        // Coil sensible = 1.201385 x (1006 + 1860 x 0.0082388) x 7.8 = 1.201385 x 1021.3242 x 7.8 = 9,570.6 W.
+        // Reheat = 1.201385 x 1023.2952 x 11 = 13,523.2 W (all of the supply's cooling, since the zones need none).
+        var m = Model(AirSystemType.ConstantVolumeReheat);
+        double wMix = 0.2 * 0.004 + 0.8 * Wr;
+        var b = Hour(m, EconomizerControl.None, 8, 0.004);
+        Assert.Equal(EconomizerMode.NoCooling, b.Mode);
+        Close(MassFlow * Cp(wMix) * 7.8, b.CoilSensibleW);
+        Assert.InRange(b.CoilSensibleW, 9_568, 9_573);
+        Assert.Equal(0.0, b.CoilLatentW);
+        Close(MassFlow * CpR * 11, b.ReheatW);
+        Assert.InRange(b.ReheatW, 13_521, 13_525);
+
+        // The economizer mixes to 13 C, x = (24 - 13)/(24 - 8) = 0.6875: no coil; the reheat is the same.
+        var e = Hour(m, Differential, 8, 0.004);
+        Assert.Equal(EconomizerMode.NoCooling, e.Mode);
+        Close(11.0 / 16.0, e.OutdoorFraction);
+        Assert.Equal(0.0, e.CoilTotalW);
+        Close(b.ReheatW, e.ReheatW);
+    }
+
+    [Fact]
+    public void BelowTheBalancePoint_SingleZone_SuppliesRoomTemperature_AndPreheatsOnly()
+    {
+        // T_o = 5 C: Q_b = 0, T_sup = 24 - 0 = 24 C (the supply follows the load line to room temperature).
+        // x = 0.2: T_mix = 0.2 x 5 + 0.8 x 24 = 20.2 C; W_mix = 0.2 x 0.003 + 0.8 x W_r = 0.00803880.
+        // Preheat = 1.201385 x (1006 + 1860 x 0.0080388)(24 - 20.2) = 1.201385 x 1020.9522 x 3.8 = 4,660.9 W; no reheat, no coil.
+        var h = Hour(Model(AirSystemType.SingleZone), EconomizerControl.None, 5, 0.003);
+        Assert.Equal(EconomizerMode.NoCooling, h.Mode);
+        Close(24, h.SupplyDryBulbC);
+        Close(MassFlow * Cp(0.2 * 0.003 + 0.8 * Wr) * 3.8, h.PreheatW);
+        Assert.InRange(h.PreheatW, 4_659, 4_663);
+        Assert.Equal(0.0, h.ReheatW);
+        Assert.Equal(0.0, h.CoilTotalW);
+    }
 }

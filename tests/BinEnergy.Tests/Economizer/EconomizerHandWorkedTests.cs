@@ -236,13 +236,22 @@ public class EconomizerHandWorkedTests
     }
 
     [Fact]
-    public void BelowBalancePoint_NoCoolingNeeded()
+    public void BelowBalancePoint_NoCoolingNeeded_ButTheSupplyIsStillConditioned()
     {
-        // T_o = 5 C < T_bal = 10 C: Q_b = 0, mode "no cooling", no coil load, for every control.
-        foreach (var c in EconomizerTestSystems.AllControls(true).Append(EconomizerControl.None))
+        // T_o = 5 C < T_bal = 10 C: Q_b = 0, mode "no cooling" for every control. This system (constant volume with
+        // reheat) still supplies 13 C air: without an economizer x = 0.2, T_mix = 0.2 x 5 + 0.8 x 24 = 20.2 C and
+        // W_mix = 0.2 x 0.003 + 0.8 x 0.0092985052 = 0.0080388042 (below W_lim, no latent), so the coil cools
+        // 1.2013848 x (1006 + 1860 x 0.0080388042) x 7.2 = 1.2013848 x 1020.9522 x 7.2 = 8,831.1 W.
+        // Every economizer control is enabled (5 C is under each limit) and mixes to 13 C: x = 11/19, no coil.
+        var b = Hour(EconomizerControl.None, 5.0, 0.003);
+        Assert.Equal(EconomizerMode.NoCooling, b.Mode);
+        Close(1.2013848 * (1006 + 1860 * 0.0080388042) * 7.2, b.CoilSensibleW, 2e-6);
+        Assert.InRange(b.CoilSensibleW, 8_829, 8_833);
+        foreach (var c in EconomizerTestSystems.AllControls(true))
         {
             var h = Hour(c, 5.0, 0.003);
             Assert.Equal(EconomizerMode.NoCooling, h.Mode);
+            Close(11.0 / 19.0, h.OutdoorFraction);
             Assert.Equal(0.0, h.CoilTotalW);
         }
     }

@@ -229,7 +229,8 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
         // Albuquerque, raw dry-bulb column (field 31 of the TMY3 layout, Wilcox and Marion 2008) parsed here
         // without the reader. Constant-volume, standard-basis variant of the reference system, so
         // m_s = 10,000 cfm x 0.075 lb/ft3 (common practice) and x = 0.2; the sensible coil energy is
-        // sum over occupied hours above the 50 F balance point of m_s (1006 + 1860 W_mix)(T_mix - T_s)^+,
+        // sum over every occupied hour (below the 50 F balance point too: a constant-volume system still cools its mix to
+        // T_s and reheats) of m_s (1006 + 1860 W_mix)(T_mix - T_s)^+,
         // with W_mix taken from the reader (humidity is not what this check is about).
         var w = files.Weather[Albuquerque];
         var occ = files.Occupied[Albuquerque];
@@ -240,13 +241,13 @@ public class EconomizerRealFileTests(EconomizerRealFiles files, ITestOutputHelpe
         var settings = EconomizerRealFiles.Reference(true) with { System = AirSystemType.ConstantVolumeReheat, SupplyAirflowMin = null, FlowBasis = Core.Psychrometrics.FlowBasis.Standard };
         var model = new EconomizerModel(settings, w.Site.SitePressurePa);
         double ms = 10_000 * 0.3048 * 0.3048 * 0.3048 / 60 * (0.075 * 0.45359237 / (0.3048 * 0.3048 * 0.3048)); // kg/s, 0.075 lb/ft3 (common practice)
-        double ts = (55 - 32) / 1.8, tr = (75 - 32) / 1.8, tbal = (50 - 32) / 1.8;
+        double ts = (55 - 32) / 1.8, tr = (75 - 32) / 1.8;
         double joules = 0;
         for (int i = 0; i < w.Count; i++)
         {
             // Row i + 2 holds the hour ending at i + 1, which the reader shifts to the hour beginning at i.
             double t = double.Parse(lines[i + 2].Split(',')[col], System.Globalization.CultureInfo.InvariantCulture);
-            if (!occ[i] || t <= tbal)
+            if (!occ[i])
             {
                 continue;
             }

@@ -51,7 +51,22 @@ public sealed class StudyFileErrorTests : IDisposable
             "an adiabatic humidifier has no efficiency here");
         var capacity = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nheating_capacity_btuh = 120000");
         Add("heat-pump capacity on a gas plant", (capacity.Text, ExampleStudy.LineOf(capacity.Text, "heating_capacity_btuh")), "key plant.heating_capacity_btuh",
-            "heating_capacity applies to heating_fuel = \"heat-pump\" only");
+            "heating_capacity_btuh applies to heating_fuel = \"heat-pump\" only");
+        var perCfmOnGas = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nheating_capacity_w_per_ls = 10");
+        Add("heat-pump capacity per airflow on a gas plant", (perCfmOnGas.Text, ExampleStudy.LineOf(perCfmOnGas.Text, "heating_capacity_w_per_ls")), "key plant.heating_capacity_w_per_ls",
+            "heating_capacity_w_per_ls applies to heating_fuel = \"heat-pump\" only");
+        var bothCapacities = ExampleStudy.ReplaceLine("heating_fuel = \"gas\"", "heating_fuel = \"heat-pump\"\nheating_cop = 3.0\nheating_capacity_btuh = 120000\nheating_capacity_btuh_per_cfm = 12");
+        Add("heat-pump capacity given absolute and per airflow", (bothCapacities.Text, ExampleStudy.LineOf(bothCapacities.Text, "heating_capacity_btuh_per_cfm")), "key plant.heating_capacity_btuh_per_cfm",
+            "either as heating_capacity (absolute) or per unit of airflow (heating_capacity_btuh_per_cfm), not both");
+        var partTable = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\ncooling_cop_table_outdoor_f = [75, 95]\ncooling_cop_table = [4.0, 3.6, 3.2, 2.9]");
+        Add("cooling COP table without its wet-bulbs", (partTable.Text, ExampleStudy.LineOf(partTable.Text, "cooling_cop_table_outdoor_f")), "key plant.cooling_cop_table_outdoor_f",
+            "cooling_cop_table_wetbulb_f (or _c) is missing");
+        var shortTable = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\ncooling_cop_table_outdoor_f = [75, 95]\ncooling_cop_table_wetbulb_f = [62, 72]\ncooling_cop_table = [4.0, 3.6, 3.2]");
+        Add("cooling COP table one value short", (shortTable.Text, ExampleStudy.LineOf(shortTable.Text, "cooling_cop_table =")), "key plant.cooling_cop_table",
+            "the table needs 2 x 2 = 4 COPs (one row per outdoor temperature, one value per wet-bulb), not 3");
+        var fallingTable = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\ncooling_cop_table_outdoor_f = [75, 95]\ncooling_cop_table_wetbulb_f = [72, 62]\ncooling_cop_table = [4.0, 3.6, 3.2, 2.9]");
+        Add("cooling COP table with falling wet-bulbs", (fallingTable.Text, ExampleStudy.LineOf(fallingTable.Text, "cooling_cop_table_wetbulb_f")), "key plant.cooling_cop_table_wetbulb_f",
+            "the wet-bulb temperatures must rise strictly");
         Replace("misspelled table", "[plant]", "[plnat]", "key plnat", "unknown table [plnat]; did you mean [plant]?");
         Replace("number written as text", "airflow_cfm = 2000", "airflow_cfm = \"2000\"", "key ventilation.airflow_cfm", "write the number without quotes: airflow_cfm = 2000");
         Replace("misspelled choice", "flow_basis = \"site\"", "flow_basis = \"sight\"", "key ventilation.flow_basis", "\"sight\" is not one of \"site\", \"standard\", \"actual\"; did you mean \"site\"?");
