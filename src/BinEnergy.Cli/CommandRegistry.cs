@@ -77,6 +77,11 @@ internal static class CommandRegistry
             .WithExample("run", "harbor-study.toml")
             .WithExample("run", "harbor-study.toml", "--out", "reports/harbor", "--hourly", "--force");
 
+        Add<BatchReportCommand>("batch-report")
+            .WithData(output)
+            .WithDescription("The cross-climate report of a batch output folder: every shard's tables into report.html and summary.json.")
+            .WithExample("batch-report", "reports/national");
+
         Add<DemoCommand>("demo")
             .WithData(output)
             .WithDescription("Runs the bundled demo study (invented climates, four ventilation options, economizer comparison) into reports/demo/.")
