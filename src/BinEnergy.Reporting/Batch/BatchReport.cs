@@ -393,6 +393,15 @@ public sealed class BatchReport
         var high = rows.Where(i => ranking["end"].Texts[i] == "highest").ToList();
         var low = rows.Where(i => ranking["end"].Texts[i] == "lowest").ToList();
         string V(int i) => ranking["value"].Numbers[i].ToString("N0", CultureInfo.InvariantCulture);
+        var highNames = high.Select(i => ranking["climate"].Texts[i]).ToHashSet(StringComparer.Ordinal);
+        if (low.Any(i => highNames.Contains(ranking["climate"].Texts[i])))
+        {
+            // Twenty climates or fewer: the two ends overlap and together hold every climate, so one list, highest first.
+            var all = high.Concat(low.AsEnumerable().Reverse().Where(i => !highNames.Contains(ranking["climate"].Texts[i]))).ToList();
+            return new ReportTable($"{f.Label}, {variant}: every climate, highest first ({f.Unit})", ["Rank", "Climate", $"{f.Label} ({f.Unit})"],
+                all.Select((i, k) => (IReadOnlyList<string>)[(k + 1).ToString(CultureInfo.InvariantCulture), ranking["climate"].Texts[i], V(i)]).ToList());
+        }
+
         var cells = Enumerable.Range(0, Math.Max(high.Count, low.Count)).Select(k => (IReadOnlyList<string>)
         [
             (k + 1).ToString(CultureInfo.InvariantCulture),

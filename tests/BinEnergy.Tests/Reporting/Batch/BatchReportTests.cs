@@ -161,6 +161,12 @@ public sealed class BatchReportTests : IDisposable
         // Heating, sensible and latent cooling and cost (the study humidifies nothing and gives no carbon factors, so those
         // figures are zero everywhere and left out): four distributions and five scatters (cost against both degree-days).
         Assert.Equal(9, doc.QuerySelectorAll("figure.chart img").Length);
+
+        // Ten climates: the highest and lowest ten overlap, so each figure and variant gets one list of all ten, highest first.
+        var heating = doc.QuerySelectorAll("table").Single(t => t.QuerySelector("caption")?.TextContent == "Heating, recovery: every climate, highest first (kBtu)");
+        var names = heating.QuerySelectorAll("tbody tr").Select(r => r.Children[1].TextContent).ToList();
+        Assert.Equal(CrossClimateStudy.Climates.Count, names.Distinct().Count());
+        Assert.Equal("tmy3-703165", names[0]);
         Directory.CreateDirectory(ChartReview.Folder);
         File.WriteAllText(Path.Combine(ChartReview.Folder, "..", "batch-report-sample.html"), html);
 
