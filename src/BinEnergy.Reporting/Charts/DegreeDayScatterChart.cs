@@ -46,7 +46,7 @@ public static class DegreeDayScatterChart
         else
         {
             double high = Math.Max(1, xs.Max());
-            canvas.Plot.Axes.SetLimitsX(0, high * 1.05);
+            canvas.Plot.Axes.SetLimitsX(-0.03 * high, high * 1.05); // a margin so climates with no degree-days are not cut by the axis
             EconomizerSavingsChart.FitFromZero(canvas.Plot, canvas.Plot.Axes.Left, ys);
         }
 
