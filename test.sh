@@ -9,4 +9,9 @@ cd "$(dirname "$0")"
 command -v node >/dev/null || { echo "test.sh: Node.js is required (the tests compare against the npm package psychrolib)" >&2; exit 1; }
 npm ci --prefix tests/reference --no-audit --no-fund --loglevel=error
 
+if ! tests/cluster/slurm-cluster.sh check 2>/dev/null; then
+    echo "test.sh: Slurm is not installed (slurmctld, slurmd, munged): the Slurm array test (Cluster.SlurmArrayTests) does not run. Install it with: apt-get install slurm-wlm munge" >&2
+    export BINENERGY_SLURM_ABSENT_NOTED=1
+fi
+
 dotnet test BinEnergy.sln --nologo "$@"

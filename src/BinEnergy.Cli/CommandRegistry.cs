@@ -83,6 +83,11 @@ internal static class CommandRegistry
             .WithExample("batch", "national.toml", "--weather", "stations.csv", "--out", "reports/national")
             .WithExample("batch", "national.toml", "--weather", "'weather/**/*.csv'", "--out", "reports/national", "--shard", "0/4");
 
+        Add<BatchReportCommand>("batch-report")
+            .WithData(output)
+            .WithDescription("The cross-climate report of a batch output folder: every shard's tables into report.html and summary.json.")
+            .WithExample("batch-report", "reports/national");
+
         Add<DemoCommand>("demo")
             .WithData(output)
             .WithDescription("Runs the bundled demo study (invented climates, four ventilation options, economizer comparison) into reports/demo/.")

@@ -91,7 +91,7 @@ public class BatchStudyBenchmark
         BatchRunner.Run(study, stations, r =>
         {
             var run = new StudyRunResult(study, r.Cases, StudyRunner.EngineVersion);
-            rows += StudyTables.Build(r.Cases, StudyTables.Units(run), StudyTables.Show(run)).Sum(t => t.RowCount);
+            rows += StudyTables.Build(r.Cases, StudyTables.Units(run), StudyTables.Show(run), run.Study.DegreeDayMethod).Sum(t => t.RowCount);
         });
         return rows;
     }

@@ -40,7 +40,7 @@ public sealed record ColumnMap
     /// <summary>Which column holds each quantity.</summary>
     public required IReadOnlyDictionary<WeatherQuantity, ColumnSpec> Columns { get; init; }
 
-    /// <summary>Where each metadata value is found; keys are <c>name</c>, <c>elevation_m</c>, <c>latitude</c>, <c>longitude</c>, <c>utc_offset_h</c>.</summary>
+    /// <summary>Where each metadata value is found; keys are <c>name</c>, <c>station_id</c>, <c>elevation_m</c>, <c>latitude</c>, <c>longitude</c>, <c>utc_offset_h</c>.</summary>
     public IReadOnlyDictionary<string, MetadataSource> Metadata { get; init; } = new Dictionary<string, MetadataSource>();
 
     /// <summary>When true the data end at the first blank line and the rest (legends, notices) is ignored.</summary>

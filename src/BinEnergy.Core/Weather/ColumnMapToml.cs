@@ -16,7 +16,7 @@ internal static class ColumnMapToml
 
     private static readonly string[] MetadataKeys = ["line", "field", "pattern", "value", "from_longitude"];
 
-    internal static readonly string[] MetadataNames = ["name", "elevation_m", "latitude", "longitude", "utc_offset_h"];
+    internal static readonly string[] MetadataNames = ["name", "station_id", "elevation_m", "latitude", "longitude", "utc_offset_h"];
 
     public static ColumnMap Parse(string toml, string source, string? name)
     {

@@ -41,6 +41,12 @@ public static class OpenLayoutWriter
         var site = weather.Site;
         writer.Write("# name: ");
         writer.WriteLine(site.Name.Replace('\n', ' ').Replace('\r', ' '));
+        if (site.StationId is { } id)
+        {
+            writer.Write("# station_id: ");
+            writer.WriteLine(id.Replace('\n', ' ').Replace('\r', ' '));
+        }
+
         if (site.ElevationM is double z)
         {
             writer.WriteLine(string.Create(c, $"# elevation_m: {z:0.#}"));

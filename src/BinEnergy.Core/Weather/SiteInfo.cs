@@ -28,4 +28,8 @@ public sealed record SiteInfo(
     double? Longitude,
     double? UtcOffsetHours,
     double SitePressurePa,
-    SitePressureSource PressureSource);
+    SitePressureSource PressureSource)
+{
+    /// <summary>The station's identifier in the file's header (a TMY3 file's USAF number), if the file or map gives one.</summary>
+    public string? StationId { get; init; }
+}

@@ -20,7 +20,7 @@ internal static class WeatherFileParser
     private static readonly string[] DefaultMissing = ["NA", "NaN", "nan"];
 
     /// <summary>The open layout's metadata keys (DESIGN 5.1).</summary>
-    private static readonly string[] OpenMetadataKeys = ["name", "elevation_m", "elevation_ft", "latitude", "longitude", "utc_offset_h", "typical_year", "humidity_over"];
+    private static readonly string[] OpenMetadataKeys = ["name", "station_id", "elevation_m", "elevation_ft", "latitude", "longitude", "utc_offset_h", "typical_year", "humidity_over"];
 
 
     /// <summary>

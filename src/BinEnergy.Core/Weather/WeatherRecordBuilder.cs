@@ -34,13 +34,17 @@ internal static class WeatherRecordBuilder
             DewPointC = dewPoint,
             HumidityOver = over,
         };
-        var weather = new HourlyWeather(new SiteInfo(name, elevation, latitude, longitude, utcOffset, sitePressure, source), columns, raw.Quality, calendar.Calendar)
+        var weather = new HourlyWeather(new SiteInfo(name, elevation, latitude, longitude, utcOffset, sitePressure, source) { StationId = StationId(raw) }, columns, raw.Quality, calendar.Calendar)
         {
             HourlyPressureFromRecord = pressureColumn is not null,
         };
         WeatherHumidity.CheckOtherMeasures(weather, grid, raw, typical);
         return weather;
     }
+
+    /// <summary>The station id from the metadata (trimmed), or null when the file and its map give none.</summary>
+    private static string? StationId(RawWeatherTable raw) =>
+        raw.Metadata.TryGetValue("station_id", out var id) && id.Value.Trim().Length > 0 ? id.Value.Trim() : null;
 
     /// <summary>Name, latitude, longitude, elevation and UTC offset from the metadata (the options' elevation first).</summary>
     private static (string Name, double? Latitude, double? Longitude, double? ElevationM, double? UtcOffset) SiteMetadata(RawWeatherTable raw, WeatherReadOptions options)

@@ -254,7 +254,7 @@ public sealed class BatchOutput : IDisposable
             }
 
             show ??= mine;
-            foreach (var table in StudyTables.Build(result.Cases, units, show.Value))
+            foreach (var table in StudyTables.Build(result.Cases, units, show.Value, oneClimate.DegreeDayMethod))
             {
                 buffer.Append(attributes.Count == 0 ? table : table.WithConstantText(attributes));
             }

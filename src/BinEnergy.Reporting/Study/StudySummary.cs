@@ -37,7 +37,7 @@ public static class StudySummary
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Layout = TableLayout.Record, ShowInTerminal = false }, [run]));
 
         var climates = run.Cases.GroupBy(c => c.Case.Climate.Name)
-            .Select(g => (Case: g.First(), DegreeDays: DegreeDaysPerYear(g.First(), run.Study.DegreeDayMethod, u.DegreeDayBaseC), Design: g.First().OutdoorAir.Design!))
+            .Select(g => (Case: g.First(), DegreeDays: StudyTables.DegreeDaysPerYear(g.First(), run.Study.DegreeDayMethod, u.DegreeDayBaseC), Design: g.First().OutdoorAir.Design!))
             .ToList();
         doc.Add(new ColumnSet<(StudyCaseResult Case, (double Heating, double Cooling) DegreeDays, DesignConditions Design)>()
             .Text("climate", "Climate", x => x.Case.Case.Climate.Name)
@@ -117,15 +117,6 @@ public static class StudySummary
         doc.NoteAll(NoteKind.Warning, run.Warnings);
         doc.NoteAll(NoteKind.Caution, Cautions.OutdoorAir);
         return doc;
-    }
-
-    /// <summary>Heating and cooling degree-days of a case's record at a base, K-day: of the record, or the mean of a multi-year record's complete years.</summary>
-    private static (double Heating, double Cooling) DegreeDaysPerYear(StudyCaseResult c, DegreeDayMethod method, double baseC)
-    {
-        var complete = c.Years.Where(y => y.Year.Complete).ToList();
-        var spans = c.IsMultiYear && complete.Count > 0 ? complete.Select(y => c.Weather.Slice(y.Year.Start, y.Year.Hours)).ToList() : [c.Weather];
-        var series = spans.Select(w => DegreeDaySeries.Of(w, method)).ToList();
-        return (series.Average(d => d.Heating(baseC)), series.Average(d => d.Cooling(baseC)));
     }
 
     /// <summary>A figure's mean year and its lowest and highest complete year.</summary>

@@ -1,4 +1,5 @@
 using System.Globalization;
+using BinEnergy.Core.Climate;
 using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Study;
@@ -17,14 +18,14 @@ namespace BinEnergy.Reporting.Study;
 public static class StudyTables
 {
     /// <summary>The table names, in the order they are written.</summary>
-    public static IReadOnlyList<string> Names { get; } = ["annual", "bins", "monthly", "economizer", "peaks", "hourly"];
+    public static IReadOnlyList<string> Names { get; } = ["climates", "annual", "bins", "monthly", "economizer", "peaks", "hourly"];
 
     /// <summary>Builds the tables of a run (<c>hourly</c> only when the run kept its hours and <paramref name="hourly"/> is set).</summary>
     public static IReadOnlyList<ResultTable> Build(StudyRunResult run, bool hourly)
     {
         var u = Units(run);
         var show = Show(run);
-        var tables = Build(run.Cases, u, show).ToList();
+        var tables = Build(run.Cases, u, show, run.Study.DegreeDayMethod).ToList();
         if (hourly)
         {
             tables.Add(Hourly(run.Cases, u, show));
@@ -34,8 +35,8 @@ public static class StudyTables
     }
 
     /// <summary>The tables but <c>hourly</c> of some cases, with given units and figures (a batch lays out one file's cases at a time, all with the same columns).</summary>
-    public static IReadOnlyList<ResultTable> Build(IReadOnlyList<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
-        [Annual(cases, u, show), Bins(cases, u, show), Monthly(cases, u, show), Economizer(cases, u, show), Peaks(cases, u, show)];
+    public static IReadOnlyList<ResultTable> Build(IReadOnlyList<StudyCaseResult> cases, DisplayUnits u, FigureSet show, DegreeDayMethod degreeDays) =>
+        [Climates(cases, u, degreeDays), Annual(cases, u, show), Bins(cases, u, show), Monthly(cases, u, show), Economizer(cases, u, show), Peaks(cases, u, show)];
 
     /// <summary>The display units of a run: the study's system, currency and oil heat content.</summary>
     public static DisplayUnits Units(StudyRunResult run) =>
@@ -57,6 +58,53 @@ public static class StudyTables
         c.IsMultiYear
             ? [.. c.Years.Select(y => (y.Year.Label, y.Year.Complete, y.OutdoorAir, y.Economizer)), (RecordYear.MeanLabel, true, c.OutdoorAir, c.Economizer)]
             : [(c.Years[0].Year.Label, c.Years[0].Year.Complete, c.OutdoorAir, c.Economizer)];
+
+    /// <summary>
+    /// One row per climate: the weather file and its site (name, station id, latitude, longitude, elevation,
+    /// site pressure), the record (hours, period, humidity convention), the annual mean dry-bulb, heating and
+    /// cooling degree-days at the display base (65 F or 18.3 C) by the study's method (daily means by
+    /// default; per complete year for a multi-year record) and the 99.6 % heating and 0.4 % cooling design
+    /// dry-bulbs, all from <c>Core/Climate</c> as <c>inspect</c> gives them.
+    /// </summary>
+    public static ResultTable Climates(IReadOnlyList<StudyCaseResult> cases, DisplayUnits u, DegreeDayMethod method)
+    {
+        var first = cases.GroupBy(c => c.Case.Climate.Name).Select(g => g.First()).ToList();
+        string baseText = u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", CultureInfo.InvariantCulture);
+        return new ColumnSet<(StudyCaseResult Case, (double Heating, double Cooling) DegreeDays)>()
+            .Text("climate", "Climate", x => x.Case.Case.Climate.Name)
+            .Text("weather", "Weather file", x => x.Case.Case.Climate.WeatherPath)
+            .Text("site", "Site in the file", x => x.Case.Weather.Site.Name)
+            .Text("station_id", "Station id", x => x.Case.Weather.Site.StationId ?? string.Empty)
+            .Number("latitude", DisplayUnit.Degrees, "Latitude", x => x.Case.Weather.Site.Latitude ?? double.NaN)
+            .Number("longitude", DisplayUnit.Degrees, "Longitude", x => x.Case.Weather.Site.Longitude ?? double.NaN)
+            .Number("elevation", u.Length, "Elevation", x => x.Case.Weather.Site.ElevationM ?? double.NaN)
+            .Number("site_pressure", u.Pressure, "Site pressure", x => x.Case.Weather.Site.SitePressurePa)
+            .Integer("hours_in_record", "Hours", x => x.Case.Weather.Count)
+            .Text("period", "Period", x => Period(x.Case.Weather))
+            .Text("humidity_over", "Dew points over", x => x.Case.Weather.HumidityOver == Core.Psychrometrics.HumidityOver.Water ? "water" : "ice")
+            .Number("mean_drybulb", u.Temperature, "Mean dry-bulb", x => x.Case.Weather.DryBulbC.Average())
+            .Text("degree_day_method", "Degree-days", _ => DegreeDayMethods.Name(method))
+            .Number("heating_degree_days", u.DegreeDays, "HDD " + baseText, x => x.DegreeDays.Heating)
+            .Number("cooling_degree_days", u.DegreeDays, "CDD " + baseText, x => x.DegreeDays.Cooling)
+            .Number("heating_99_6_drybulb", u.Temperature, "Heating 99.6 %", x => x.Case.OutdoorAir.Design!.Heating996DryBulbC)
+            .Number("cooling_0_4_drybulb", u.Temperature, "Cooling 0.4 %", x => x.Case.OutdoorAir.Design!.Cooling[0].DryBulbC)
+            .Fill(new ResultTable("climates") { Title = "Climates: the site, degree-days and design dry-bulbs of each record" },
+                first.Select(c => (c, DegreeDaysPerYear(c, method, u.DegreeDayBaseC))));
+    }
+
+    /// <summary>A record's period: <c>typical year</c>, or its first and last dates (<c>2005-01-01 to 2023-12-31</c>).</summary>
+    public static string Period(Core.Weather.HourlyWeather weather) => weather.Calendar.IsTypicalYear
+        ? "typical year"
+        : weather.Times[0].ToString("yyyy-MM-dd", CultureInfo.InvariantCulture) + " to " + weather.Times[^1].ToString("yyyy-MM-dd", CultureInfo.InvariantCulture);
+
+    /// <summary>Heating and cooling degree-days of a case's record at a base, K-day: of the record, or the mean of a multi-year record's complete years.</summary>
+    public static (double Heating, double Cooling) DegreeDaysPerYear(StudyCaseResult c, DegreeDayMethod method, double baseC)
+    {
+        var complete = c.Years.Where(y => y.Year.Complete).ToList();
+        var spans = c.IsMultiYear && complete.Count > 0 ? complete.Select(y => c.Weather.Slice(y.Year.Start, y.Year.Hours)).ToList() : [c.Weather];
+        var series = spans.Select(w => DegreeDaySeries.Of(w, method)).ToList();
+        return (series.Average(d => d.Heating(baseC)), series.Average(d => d.Cooling(baseC)));
+    }
 
     /// <summary>One row per climate x variant x year x method (the year is <c>mean</c> for the mean of a multi-year record's complete years).</summary>
     public static ResultTable Annual(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>

@@ -17,6 +17,9 @@ public sealed record DisplayUnit(string Suffix, string Symbol, Func<double, doub
     /// <summary>A count (hours, people), shown whole with thousands separators.</summary>
     public static DisplayUnit Count { get; } = new(string.Empty, string.Empty, v => v, "N0");
 
+    /// <summary>An angle in degrees (latitude north, longitude east), shown to four decimals.</summary>
+    public static DisplayUnit Degrees { get; } = new("deg", "°", v => v, "0.####");
+
     /// <summary>A column name: <paramref name="baseName"/> with this unit's suffix.</summary>
     public string NameFor(string baseName) => Suffix.Length == 0 ? baseName : baseName.Length == 0 ? Suffix : baseName + "_" + Suffix;
 
