@@ -40,6 +40,11 @@ public static class CliApp
         });
 
         string? command = args.FirstOrDefault(a => CommandRegistry.SettingsTypes.ContainsKey(a));
+
+        // Ctrl-C asks the command to stop between steps (a batch writes what it finished, so --resume goes on); a second Ctrl-C ends the process.
+        using var stop = new CancellationTokenSource();
+        ConsoleCancelEventHandler onCancel = (_, e) => e.Cancel = !stop.IsCancellationRequested && StopRequested(stop, stderr);
+        Console.CancelKeyPress += onCancel;
         try
         {
             if (Array.IndexOf(args, "-") >= 0)
@@ -47,7 +52,12 @@ public static class CliApp
                 throw new UsageException("'-' (standard input) is not read: give the path of a file (save a stream to a file first)");
             }
 
-            return app.Run(args);
+            return app.Run(args, stop.Token);
+        }
+        catch (OperationCanceledException) when (stop.IsCancellationRequested)
+        {
+            Fail(stderr, "stopped (Ctrl-C); no output was left half-written");
+            return ExitCodes.Interrupted;
         }
         catch (Exception e) when (e is CommandParseException or CommandRuntimeException)
         {
@@ -75,6 +85,17 @@ public static class CliApp
             stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
             return ExitCodes.Unexpected;
         }
+        finally
+        {
+            Console.CancelKeyPress -= onCancel;
+        }
+    }
+
+    private static bool StopRequested(CancellationTokenSource stop, TextWriter stderr)
+    {
+        stderr.WriteLine("binenergy: stopping after the current step (Ctrl-C again to end at once)");
+        stop.Cancel();
+        return true;
     }
 
     /// <summary>Writes an error line, with any control character from the user's files or arguments escaped (<see cref="PrintableText"/>).</summary>

@@ -7,4 +7,7 @@ public static class ExitCodes
     public const int Unexpected = 1;
     public const int Usage = 2;
     public const int BadInput = 3;
+
+    /// <summary>Stopped by Ctrl-C (128 + SIGINT, the shell's convention).</summary>
+    public const int Interrupted = 130;
 }

@@ -89,4 +89,48 @@ public sealed class BatchResumeTests
         Assert.Equal(3, code);
         Assert.Contains("the list of weather files changed", err, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public async Task StoppedWithCtrlC_ExitsWithTheShellsCode_KeepsWhatItFinished_AndResumes()
+    {
+        using var f = new BatchFolder(8);
+        string whole = Path.Combine(f.Path, "whole"), stopped = Path.Combine(f.Path, "stopped");
+        var (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", f.Weather, "--out", whole);
+        Assert.True(code == 0, err);
+
+        string stderr;
+        using (var run = Support.CliProcess.Start(["batch", f.Study, "--weather", f.Weather, "--out", stopped, "--workers", "1", "--rows-per-part", "1"]))
+        {
+            var errors = run.StandardError.ReadToEndAsync();
+            var clock = Stopwatch.StartNew();
+            while (Parts(stopped).Count < 2 && !run.HasExited && clock.Elapsed < TimeSpan.FromMinutes(2))
+            {
+                Thread.Sleep(20);
+            }
+
+            Assert.False(run.HasExited, "the batch finished before it could be stopped");
+            using (var signal = Process.Start("kill", ["-INT", run.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)]))
+            {
+                await signal.WaitForExitAsync();
+            }
+
+            await run.WaitForExitAsync();
+            stderr = await errors;
+
+            // 128 + SIGINT, as a shell reports a process stopped by Ctrl-C.
+            Assert.Equal(130, run.ExitCode);
+        }
+
+        Assert.Contains("stopping after the current step", stderr, StringComparison.Ordinal);
+        Assert.Contains("stopped (Ctrl-C)", stderr, StringComparison.Ordinal);
+        Assert.InRange(Parts(stopped).Count, 2, 7);
+        (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", f.Weather, "--out", stopped, "--resume");
+        Assert.True(code == 0, err);
+        var one = BatchFolder.Read(whole, hive: true, Order);
+        var resumed = BatchFolder.Read(stopped, hive: true, Order);
+        foreach (var table in Order.Keys)
+        {
+            Assert.Equal(BatchFolder.Rows(one[table]), BatchFolder.Rows(resumed[table]));
+        }
+    }
 }
