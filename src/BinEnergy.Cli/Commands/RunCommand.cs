@@ -3,7 +3,6 @@ using BinEnergy.Core.Study;
 using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Study;
 using BinEnergy.Reporting.Tables;
-using Spectre.Console;
 using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
@@ -48,30 +47,9 @@ public sealed class RunCommand : Command<RunCommand.Settings>
                 $"{folder} already exists and is not empty: add --force to replace it, or choose another --out folder");
         }
 
-        StudyRunResult run;
-        int total = study.Climates.Count * study.Variants.Count;
-        if (!format.Json && output.Console.Profile.Capabilities.Interactive)
-        {
-            run = null!;
-            output.Console.Progress().Start(ctx =>
-            {
-                var task = ctx.AddTask($"[bold]{Markup.Escape(PrintableText.Of(study.Name))}[/]", maxValue: total);
-                var progress = new SyncProgress(step =>
-                {
-                    task.Description = Markup.Escape(PrintableText.Of(step));
-                    if (!step.StartsWith("reading ", StringComparison.Ordinal))
-                    {
-                        task.Increment(1);
-                    }
-                });
-                run = StudyRunner.Run(study, hourly, progress, cancellationToken);
-                task.Description = "done";
-            });
-        }
-        else
-        {
-            run = StudyRunner.Run(study, hourly, null, cancellationToken);
-        }
+        StudyRunResult run = null!;
+        ProgressDisplay.Run(output, format, study.Name, study.Climates.Count * study.Variants.Count, "cases", step =>
+            run = StudyRunner.Run(study, hourly, new StepProgress(step), cancellationToken));
 
         var runAt = RunClock.Now();
         var tables = StudyOutputWriter.WriteAsync(run, folder, force, hourly,
@@ -97,9 +75,15 @@ public sealed class RunCommand : Command<RunCommand.Settings>
     /// <summary>A folder name from the study name: lower case, spaces and punctuation to dashes.</summary>
     internal static string FolderName(string studyName) => StudyReport.Slug(studyName, "study");
 
-    /// <summary>An <see cref="IProgress{T}"/> that reports on the calling thread (Spectre's display is refreshed by its own loop).</summary>
-    private sealed class SyncProgress(Action<string> report) : IProgress<string>
+    /// <summary>The study runner's steps as progress: a finished case is a step ("climate / variant"); reading a climate is not.</summary>
+    private sealed class StepProgress(Action<string?> step) : IProgress<string>
     {
-        public void Report(string value) => report(value);
+        public void Report(string value)
+        {
+            if (!value.StartsWith("reading ", StringComparison.Ordinal))
+            {
+                step(value);
+            }
+        }
     }
 }
