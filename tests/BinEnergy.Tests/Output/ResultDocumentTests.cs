@@ -118,7 +118,7 @@ public class ResultDocumentTests
     [Theory]
     [InlineData("--heat-to", "21", "--heat-to: 21 F is out of range")] // 21 F is -6 C: a setpoint plausible only in C
     [InlineData("--max-rh", "0", "--max-rh: 0 is out of range")]
-    [InlineData("--headline", "best", "--headline best: 'best' is not a method; write hourly, joint-bin or bin")]
+    [InlineData("--headline", "best", "--headline: \"best\" is not one of \"hourly\", \"joint-bin\", \"bin\"")]
     public void OutdoorAir_OptionErrorsNameTheOptionAndTheUnitWritten(string option, string value, string message)
     {
         var args = new List<string> { "outdoor-air", BinsCommandTests.InventedFile(), "--airflow", "1000", "--heat-to", "70", "--cool-to", "75", "--max-rh", "60" };
