@@ -159,22 +159,34 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [StudyKey("plant", "defrost_penalty_pct")]
         public double? DefrostPenalty { get; init; }
 
-        [CommandOption("--humidifier <TYPE>")]
-        [StudyKey("plant", "humidifier")]
-        public string? Humidifier { get; init; }
+        [CommandOption("--heating-capacity-per-airflow <Q>")]
+        [StudyKey("plant", "heating_capacity", nameof(DisplayUnits.CapacityPerAirflow))]
+        public double? HeatingCapacityPerAirflow { get; init; }
 
-        [CommandOption("--humidifier-efficiency <E>")]
-        [StudyKey("plant", "humidifier_efficiency")]
-        public double? HumidifierEfficiency { get; init; }
+        [CommandOption("--cooling-cop-table-outdoor <T,T,...>")]
+        [StudyKey("plant", "cooling_cop_table_outdoor", nameof(DisplayUnits.Temperature), Numbers = true, Note = "Give them comma-separated.")]
+        public string? CoolingCopTableOutdoor { get; init; }
+
+        [CommandOption("--cooling-cop-table-wetbulb <T,T,...>")]
+        [StudyKey("plant", "cooling_cop_table_wetbulb", nameof(DisplayUnits.Temperature), Numbers = true, Note = "Give them comma-separated.")]
+        public string? CoolingCopTableWetBulb { get; init; }
+
+        [CommandOption("--cooling-cop-table <COP,COP,...>")]
+        [StudyKey("plant", "cooling_cop_table", Numbers = true, Note = "Give them comma-separated, row by row.")]
+        public string? CoolingCopTable { get; init; }
 
         [CommandOption("--price-electricity <PRICE>")]
         [StudyKey("plant", "price_electricity_per_kwh", Note = "Per kWh, for the cost columns.")]
         public double? PriceElectricity { get; init; }
 
+        [CommandOption("--price-gas <PRICE>")]
+        [StudyKey("plant", "price_gas", nameof(DisplayUnits.GasPrice), Note = "For the cost columns of gas heating or backup.")]
+        public double? PriceGas { get; init; }
+
         /// <summary>True when any option of the plant is given (then the command buys energy through a plant).</summary>
         private bool HasPlant => HeatingFuel is not null || HeatingEfficiency is not null || HeatingCop is not null || HeatingCapacity is not null
             || HeatPumpLockout is not null || BackupFuel is not null || BackupEfficiency is not null || DefrostBelow is not null
-            || DefrostPenalty is not null || Humidifier is not null || HumidifierEfficiency is not null || PriceElectricity is not null;
+            || DefrostPenalty is not null || HeatingCapacityPerAirflow is not null || CoolingCopTable is not null || PriceElectricity is not null || PriceGas is not null;
 
         public override ValidationResult Validate()
         {

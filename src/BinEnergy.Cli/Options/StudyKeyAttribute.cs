@@ -48,19 +48,22 @@ internal sealed class StudyKeyAttribute(string table, string key, string? unit =
     /// <summary>For text: split at commas into a list of numbers (invariant culture).</summary>
     public bool Numbers { get; init; }
 
+    /// <summary>The key as an ip study file spells it (its unit tells apart keys that share a name, such as a capacity and a capacity per airflow).</summary>
+    private string Spelled => Unit is null ? Key : StudyOptions.KeyName(Key, Unit, Ip);
+
     /// <summary>Every key the option sets: its own, then <see cref="Also"/>.</summary>
     public IEnumerable<(string Table, string Key)> Keys =>
         Also.Select(k => k.Split('.', 2)).Select(p => (p[0], p[1])).Prepend((Table, Key));
 
     /// <summary>The schema's description without its final stop, lower-cased at the start (for "--x is required: ...").</summary>
-    public string What => StudyKeys.Describe(Table, Key).Description.TrimEnd('.') is var d && d.Length > 0 ? char.ToLowerInvariant(d[0]) + d[1..] : d;
+    public string What => StudyKeys.Describe(Table, Spelled).Description.TrimEnd('.') is var d && d.Length > 0 ? char.ToLowerInvariant(d[0]) + d[1..] : d;
 
     /// <summary>The option's help (Spectre markup): the key's description, its units in both systems, the note, and its default or that it is required.</summary>
     public override string Description
     {
         get
         {
-            var (description, defaultText) = StudyKeys.Describe(Table, Key);
+            var (description, defaultText) = StudyKeys.Describe(Table, Spelled);
             var parts = new List<string> { (Help ?? description).TrimEnd('.') + "." + Units() };
             if (Note is not null)
             {

@@ -8,7 +8,7 @@ public static class StudyKeys
     public static (string Description, string? Default) Describe(string table, string key)
     {
         var section = StudySchema.Get(table);
-        var def = section.Keys.FirstOrDefault(k => k.Name == key) ?? section.Find(key)?.Definition ?? throw new KeyNotFoundException($"[{table}] {key}");
+        var def = section.Find(key)?.Definition ?? section.Keys.FirstOrDefault(k => k.Name == key) ?? throw new KeyNotFoundException($"[{table}] {key}");
         return (def.Description, def.DefaultText);
     }
 

@@ -144,6 +144,16 @@ public sealed class DisplayUnits
     /// <summary>Hours (fractional in some bin methods).</summary>
     public DisplayUnit Hours { get; } = new(string.Empty, "h", h => h, "N0");
 
+    /// <summary>A heating capacity per unit of design airflow (the SI value is W per m3/s): Btu/h per cfm, or W per L/s.</summary>
+    public DisplayUnit CapacityPerAirflow => ip
+        ? new("btuh_per_cfm", "Btu/h per cfm", w => w * 3600.0 / Conversions.JoulesPerBtu * Conversions.CubicMetresPerSecondPerCfm, "0.00")
+        : new("w_per_ls", "W per L/s", w => w / 1000.0, "0.00");
+
+    /// <summary>A gas price (the SI value is per joule): per therm, or per kWh.</summary>
+    public DisplayUnit GasPrice => ip
+        ? new("per_therm", "per therm", p => p * FuelUnits.JoulesPerTherm, "0.000")
+        : new("per_kwh", "per kWh", p => p * FuelUnits.JoulesPerKilowattHour, "0.000");
+
     /// <summary>The enthalpy datum of these units, in words: "0 F" or "0 C".</summary>
     public string EnthalpyDatum => ip ? "0 F" : "0 C";
 

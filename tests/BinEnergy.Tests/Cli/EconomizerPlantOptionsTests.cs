@@ -7,7 +7,7 @@ namespace BinEnergy.Tests.Cli;
 
 /// <summary>
 /// The plant options of <c>economizer</c> (cooling COP, heating fuel, heat pump with capacity,
-/// lockout, backup and defrost, humidifier, electricity price) run the command as a one-case
+/// lockout, backup and defrost, electricity and gas prices, the COP table) run the command as a one-case
 /// study: the same figures as a study file with the same keys run by <c>run</c>, on the
 /// Melbourne FL check file (NREL TMY3, through the tmy3 map).
 /// </summary>
@@ -31,7 +31,7 @@ public sealed class EconomizerPlantOptionsTests : IDisposable
     [
         "--cooling-cop", "3.2", "--heating-fuel", "heat-pump", "--heating-cop", "3", "--heating-capacity", "50000",
         "--heat-pump-lockout", "10", "--backup-fuel", "electric", "--backup-efficiency", "1", "--defrost-below", "35", "--defrost-penalty", "15",
-        "--humidifier", "steam-gas", "--humidifier-efficiency", "0.8", "--price-electricity", "0.2",
+        "--price-electricity", "0.2",
     ];
 
     private static (int Code, string Out, string Err) Cli(params string[] args)
@@ -62,8 +62,6 @@ public sealed class EconomizerPlantOptionsTests : IDisposable
             backup_efficiency = 1
             defrost_below_f = 35
             defrost_penalty_pct = 15
-            humidifier = "steam-gas"
-            humidifier_efficiency = 0.8
             price_electricity_per_kwh = 0.2
             """));
         string outDir = Path.Combine(folder, "out");
@@ -123,5 +121,29 @@ public sealed class EconomizerPlantOptionsTests : IDisposable
         Assert.Equal(2, lockout);
         Assert.Contains("--heat-pump-lockout", gasOnly, StringComparison.Ordinal);
         Assert.Contains("applies to heating_fuel = \"heat-pump\" only", gasOnly, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public void CapacityPerAirflow_CopTableAndGasPrice_WorkFromTheCommand()
+    {
+        // 5 Btu/h per cfm of the 10,000 cfm supply airflow is the 50,000 Btu/h capacity of the heat-pump case.
+        string[] perAirflow = [.. HeatPump.Select(a => a == "--heating-capacity" ? "--heating-capacity-per-airflow" : a == "50000" ? "5" : a)];
+        var (c1, absolute, e1) = Cli(["economizer", Melbourne, "--map", "tmy3", .. System, .. HeatPump, "--json"]);
+        var (c2, scaled, e2) = Cli(["economizer", Melbourne, "--map", "tmy3", .. System, .. perAirflow, "--json"]);
+        Assert.True(c1 == 0 && c2 == 0, e1 + e2);
+        Assert.Equal(Baseline(absolute).GetProperty("heating_cost_usd").GetDouble(), Baseline(scaled).GetProperty("heating_cost_usd").GetDouble(), 1e-9);
+
+        // A COP table that is 3.2 everywhere gives the compressor energy of a constant COP of 3.2.
+        string[] table = ["--cooling-cop-table-outdoor", "60,100", "--cooling-cop-table-wetbulb", "50,80", "--cooling-cop-table", "3.2,3.2,3.2,3.2"];
+        var (c3, flat, e3) = Cli(["economizer", Melbourne, "--map", "tmy3", .. System, .. HeatPump, .. table, "--json"]);
+        Assert.True(c3 == 0, e3);
+        Assert.Equal(Baseline(absolute).GetProperty("compressor_kwh").GetDouble(), Baseline(flat).GetProperty("compressor_kwh").GetDouble(), 1e-6);
+
+        // Gas reheat at 85 % and 1.20 per therm: cost = (reheat + preheat) kBtu / 100 kBtu per therm / 0.85 x 1.20.
+        var (c4, gas, e4) = Cli(["economizer", Melbourne, "--map", "tmy3", .. System, "--cooling-cop", "3.2", "--heating-efficiency", "0.85", "--price-gas", "1.2", "--json"]);
+        Assert.True(c4 == 0, e4);
+        var b = Baseline(gas);
+        double heatKbtu = b.GetProperty("reheat_kbtu").GetDouble() + b.GetProperty("preheat_kbtu").GetDouble();
+        Assert.Equal(heatKbtu / 100 / 0.85 * 1.2, b.GetProperty("heating_cost_usd").GetDouble(), 1e-6 * heatKbtu);
     }
 }
