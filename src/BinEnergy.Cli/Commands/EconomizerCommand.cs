@@ -175,6 +175,18 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [StudyKey("plant", "cooling_cop_table", Numbers = true, Note = "Give them comma-separated, row by row.")]
         public string? CoolingCopTable { get; init; }
 
+        [CommandOption("--min-rh <PCT>")]
+        [StudyKey("ventilation", "min_rh_pct", Note = "The minimum outdoor air is humidified to it at the return temperature; --humidifier says what that buys.")]
+        public double? MinRh { get; init; }
+
+        [CommandOption("--humidifier <TYPE>")]
+        [StudyKey("plant", "humidifier")]
+        public string? Humidifier { get; init; }
+
+        [CommandOption("--humidifier-efficiency <E>")]
+        [StudyKey("plant", "humidifier_efficiency")]
+        public double? HumidifierEfficiency { get; init; }
+
         [CommandOption("--price-electricity <PRICE>")]
         [StudyKey("plant", "price_electricity_per_kwh", Note = "Per kWh, for the cost columns.")]
         public double? PriceElectricity { get; init; }
@@ -186,7 +198,7 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         /// <summary>True when any option of the plant is given (then the command buys energy through a plant).</summary>
         private bool HasPlant => HeatingFuel is not null || HeatingEfficiency is not null || HeatingCop is not null || HeatingCapacity is not null
             || HeatPumpLockout is not null || BackupFuel is not null || BackupEfficiency is not null || DefrostBelow is not null
-            || DefrostPenalty is not null || HeatingCapacityPerAirflow is not null || CoolingCopTable is not null || PriceElectricity is not null || PriceGas is not null;
+            || DefrostPenalty is not null || Humidifier is not null || HumidifierEfficiency is not null || HeatingCapacityPerAirflow is not null || CoolingCopTable is not null || PriceElectricity is not null || PriceGas is not null;
 
         public override ValidationResult Validate()
         {
@@ -211,7 +223,7 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         var u = settings.DisplayUnits;
         var a = run.OutdoorAir.Assumptions;
         string methods = AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol);
-        var doc = EconomizerDocument.Build(run.Economizer!, u, headline, a.Schedule, methods);
+        var doc = EconomizerDocument.Build(run.Economizer!, u, headline, a.Schedule, methods, run.OutdoorAir.Annual[headline]);
         output.Write(doc, settings, settings.Csv);
         return ExitCodes.Ok;
     }

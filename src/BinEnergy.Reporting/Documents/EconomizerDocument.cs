@@ -17,7 +17,9 @@ public static class EconomizerDocument
     /// <param name="headline">The headline method.</param>
     /// <param name="schedule">The occupancy schedule's text.</param>
     /// <param name="methods">The sentence on the methods with the case's bins (<see cref="AssumptionText.Methods"/>).</param>
-    public static ResultDocument Build(EconomizerEvaluation e, DisplayUnits u, IntegrationMethod headline, string schedule, string methods)
+    /// <param name="ventilation">The minimum outdoor air's own annual figures at the headline method; its humidification, when there is
+    /// any (an indoor minimum RH), is shown with what the humidifier buys.</param>
+    public static ResultDocument Build(EconomizerEvaluation e, DisplayUnits u, IntegrationMethod headline, string schedule, string methods, EnergyFigures? ventilation = null)
     {
         string method = IntegrationMethods.Label(headline);
         var doc = new ResultDocument($"Economizer evaluation: {e.Weather.Site.Name}, {AirSystemTypes.Name(e.Settings.System)} system, {e.OccupiedHours} occupied hours of {e.Weather.Count}") { CsvTable = "by_method" };
@@ -41,6 +43,20 @@ public static class EconomizerDocument
                 Layout = TableLayout.Keyed,
                 KeyColumn = "control",
             }, e.BaselineAndControls));
+
+        if (ventilation is { Loads.Humidification.Joules: > 0 } v)
+        {
+            doc.Add(new ColumnSet<EnergyFigures>()
+                .Number("humidification", u.Energy, "Humidification load", f => f.Loads.Humidification.Joules)
+                .Number("humidifier_electricity", u.Electricity, "Electricity bought", f => f.Bought[Core.Plant.EndUse.Humidification].ElectricityJ)
+                .Number("humidifier_gas", u.Gas, "Gas bought", f => f.Bought[Core.Plant.EndUse.Humidification].GasJ)
+                .Number("humidifier", u.Cost, "Cost", f => f.Bought[Core.Plant.EndUse.Humidification].Cost)
+                .Fill(new ResultTable("humidification")
+                {
+                    Title = $"Humidifying the minimum outdoor air to the indoor minimum, {method} (the same with and without an economizer)",
+                    Layout = TableLayout.Record,
+                }, [v]));
+        }
 
         var check = new ColumnSet<EconomizerControlResult>()
             .Text("control", "Control", c => c.Control.Describe())

@@ -146,4 +146,22 @@ public sealed class EconomizerPlantOptionsTests : IDisposable
         double heatKbtu = b.GetProperty("reheat_kbtu").GetDouble() + b.GetProperty("preheat_kbtu").GetDouble();
         Assert.Equal(heatKbtu / 100 / 0.85 * 1.2, b.GetProperty("heating_cost_usd").GetDouble(), 1e-6 * heatKbtu);
     }
+
+    [Fact]
+    public void MinimumRhAndASteamGasHumidifier_ShowTheHumidificationOfTheMinimumOutdoorAir()
+    {
+        // Steam from supply water at about 2,630 kJ/kg (saturated steam at 100 C less water at 10 C, ASHRAE Handbook—
+        // Fundamentals 2017 ch. 1 table 3, recalled from memory) per 2,501 kJ/kg of load, over the 80 % efficiency, in gas;
+        // 100,000 Btu per therm; cost at 1.20 per therm.
+        var (code, output, err) = Cli(["economizer", TestData.Open("725300TYA.CSV"), "--map", "tmy3", .. System, "--cooling-cop", "3.2",
+            "--heating-efficiency", "0.85", "--min-rh", "30", "--humidifier", "steam-gas", "--humidifier-efficiency", "0.8", "--price-gas", "1.2", "--json"]);
+        Assert.True(code == 0, err);
+        var h = JsonDocument.Parse(output).RootElement.GetProperty("humidification");
+        double load = h.GetProperty("humidification_kbtu").GetDouble();
+        Assert.True(load > 1000, $"a Chicago winter humidified to 30 % needs a load, not {load} kBtu");
+        double therms = load * 2630 / 2501 / 0.8 / 100;
+        Assert.Equal(therms, h.GetProperty("humidifier_gas_therm").GetDouble(), 1e-6 * therms);
+        Assert.Equal(therms * 1.2, h.GetProperty("humidifier_cost_usd").GetDouble(), 1e-6 * therms);
+        Assert.Equal(0, h.GetProperty("humidifier_electricity_kwh").GetDouble());
+    }
 }
