@@ -25,7 +25,7 @@ public sealed class BatchReport
 {
     /// <summary>How the quartiles are taken, for the report.</summary>
     public const string QuartileNote =
-        "Quartiles and median: sample quantiles of the climates' values, Hyndman and Fan (1996) definition 7 (linear interpolation between order statistics; R's default, Excel PERCENTILE.INC), MathNet.Numerics QuantileDefinition.R7. Each climate counts once, whatever its population or floor area.";
+        "Quartiles and median: sample quantiles of the climates' values, Hyndman and Fan (1996) definition 7 (linear interpolation between order statistics; R's default, Excel PERCENTILE.INC). Each climate counts once, whatever its population or floor area.";
 
     /// <summary>How many climates each end of a ranking lists.</summary>
     public const int RankingLength = 10;
