@@ -106,7 +106,29 @@ public sealed class BatchSession : IDisposable
         var counts = Finish(output);
         var groups = counts.Warnings.Select(kv => new BatchWarningGroup(kv.Key, kv.Value,
             seen.TryGetValue(kv.Key, out var k) ? k.First : [])).ToList();
-        return new BatchOutcome(Path.GetFullPath(settings.Output.Folder), counts, groups, output.SummaryPath, null, []);
+        var notes = new List<string>();
+        var report = Report(counts, notes, ct);
+        return new BatchOutcome(Path.GetFullPath(settings.Output.Folder), counts, groups, output.SummaryPath, report, notes);
+    }
+
+    /// <summary>
+    /// After the last part of an unsharded batch: the cross-climate report and the one summary.json. A shard of several
+    /// leaves it to <c>batch-report OUT</c> once every shard has finished; a batch where no climate ran has nothing to report.
+    /// </summary>
+    private BatchReport? Report(BatchCounts counts, List<string> notes, CancellationToken ct)
+    {
+        if (Shard.Count > 1)
+        {
+            return null;
+        }
+
+        if (counts.Done == 0)
+        {
+            notes.Add("no climate ran, so there is no cross-climate report: fix the inputs listed in tables/warnings and run the batch again with --force");
+            return null;
+        }
+
+        return BatchReport.WriteAsync(settings.Output.Folder, RunClock.Now(), ct).GetAwaiter().GetResult();
     }
 
     private BatchCounts Finish(BatchOutput output)
@@ -147,6 +169,18 @@ public sealed class BatchSession : IDisposable
 
         document.NoteAll(NoteKind.Warning, outcome.Notes);
         document.Note(NoteKind.Note, "Tables: " + Path.Combine(outcome.Folder, "tables") + " (read tables/annual/**/*.parquet with hive partitioning); counts in " + outcome.SummaryPath + ".");
+        if (outcome.Report is BatchReport report)
+        {
+            document.Add(report.National());
+            document.NoteAll(NoteKind.Warning, report.Warnings);
+            document.NoteAll(NoteKind.Caution, Text.Cautions.OutdoorAir);
+            document.Note(NoteKind.Note, "Report: " + Path.Combine(outcome.Folder, "report.html") + " (figures across climates; the figures and these counts are in summary.json).");
+        }
+        else if (outcome.Counts.Done > 0)
+        {
+            document.Note(NoteKind.Note, "Once every shard has finished, `binenergy batch-report " + outcome.Folder + "` writes the cross-climate report.html and summary.json.");
+        }
+
         return document;
     }
 
