@@ -55,6 +55,10 @@ public sealed class BatchCommand : Command<BatchCommand.Settings>
         [Description("The number of parts of a Kubernetes Indexed Job (its completions), read with JOB_COMPLETION_INDEX.")]
         public int? Shards { get; init; }
 
+        [CommandOption("--charts-for <NAMES>")]
+        [Description("Draw the per-climate charts of `run` (bin hours, load by bin, psychrometric chart, economizer, monthly, method check; first variant) for these climates only, comma-separated: the station list's names or the files' ids. Written into OUT/charts/ and shown in report.html.")]
+        public string? ChartsFor { get; init; }
+
         [CommandOption("--workers <N>")]
         [Description("Weather files run at once. Default: one per core.")]
         public int? Workers { get; init; }
@@ -101,6 +105,7 @@ public sealed class BatchCommand : Command<BatchCommand.Settings>
             },
             Strict = settings.Strict,
             Workers = settings.Workers,
+            ChartsFor = BatchClimateSelection.Choose(settings.ChartsFor, inputs),
         });
         output.Error.WriteLine("binenergy: " + PrintableText.Of(session.Description));
         foreach (string note in session.Open())

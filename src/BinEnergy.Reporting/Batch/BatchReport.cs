@@ -31,9 +31,11 @@ public sealed class BatchReport
     public const int RankingLength = 10;
 
     private BatchReport(PartitionedTable annual, PartitionedTable climates, DisplayUnits u, IReadOnlyList<HeadlineFigure> figures, IReadOnlyList<HeadlineRow> rows,
-        IReadOnlyDictionary<string, (double Heating, double Cooling)> degreeDays, IReadOnlyList<string> warnings, System.Text.Json.Nodes.JsonObject? batch)
+        IReadOnlyDictionary<string, (double Heating, double Cooling)> degreeDays, IReadOnlyList<string> warnings, System.Text.Json.Nodes.JsonObject? batch,
+        IReadOnlyList<(string Climate, string Variant, IReadOnlyList<RenderedChart> Charts)> climateCharts)
     {
         Batch = batch;
+        ClimateCharts = climateCharts;
         Annual = annual;
         Climates = climates;
         Units = u;
@@ -81,6 +83,9 @@ public sealed class BatchReport
 
     /// <summary>The batch's counts (files, done, failed, warnings, rows, parts; every shard's added up), from its summaries; null when the folder has none.</summary>
     public System.Text.Json.Nodes.JsonObject? Batch { get; }
+
+    /// <summary>The per-climate charts of the climates the batch named with <c>--charts-for</c> (<see cref="BatchClimateCharts"/>), by climate.</summary>
+    public IReadOnlyList<(string Climate, string Variant, IReadOnlyList<RenderedChart> Charts)> ClimateCharts { get; }
 
     /// <summary>The variants in order of first mention.</summary>
     public IReadOnlyList<string> Variants => Rows.Select(r => r.Variant).Distinct().ToList();
@@ -132,7 +137,8 @@ public sealed class BatchReport
         }
 
         var batch = BatchSummary.Gather(folder, warnings);
-        return new BatchReport(annual, climates, u, figures, rows, degreeDays, warnings, batch);
+        var climateCharts = BatchClimateCharts.Read(folder, hash);
+        return new BatchReport(annual, climates, u, figures, rows, degreeDays, warnings, batch, climateCharts);
     }
 
     private static DisplayUnits UnitsOf(PartitionedTable annual)
@@ -357,6 +363,11 @@ public sealed class BatchReport
             sections.Add(new ReportSection($"{f.Label} ({f.Unit})", blocks));
         }
 
+        foreach (var (climate, variant, climateCharts) in ClimateCharts)
+        {
+            sections.Add(new ReportSection($"{climate} (variant {variant})", [.. climateCharts.Select(c => new ReportChart(c, c.Description))]));
+        }
+
         return new ReportModel
         {
             StudyName = StudyName,
@@ -368,6 +379,7 @@ public sealed class BatchReport
                     new ReportKeyValue("variants", string.Join(", ", Variants)),
                     new ReportKeyValue("units", Units.Description),
                     new ReportKeyValue("tables read", $"{Annual.Parts.Count} annual and {Climates.Parts.Count} climates part file(s)"),
+                    .. ClimateCharts.Count == 0 ? [] : new[] { new ReportKeyValue("per-climate charts", string.Join(", ", ClimateCharts.Select(c => c.Climate))) },
                     .. Batch is null ? [] : new[] { new ReportKeyValue("inputs", FormattableString.Invariant($"{Batch["files"]} files: {Batch["done"]} ran, {Batch["failed"]} stopped by a problem (tables/warnings)")) },
                 ],
                 StudyHash = Annual.Metadata.GetValueOrDefault(PartitionedTable.StudyHashKey, string.Empty),

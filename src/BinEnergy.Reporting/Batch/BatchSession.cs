@@ -20,6 +20,8 @@ public sealed class BatchSession : IDisposable
     private readonly List<(BatchStation Station, int Position)> stations;
     private readonly IReadOnlyList<BatchProblem> listProblems;
     private readonly Dictionary<string, (int Count, List<string> First)> seen = new(StringComparer.Ordinal);
+    private readonly IReadOnlyDictionary<string, string> slugs;
+    private readonly HashSet<string> charted = new(StringComparer.Ordinal);
     private BatchOutput? writer;
     private List<(BatchStation Station, int Position)> todo = [];
     private int done;
@@ -30,6 +32,7 @@ public sealed class BatchSession : IDisposable
         var o = settings.Output;
         stations = o.Inputs.Stations.Select((s, i) => (Station: s, Position: i)).Where(s => o.Shard.Holds(s.Position)).ToList();
         listProblems = o.Shard.Index == 0 ? o.Inputs.Problems : [];
+        slugs = Study.StudyReport.UniqueSlugs(settings.ChartsFor.Names);
     }
 
     /// <summary>The shard this session runs.</summary>
@@ -65,6 +68,11 @@ public sealed class BatchSession : IDisposable
         }
 
         writer = BatchOutput.Open(settings.Output);
+        if (!settings.Output.Resume)
+        {
+            BatchClimateCharts.RemoveShard(settings.Output.Folder, Shard);
+        }
+
         todo = stations.Where(s => !writer.Finished.Contains(s.Station.Key)).ToList();
         return writer.Notes;
     }
@@ -91,7 +99,15 @@ public sealed class BatchSession : IDisposable
                     throw new BatchInputException("--strict: " + result.Problems[0].Message + FormattableString.Invariant($" ({done} files finished before it are kept; fix it and add --resume)"));
                 }
 
-                Record(output.Add(result).Problems);
+                var recorded = output.Add(result);
+                Record(recorded.Problems);
+                if (!recorded.Failed && settings.ChartsFor.NameOf(recorded.Station) is string name)
+                {
+                    var study = settings.Output.Study with { Climates = [recorded.Cases[0].Case.Climate] };
+                    BatchClimateCharts.Write(settings.Output.Folder, new Core.Study.StudyRunResult(study, recorded.Cases, Core.Study.StudyRunner.EngineVersion), slugs[name], Shard);
+                    charted.Add(name);
+                }
+
                 done++;
                 step();
             }, settings.Workers, ct);
@@ -106,7 +122,8 @@ public sealed class BatchSession : IDisposable
         var counts = Finish(output);
         var groups = counts.Warnings.Select(kv => new BatchWarningGroup(kv.Key, kv.Value,
             seen.TryGetValue(kv.Key, out var k) ? k.First : [])).ToList();
-        var notes = new List<string>();
+        var notes = todo.Where(s => settings.ChartsFor.NameOf(s.Station) is string n && !charted.Contains(n))
+            .Select(s => $"--charts-for '{settings.ChartsFor.NameOf(s.Station)}': the input was stopped by a problem (see tables/warnings), so it has no charts").ToList();
         var report = Report(counts, notes, ct);
         return new BatchOutcome(Path.GetFullPath(settings.Output.Folder), counts, groups, output.SummaryPath, report, notes);
     }

@@ -11,4 +11,7 @@ public sealed record BatchSessionSettings
 
     /// <summary>Weather files run at once; null for one per core.</summary>
     public int? Workers { get; init; }
+
+    /// <summary>The climates whose per-climate charts are drawn (<c>--charts-for</c>); none by default.</summary>
+    public Core.Batch.BatchClimateSelection ChartsFor { get; init; } = Core.Batch.BatchClimateSelection.None;
 }

@@ -23,91 +23,15 @@ public static class StudyReport
     public static IReadOnlyList<(string Name, RenderedChart Chart)> Charts(StudyRunResult run)
     {
         var u = StudyTables.Units(run);
-        var units = run.Study.Units;
-        var headline = run.Study.HeadlineMethod;
-        string method = IntegrationMethods.Label(headline);
-        string tUnit = u.Temperature.Symbol;
+        string method = IntegrationMethods.Label(run.Study.HeadlineMethod);
         string eUnit = u.Energy.Symbol;
-        double T(Temperature t) => u.Temperature.FromSi(t.Celsius);
         double E(Energy e) => u.Energy.FromSi(e.Joules);
-        var charts = new List<(string, RenderedChart)>();
-
+        var headline = run.Study.HeadlineMethod;
+        var charts = new List<(string Name, RenderedChart Chart)>();
         var slugs = UniqueSlugs(run.Study.Climates.Select(c => c.Name).ToList());
         foreach (var climateCases in run.Cases.GroupBy(c => c.Case.Climate.Name))
         {
-            var first = climateCases.First();
-            string climate = climateCases.Key;
-            string slug = slugs[climate];
-            string subject = $"{climate}, {first.Case.Variant.Name}";
-            var bins = first.OutdoorAir.Bins;
-
-            charts.Add(($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
-            {
-                Subject = climate,
-                TemperatureUnit = tUnit,
-                Bins = bins.Select(b => new BinHoursRow(T(b.Bin.Low), T(b.Bin.High), b.Bin.Occupied.Hours, b.Bin.Unoccupied.Hours,
-                    b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
-            })));
-
-            charts.Add(($"load-by-bin-{slug}", LoadByBinChart.Render(new LoadByBinData
-            {
-                Subject = $"{subject} ({method})",
-                TemperatureUnit = tUnit,
-                EnergyUnit = eUnit,
-                Bins = bins.Select(b =>
-                {
-                    var l = b.Figures[headline].Loads;
-                    return new LoadByBinRow(T(b.Bin.Low), T(b.Bin.High), E(l.Heating), E(l.CoolingSensible), E(l.CoolingLatent), E(l.Humidification));
-                }).ToList(),
-            })));
-
-            var eco = first.Economizer;
-            EconomizerRegionLimits? region = eco is null ? null : new EconomizerRegionLimits(
-                "differential enthalpy region (return air)",
-                Math.Min(eco.Settings.ReturnTemperature.Celsius, eco.Settings.Limits.DryBulb.Celsius),
-                eco.Model.ReturnEnthalpyJPerKg);
-            charts.Add(($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
-                climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region))));
-
-            if (eco is not null)
-            {
-                var best = eco.Best(headline);
-                charts.Add(($"economizer-modes-{slug}", EconomizerModesChart.Render(new EconomizerModesData
-                {
-                    Subject = subject,
-                    ControlName = best.Control.Describe(),
-                    TemperatureUnit = tUnit,
-                    Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
-                        best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
-                })));
-                charts.Add(($"economizer-savings-{slug}", EconomizerSavingsChart.Render(new SavingsByControlData
-                {
-                    Subject = $"{subject} ({method})",
-                    EnergyUnit = eUnit + " coil",
-                    Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), E(c.Savings(headline)))).ToList(),
-                })));
-            }
-
-            charts.Add(($"monthly-{slug}", MonthlyEnergyChart.Render(new MonthlyEnergyData
-            {
-                Subject = $"{subject} ({method})",
-                EnergyUnit = eUnit,
-                Series =
-                [
-                    new MonthlyEnergySeries("heating", Months(first, headline, l => E(l.Heating)), ChartPalette.Heating),
-                    new MonthlyEnergySeries("sensible cooling", Months(first, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
-                    new MonthlyEnergySeries("latent cooling", Months(first, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
-                ],
-            })));
-
-            var annual = first.OutdoorAir.Annual;
-            charts.Add(($"method-check-{slug}", MethodCheckChart.Render(new MethodCheckData
-            {
-                Subject = subject,
-                EnergyUnit = eUnit,
-                Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
-                    .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
-            })));
+            charts.AddRange(ClimateCharts(run, climateCases.ToList(), slugs[climateCases.Key]));
         }
 
         var comparison = new ComparisonData
@@ -129,6 +53,100 @@ public static class StudyReport
         };
         charts.Add(("comparison-energy", ComparisonChart.RenderEnergy(comparison)));
         charts.Add(("comparison-cost", ComparisonChart.RenderCost(comparison)));
+        return charts;
+    }
+
+    /// <summary>
+    /// The charts of one climate, for its first variant: bin hours, load by bin, psychrometric chart, economizer modes and
+    /// savings (with an economizer), monthly energy and the method check; file names end in <paramref name="slug"/>.
+    /// </summary>
+    /// <param name="run">The run (its study's units and headline method).</param>
+    /// <param name="climateCases">The climate's cases, in variant order.</param>
+    /// <param name="slug">The climate's file-name-safe name (<see cref="UniqueSlugs"/>).</param>
+    public static IReadOnlyList<(string Name, RenderedChart Chart)> ClimateCharts(StudyRunResult run, IReadOnlyList<StudyCaseResult> climateCases, string slug)
+    {
+        var u = StudyTables.Units(run);
+        var units = run.Study.Units;
+        var headline = run.Study.HeadlineMethod;
+        string method = IntegrationMethods.Label(headline);
+        string tUnit = u.Temperature.Symbol;
+        string eUnit = u.Energy.Symbol;
+        double T(Temperature t) => u.Temperature.FromSi(t.Celsius);
+        double E(Energy e) => u.Energy.FromSi(e.Joules);
+        var charts = new List<(string, RenderedChart)>();
+        var first = climateCases[0];
+        string climate = first.Case.Climate.Name;
+        string subject = $"{climate}, {first.Case.Variant.Name}";
+        var bins = first.OutdoorAir.Bins;
+
+        charts.Add(($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
+        {
+            Subject = climate,
+            TemperatureUnit = tUnit,
+            Bins = bins.Select(b => new BinHoursRow(T(b.Bin.Low), T(b.Bin.High), b.Bin.Occupied.Hours, b.Bin.Unoccupied.Hours,
+                b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
+        })));
+
+        charts.Add(($"load-by-bin-{slug}", LoadByBinChart.Render(new LoadByBinData
+        {
+            Subject = $"{subject} ({method})",
+            TemperatureUnit = tUnit,
+            EnergyUnit = eUnit,
+            Bins = bins.Select(b =>
+            {
+                var l = b.Figures[headline].Loads;
+                return new LoadByBinRow(T(b.Bin.Low), T(b.Bin.High), E(l.Heating), E(l.CoolingSensible), E(l.CoolingLatent), E(l.Humidification));
+            }).ToList(),
+        })));
+
+        var eco = first.Economizer;
+        EconomizerRegionLimits? region = eco is null ? null : new EconomizerRegionLimits(
+            "differential enthalpy region (return air)",
+            Math.Min(eco.Settings.ReturnTemperature.Celsius, eco.Settings.Limits.DryBulb.Celsius),
+            eco.Model.ReturnEnthalpyJPerKg);
+        charts.Add(($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
+            climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region))));
+
+        if (eco is not null)
+        {
+            var best = eco.Best(headline);
+            charts.Add(($"economizer-modes-{slug}", EconomizerModesChart.Render(new EconomizerModesData
+            {
+                Subject = subject,
+                ControlName = best.Control.Describe(),
+                TemperatureUnit = tUnit,
+                Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
+                    best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
+            })));
+            charts.Add(($"economizer-savings-{slug}", EconomizerSavingsChart.Render(new SavingsByControlData
+            {
+                Subject = $"{subject} ({method})",
+                EnergyUnit = eUnit + " coil",
+                Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), E(c.Savings(headline)))).ToList(),
+            })));
+        }
+
+        charts.Add(($"monthly-{slug}", MonthlyEnergyChart.Render(new MonthlyEnergyData
+        {
+            Subject = $"{subject} ({method})",
+            EnergyUnit = eUnit,
+            Series =
+            [
+                new MonthlyEnergySeries("heating", Months(first, headline, l => E(l.Heating)), ChartPalette.Heating),
+                new MonthlyEnergySeries("sensible cooling", Months(first, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
+                new MonthlyEnergySeries("latent cooling", Months(first, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
+            ],
+        })));
+
+        var annual = first.OutdoorAir.Annual;
+        charts.Add(($"method-check-{slug}", MethodCheckChart.Render(new MethodCheckData
+        {
+            Subject = subject,
+            EnergyUnit = eUnit,
+            Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
+                .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
+        })));
+
         return charts;
     }
 
