@@ -67,6 +67,8 @@ public sealed class BatchSession : IDisposable
             throw new BatchInputException("--strict: " + listProblems[0].Message);
         }
 
+        // A variant the study cannot build is refused before the output folder is touched.
+        BatchRunner.Variants(settings.Output.Study);
         writer = BatchOutput.Open(settings.Output);
         if (!settings.Output.Resume)
         {
