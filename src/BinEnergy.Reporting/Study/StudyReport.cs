@@ -28,101 +28,15 @@ public static class StudyReport
     public static IReadOnlyList<StudyChart> Charts(StudyRunResult run)
     {
         var u = StudyTables.Units(run);
-        var units = run.Study.Units;
         var headline = run.Study.HeadlineMethod;
         string method = IntegrationMethods.Label(headline);
-        string tUnit = u.Temperature.Symbol;
         string eUnit = u.Energy.Symbol;
-        double T(Temperature t) => u.Temperature.FromSi(t.Celsius);
         double E(Energy e) => u.Energy.FromSi(e.Joules);
         var charts = new List<StudyChart>();
-
         var slugs = UniqueSlugs(run.Study.Climates.Select(c => c.Name).ToList());
-        var variantSlugs = UniqueSlugs(run.Study.Variants.Select(v => v.Name).ToList(), "variant");
-        var charted = DetailedVariants(run.Study);
         foreach (var climateCases in run.Cases.GroupBy(c => c.Case.Climate.Name))
         {
-            string climate = climateCases.Key;
-            string slug = slugs[climate];
-            var shown = climateCases.Where(c => charted.Contains(c.Case.Variant.Name)).ToList();
-            var first = shown.FirstOrDefault() ?? climateCases.First();
-            var weatherBins = first.OutdoorAir.Bins;
-
-            charts.Add(new($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
-            {
-                Subject = climate,
-                TemperatureUnit = tUnit,
-                Bins = weatherBins.Select(b => new BinHoursRow(T(b.Bin.Low), T(b.Bin.High), b.Bin.Occupied.Hours, b.Bin.Unoccupied.Hours,
-                    b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
-            }), climate, null));
-
-            var firstEconomizer = first.Economizer;
-            EconomizerRegionLimits? region = firstEconomizer is null ? null : new EconomizerRegionLimits(
-                "differential enthalpy region (return air)",
-                Math.Min(firstEconomizer.Settings.ReturnTemperature.Celsius, firstEconomizer.Settings.Limits.DryBulb.Celsius),
-                firstEconomizer.Model.ReturnEnthalpyJPerKg);
-            charts.Add(new($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
-                climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region)), climate, null));
-
-            foreach (var c in shown)
-            {
-                string variant = c.Case.Variant.Name;
-                string stem = slug + "-" + variantSlugs[variant];
-                string subject = $"{climate}, {variant}";
-                void Add(string kind, RenderedChart chart) => charts.Add(new($"{kind}-{stem}", chart, climate, variant));
-
-                Add("load-by-bin", LoadByBinChart.Render(new LoadByBinData
-                {
-                    Subject = $"{subject} ({method})",
-                    TemperatureUnit = tUnit,
-                    EnergyUnit = eUnit,
-                    Bins = c.OutdoorAir.Bins.Select(b =>
-                    {
-                        var l = b.Figures[headline].Loads;
-                        return new LoadByBinRow(T(b.Bin.Low), T(b.Bin.High), E(l.Heating), E(l.CoolingSensible), E(l.CoolingLatent), E(l.Humidification));
-                    }).ToList(),
-                }));
-
-                if (c.Economizer is { } eco)
-                {
-                    var best = eco.Best(headline);
-                    Add("economizer-modes", EconomizerModesChart.Render(new EconomizerModesData
-                    {
-                        Subject = subject,
-                        ControlName = best.Control.Describe(),
-                        TemperatureUnit = tUnit,
-                        Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
-                            best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
-                    }));
-                    Add("economizer-savings", EconomizerSavingsChart.Render(new SavingsByControlData
-                    {
-                        Subject = $"{subject} ({method})",
-                        EnergyUnit = eUnit + " coil",
-                        Controls = eco.Controls.Select(x => new ControlSavingsRow(x.Control.Describe(), E(x.Savings(headline)))).ToList(),
-                    }));
-                }
-
-                Add("monthly", MonthlyEnergyChart.Render(new MonthlyEnergyData
-                {
-                    Subject = $"{subject} ({method})",
-                    EnergyUnit = eUnit,
-                    Series =
-                    [
-                        new MonthlyEnergySeries("heating", Months(c, headline, l => E(l.Heating)), ChartPalette.Heating),
-                        new MonthlyEnergySeries("sensible cooling", Months(c, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
-                        new MonthlyEnergySeries("latent cooling", Months(c, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
-                    ],
-                }));
-
-                var annual = c.OutdoorAir.Annual;
-                Add("method-check", MethodCheckChart.Render(new MethodCheckData
-                {
-                    Subject = subject,
-                    EnergyUnit = eUnit,
-                    Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
-                        .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
-                }));
-            }
+            charts.AddRange(ClimateCharts(run, climateCases.ToList(), slugs[climateCases.Key]));
         }
 
         var comparison = new ComparisonData
@@ -144,6 +58,112 @@ public static class StudyReport
         };
         charts.Add(new("comparison-energy", ComparisonChart.RenderEnergy(comparison), null, null));
         charts.Add(new("comparison-cost", ComparisonChart.RenderCost(comparison), null, null));
+        return charts;
+    }
+
+    /// <summary>
+    /// The charts of one climate: its weather (bin hours, the psychrometric chart with the economizer region of its first
+    /// detailed variant), then for each variant the study details (<see cref="StudyDefinition.DetailVariants"/>) the load
+    /// by bin, the economizer's modes and savings, the monthly energy and the method check; file names end in
+    /// <paramref name="slug"/> (and the variant's).
+    /// </summary>
+    /// <param name="run">The run (its study's units, headline method and variants).</param>
+    /// <param name="climateCases">The climate's cases, in variant order.</param>
+    /// <param name="slug">The climate's file-name-safe name (<see cref="UniqueSlugs"/>).</param>
+    public static IReadOnlyList<StudyChart> ClimateCharts(StudyRunResult run, IReadOnlyList<StudyCaseResult> climateCases, string slug)
+    {
+        var u = StudyTables.Units(run);
+        var units = run.Study.Units;
+        var headline = run.Study.HeadlineMethod;
+        string method = IntegrationMethods.Label(headline);
+        string tUnit = u.Temperature.Symbol;
+        string eUnit = u.Energy.Symbol;
+        double T(Temperature t) => u.Temperature.FromSi(t.Celsius);
+        double E(Energy e) => u.Energy.FromSi(e.Joules);
+        var charts = new List<StudyChart>();
+        var variantSlugs = UniqueSlugs(run.Study.Variants.Select(v => v.Name).ToList(), "variant");
+        var charted = DetailedVariants(run.Study);
+        string climate = climateCases[0].Case.Climate.Name;
+        var shown = climateCases.Where(c => charted.Contains(c.Case.Variant.Name)).ToList();
+        var first = shown.FirstOrDefault() ?? climateCases[0];
+        var weatherBins = first.OutdoorAir.Bins;
+
+        charts.Add(new($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
+        {
+            Subject = climate,
+            TemperatureUnit = tUnit,
+            Bins = weatherBins.Select(b => new BinHoursRow(T(b.Bin.Low), T(b.Bin.High), b.Bin.Occupied.Hours, b.Bin.Unoccupied.Hours,
+                b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
+        }), climate, null));
+
+        var firstEconomizer = first.Economizer;
+        EconomizerRegionLimits? region = firstEconomizer is null ? null : new EconomizerRegionLimits(
+            "differential enthalpy region (return air)",
+            Math.Min(firstEconomizer.Settings.ReturnTemperature.Celsius, firstEconomizer.Settings.Limits.DryBulb.Celsius),
+            firstEconomizer.Model.ReturnEnthalpyJPerKg);
+        charts.Add(new($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
+            climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region)), climate, null));
+
+        foreach (var c in shown)
+        {
+            string variant = c.Case.Variant.Name;
+            string stem = slug + "-" + variantSlugs[variant];
+            string subject = $"{climate}, {variant}";
+            void Add(string kind, RenderedChart chart) => charts.Add(new($"{kind}-{stem}", chart, climate, variant));
+
+            Add("load-by-bin", LoadByBinChart.Render(new LoadByBinData
+            {
+                Subject = $"{subject} ({method})",
+                TemperatureUnit = tUnit,
+                EnergyUnit = eUnit,
+                Bins = c.OutdoorAir.Bins.Select(b =>
+                {
+                    var l = b.Figures[headline].Loads;
+                    return new LoadByBinRow(T(b.Bin.Low), T(b.Bin.High), E(l.Heating), E(l.CoolingSensible), E(l.CoolingLatent), E(l.Humidification));
+                }).ToList(),
+            }));
+
+            if (c.Economizer is { } eco)
+            {
+                var best = eco.Best(headline);
+                Add("economizer-modes", EconomizerModesChart.Render(new EconomizerModesData
+                {
+                    Subject = subject,
+                    ControlName = best.Control.Describe(),
+                    TemperatureUnit = tUnit,
+                    Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
+                        best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
+                }));
+                Add("economizer-savings", EconomizerSavingsChart.Render(new SavingsByControlData
+                {
+                    Subject = $"{subject} ({method})",
+                    EnergyUnit = eUnit + " coil",
+                    Controls = eco.Controls.Select(x => new ControlSavingsRow(x.Control.Describe(), E(x.Savings(headline)))).ToList(),
+                }));
+            }
+
+            Add("monthly", MonthlyEnergyChart.Render(new MonthlyEnergyData
+            {
+                Subject = $"{subject} ({method})",
+                EnergyUnit = eUnit,
+                Series =
+                [
+                    new MonthlyEnergySeries("heating", Months(c, headline, l => E(l.Heating)), ChartPalette.Heating),
+                    new MonthlyEnergySeries("sensible cooling", Months(c, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
+                    new MonthlyEnergySeries("latent cooling", Months(c, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
+                ],
+            }));
+
+            var annual = c.OutdoorAir.Annual;
+            Add("method-check", MethodCheckChart.Render(new MethodCheckData
+            {
+                Subject = subject,
+                EnergyUnit = eUnit,
+                Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
+                    .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
+            }));
+        }
+
         return charts;
     }
 
