@@ -41,7 +41,7 @@ public static class StudyReport
             string subject = $"{climate}, {first.Case.Variant.Name}";
             var bins = first.OutdoorAir.Bins;
 
-            charts.Add(($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
+            charts.Add(($"{BinHoursChart.FileStem}-{slug}", BinHoursChart.Render(new BinChartData
             {
                 Subject = climate,
                 TemperatureUnit = tUnit,
@@ -49,7 +49,7 @@ public static class StudyReport
                     b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
             })));
 
-            charts.Add(($"load-by-bin-{slug}", LoadByBinChart.Render(new LoadByBinData
+            charts.Add(($"{LoadByBinChart.FileStem}-{slug}", LoadByBinChart.Render(new LoadByBinData
             {
                 Subject = $"{subject} ({method})",
                 TemperatureUnit = tUnit,
@@ -61,18 +61,16 @@ public static class StudyReport
                 }).ToList(),
             })));
 
+            // The psychrometric chart shades the region of the control the modes chart shows.
             var eco = first.Economizer;
-            EconomizerRegionLimits? region = eco is null ? null : new EconomizerRegionLimits(
-                "differential enthalpy region (return air)",
-                Math.Min(eco.Settings.ReturnTemperature.Celsius, eco.Settings.Limits.DryBulb.Celsius),
-                eco.Model.ReturnEnthalpyJPerKg);
-            charts.Add(($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
-                climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region))));
+            var best = eco?.Best(headline);
+            EconomizerRegionLimits? region = eco is null || best is null ? null : EconomizerRegionLimits.For(best.Control, eco.Model, units);
+            charts.Add(($"{PsychrometricChart.FileStem}-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
+                eco is null ? climate : subject, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region))));
 
-            if (eco is not null)
+            if (eco is not null && best is not null)
             {
-                var best = eco.Best(headline);
-                charts.Add(($"economizer-modes-{slug}", EconomizerModesChart.Render(new EconomizerModesData
+                charts.Add(($"{EconomizerModesChart.FileStem}-{slug}", EconomizerModesChart.Render(new EconomizerModesData
                 {
                     Subject = subject,
                     ControlName = best.Control.Describe(),
@@ -80,32 +78,35 @@ public static class StudyReport
                     Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
                         best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
                 })));
-                charts.Add(($"economizer-savings-{slug}", EconomizerSavingsChart.Render(new SavingsByControlData
+                charts.Add(($"{EconomizerSavingsChart.FileStem}-{slug}", EconomizerSavingsChart.Render(new SavingsByControlData
                 {
                     Subject = $"{subject} ({method})",
-                    EnergyUnit = eUnit + " coil",
-                    Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), E(c.Savings(headline)))).ToList(),
+                    Quantity = "Cooling coil energy saved",
+                    EnergyUnit = eUnit,
+                    CostUnit = eco.HasPlant ? u.Cost.Symbol : null,
+                    Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), E(c.Savings(headline)),
+                        eco.HasPlant ? c.PurchasedSavings(headline).Cost : null)).ToList(),
                 })));
             }
 
-            charts.Add(($"monthly-{slug}", MonthlyEnergyChart.Render(new MonthlyEnergyData
+            charts.Add(($"{MonthlyEnergyChart.FileStem}-{slug}", MonthlyEnergyChart.Render(new MonthlyEnergyData
             {
                 Subject = $"{subject} ({method})",
                 EnergyUnit = eUnit,
                 Series =
                 [
-                    new MonthlyEnergySeries("heating", Months(first, headline, l => E(l.Heating)), ChartPalette.Heating),
-                    new MonthlyEnergySeries("sensible cooling", Months(first, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
-                    new MonthlyEnergySeries("latent cooling", Months(first, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
+                    new MonthlyEnergySeries("Heating", Months(first, headline, l => E(l.Heating)), ChartPalette.Heating),
+                    new MonthlyEnergySeries("Sensible cooling", Months(first, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
+                    new MonthlyEnergySeries("Latent cooling", Months(first, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
                 ],
             })));
 
             var annual = first.OutdoorAir.Annual;
-            charts.Add(($"method-check-{slug}", MethodCheckChart.Render(new MethodCheckData
+            charts.Add(($"{MethodCheckChart.FileStem}-{slug}", MethodCheckChart.Render(new MethodCheckData
             {
                 Subject = subject,
                 EnergyUnit = eUnit,
-                Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
+                Rows = new (string Name, LoadFigure Figure)[] { ("Heating", LoadFigure.Heating), ("Sensible cooling", LoadFigure.CoolingSensible), ("Latent cooling", LoadFigure.CoolingLatent), ("Humidification", LoadFigure.Humidification) }
                     .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
             })));
         }
@@ -127,8 +128,8 @@ public static class StudyReport
                 };
             }).ToList(),
         };
-        charts.Add(("comparison-energy", ComparisonChart.RenderEnergy(comparison)));
-        charts.Add(("comparison-cost", ComparisonChart.RenderCost(comparison)));
+        charts.Add((ComparisonChart.EnergyFileStem, ComparisonChart.RenderEnergy(comparison)));
+        charts.Add((ComparisonChart.CostFileStem, ComparisonChart.RenderCost(comparison)));
         return charts;
     }
 
