@@ -19,7 +19,7 @@ public static class PsychrometricChart
     public const string HoursLegend = "Hours per cell (scale at right)";
 
     /// <summary>Opacity of the economizer region's fill over the hour cells.</summary>
-    internal const double RegionFillAlpha = 0.42;
+    internal const double RegionFillAlpha = 0.3;
 
     public static RenderedChart Render(PsychroChartData data, ChartSize? size = null)
     {
