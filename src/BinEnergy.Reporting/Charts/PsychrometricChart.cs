@@ -111,6 +111,7 @@ public static class PsychrometricChart
             bar.LabelStyle.FontName = ChartFonts.FamilyName;
             bar.Axis.TickLabelStyle.FontSize = ChartCanvas.TickSize;
             bar.Axis.TickLabelStyle.FontName = ChartFonts.FamilyName;
+            bar.Axis.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic { IntegerTicksOnly = true, LabelFormatter = ChartCanvas.FormatTick }; // whole hours
         }
 
         // Above the saturation curve no state exists: cover the parts of cells that straddle it.
@@ -137,7 +138,10 @@ public static class PsychrometricChart
             canvas.LegendLine("Relative humidity (20 % steps)", ChartPalette.Rule, 1.5f, LinePattern.Dotted);
         }
 
-        canvas.LegendFill(HoursLegend, ChartPalette.Orange);
+        if (hours.Length > 0)
+        {
+            canvas.LegendFill(HoursLegend, ChartPalette.Orange);
+        }
         if (!string.IsNullOrWhiteSpace(data.PressureNote))
         {
             var note = plot.Add.Annotation(data.PressureNote.Trim(), Alignment.UpperLeft);
