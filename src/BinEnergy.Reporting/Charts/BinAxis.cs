@@ -39,23 +39,35 @@ internal static class BinAxis
     /// </summary>
     internal static ScottPlot.TickGenerators.NumericManual EdgeTicks(IReadOnlyList<(double Low, double High)> bins, double from, double to)
     {
+        var ticks = new ScottPlot.TickGenerators.NumericManual();
+        foreach (double x in EdgeTickPositions(bins, from, to))
+        {
+            ticks.AddMajor(x, ChartCanvas.FormatTick(Math.Round(x, 6)));
+        }
+
+        return ticks;
+    }
+
+    /// <summary>The positions <see cref="EdgeTicks"/> labels, from left to right.</summary>
+    internal static IReadOnlyList<double> EdgeTickPositions(IReadOnlyList<(double Low, double High)> bins, double from, double to)
+    {
         double width = bins.Min(b => b.High - b.Low);
         double origin = bins.Min(b => b.Low);
         int count = (int)Math.Floor((to - from) / width) + 1;
         int every = new[] { 1, 2, 4, 5, 10, 20, 50 }.FirstOrDefault(k => count / k <= 20, 100);
-        var ticks = new ScottPlot.TickGenerators.NumericManual();
         long first = (long)Math.Ceiling((from - origin) / width - 1e-9);
         long last = (long)Math.Floor((to - origin) / width + 1e-9);
+        var positions = new List<double>();
         for (long k = first; k <= last; k++)
         {
             double x = origin + k * width;
             if ((long)Math.Round(x / width) % every == 0) // bins sit on multiples of the width
             {
-                ticks.AddMajor(x, ChartCanvas.FormatTick(Math.Round(x, 6)));
+                positions.Add(x);
             }
         }
 
-        return ticks;
+        return positions;
     }
 
     /// <summary>

@@ -300,6 +300,26 @@ public class ChartRenderingTests
     }
 
     [Fact]
+    public void BinCharts_TwoDegreeSiBins_CaptionStatesTheWidthAndTicksSitOnTheEdges()
+    {
+        var climate = Climates.Value[3];
+        var rows = Enumerable.Range(0, climate.Hours)
+            .GroupBy(h => (int)Math.Floor(Math.Round(climate.DryBulbC[h], 6) / 2.0)) // 2 C bins (DESIGN 6: the SI default)
+            .OrderBy(g => g.Key)
+            .Select(g => new BinHoursRow(g.Key * 2.0, g.Key * 2.0 + 2.0, g.Count(h => climate.Occupied[h]), g.Count(h => !climate.Occupied[h]),
+                g.Average(h => Core.Psychrometrics.MoistAir.WetBulb(climate.DryBulbC[h], climate.HumidityRatio[h], climate.PressurePa))))
+            .ToList();
+        var chart = BinHoursChart.Render(new BinChartData { Subject = climate.Name, TemperatureUnit = "C", Bins = rows });
+        Assert.Contains("each 2 C dry-bulb bin", chart.Description, StringComparison.Ordinal);
+        Assert.Equal(climate.Hours, chart.Series.Where(s => s.Kind == PlottedSeriesKind.Bars).Sum(s => s.Total), 9);
+
+        var positions = BinAxis.EdgeTickPositions(rows.Select(r => (r.LowEdge, r.HighEdge)).ToList(), rows[0].LowEdge - 1, rows[^1].HighEdge + 1);
+        Assert.InRange(positions.Count, 5, 21);
+        Assert.All(positions, p => Assert.Equal(0, Math.IEEERemainder(p, 2.0), 9)); // every tick on a bin edge
+        ChartReview.Save(chart, "si-2c-bins");
+    }
+
+    [Fact]
     public void Charts_RefuseBadInputWithAClearMessage()
     {
         var bins = new BinChartData { TemperatureUnit = "F", Bins = [new BinHoursRow(50, 55, double.NaN, 0, null)] };
