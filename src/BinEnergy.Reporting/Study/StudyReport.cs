@@ -84,6 +84,7 @@ public static class StudyReport
                     Quantity = "Cooling coil energy saved",
                     EnergyUnit = eUnit,
                     CostUnit = eco.HasPlant ? u.Cost.Symbol : null,
+                    CostQuantity = "cost saved on the energy the air system buys (compressor, reheat and preheat, fans)",
                     Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), E(c.Savings(headline)),
                         eco.HasPlant ? c.PurchasedSavings(headline).Cost : null)).ToList(),
                 })));
