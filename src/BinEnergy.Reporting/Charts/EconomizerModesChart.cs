@@ -41,6 +41,6 @@ public static class EconomizerModesChart
         }
 
         canvas.ShowLegendBelow();
-        return canvas.Render(FileStem, $"Occupied hours per year in each economizer mode ({data.ControlName}), stacked in each {BinAxis.WidthText(edges, data.TemperatureUnit)} dry-bulb bin.", size ?? ChartSize.Report);
+        return canvas.Render(FileStem, $"Occupied hours per year in each economizer mode under the {data.ControlName} control, stacked in each {BinAxis.WidthText(edges, data.TemperatureUnit)} dry-bulb bin.", size ?? ChartSize.Report);
     }
 }

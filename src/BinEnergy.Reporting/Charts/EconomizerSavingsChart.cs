@@ -54,7 +54,7 @@ public static class EconomizerSavingsChart
 
         canvas.ShowLegendBelow();
         return canvas.Render(FileStem, withCost
-            ? $"Annual savings of each economizer high-limit control against no economizer: {data.Quantity.ToLowerInvariant()} ({data.EnergyUnit}, left axis) and the cost saved ({data.CostUnit}, right axis)."
+            ? $"Annual savings of each economizer high-limit control against no economizer: {data.Quantity.ToLowerInvariant()} ({data.EnergyUnit}, left axis) and the {data.CostQuantity} ({data.CostUnit}, right axis)."
             : $"Annual savings of each economizer high-limit control against no economizer: {data.Quantity.ToLowerInvariant()} ({data.EnergyUnit}).", size ?? ChartSize.Report);
     }
 

@@ -163,8 +163,13 @@ public static class PsychrometricChart
         }
 
         canvas.ShowLegendBelow();
-        return canvas.Render(FileStem, $"Every hour of the weather record on a psychrometric chart (dry-bulb {data.TemperatureUnit}, humidity ratio {data.HumidityRatioUnit}), as hours per cell, with the saturation curve, RH lines and the economizer's enabled region.", size ?? ChartSize.Report);
+        return canvas.Render(FileStem, $"Every hour of the weather record on a psychrometric chart (dry-bulb {data.TemperatureUnit}, humidity ratio {data.HumidityRatioUnit}) as hours per cell, with the saturation curve and RH lines{RegionText(data)}.", size ?? ChartSize.Report);
     }
+
+    private static string RegionText(PsychroChartData data) =>
+        data.EconomizerRegion is null ? ""
+        : string.IsNullOrWhiteSpace(data.ControlName) ? ", and the economizer's enabled region drawn over the cells"
+        : $", and the region where the {data.ControlName.Trim()} economizer is enabled drawn over the cells";
 
     private static ScottPlot.Plottables.Polygon Polygon(Plot plot, ChartLine line, Color fill, Color stroke, float width)
     {

@@ -139,6 +139,7 @@ public static class StudyReport
                     Quantity = "Cooling coil energy saved",
                     EnergyUnit = eUnit,
                     CostUnit = eco.HasPlant ? u.Cost.Symbol : null,
+                    CostQuantity = "cost saved on the energy the air system buys (compressor, reheat and preheat, fans)",
                     Controls = eco.Controls.Select(x => new ControlSavingsRow(x.Control.Describe(), E(x.Savings(headline)),
                         eco.HasPlant ? x.PurchasedSavings(headline).Cost : null)).ToList(),
                 }));

@@ -320,6 +320,18 @@ public class ChartRenderingTests
     }
 
     [Fact]
+    public void Psychrometric_WithoutAnEconomizer_DrawsNoRegionAndSaysSoInTheTitle()
+    {
+        var data = ReportingSamples.Psychro(Climates.Value[2]) with { EconomizerRegion = null, ControlName = "" };
+        var chart = PsychrometricChart.Render(data);
+        Assert.DoesNotContain(chart.Series, s => s.Kind == PlottedSeriesKind.Area);
+        Assert.DoesNotContain("economizer", chart.Title, StringComparison.OrdinalIgnoreCase);
+        Assert.DoesNotContain("economizer", chart.Description, StringComparison.OrdinalIgnoreCase);
+        Assert.Equal(data.HourDryBulb.Count, chart.SeriesLabelled(PsychrometricChart.HoursLabel).Total, 9);
+        ChartReview.Save(chart, "no-economizer");
+    }
+
+    [Fact]
     public void Charts_RefuseBadInputWithAClearMessage()
     {
         var bins = new BinChartData { TemperatureUnit = "F", Bins = [new BinHoursRow(50, 55, double.NaN, 0, null)] };

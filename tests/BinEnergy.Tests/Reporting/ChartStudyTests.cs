@@ -131,6 +131,14 @@ public class ChartStudyTests
         Assert.True(inside > 20 && compared - inside > 20, $"{kind}: {inside} of {compared} states inside; the check needs both kinds");
     }
 
+    [Fact]
+    public void EconomizerRegion_OfTheBaseline_IsRefusedWithAClearMessage()
+    {
+        var model = Demo.Value.Cases.First().Economizer!.Model;
+        var error = Assert.Throws<ArgumentException>(() => EconomizerRegionLimits.For(EconomizerControl.None, model, Core.Units.UnitSystem.IP));
+        Assert.Contains("no economizer", error.Message, StringComparison.Ordinal);
+    }
+
     /// <summary>Even-odd ray casting.</summary>
     private static bool Inside(IReadOnlyList<ChartPoint> polygon, double x, double y)
     {
