@@ -1,3 +1,4 @@
+using System.Runtime.CompilerServices;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Core.Weather;
 using MathNet.Numerics.Statistics;
@@ -46,19 +47,32 @@ public sealed record DesignConditions
     /// <summary>The definitions (percentiles and coincident means) in words, for outputs.</summary>
     public static string Basis => "percentiles: " + QuantileMethod + "; " + CoincidentHours.Definition;
 
-    /// <summary>Computes the design conditions of a record at its site pressure.</summary>
+    /// <summary>Each record's design conditions, computed once: every variant of a climate asks for the same record's (its three sorts of 8,760 hours were an eighth of a batch's time).</summary>
+    private static readonly ConditionalWeakTable<HourlyWeather, DesignConditions> OfRecord = new();
+
+    /// <summary>Each record's dry-bulbs in ascending order, sorted once (the design conditions and the design peaks' coincident hours read them).</summary>
+    private static readonly ConditionalWeakTable<HourlyWeather, double[]> SortedDryBulbs = new();
+
+    /// <summary>Computes the design conditions of a record at its site pressure (once per record; the record's columns are not changed after it is built).</summary>
     public static DesignConditions FromRecord(HourlyWeather weather)
     {
         ArgumentNullException.ThrowIfNull(weather);
-        return FromHours(weather.DryBulbC, weather.WetBulbC, weather.DewPointC, weather.EnthalpyJPerKg, weather.Site.SitePressurePa, weather.HumidityOver);
+        return OfRecord.GetValue(weather, w =>
+            FromHours(w.DryBulbC, w.WetBulbC, w.DewPointC, w.EnthalpyJPerKg, w.Site.SitePressurePa, w.HumidityOver, SortedDryBulb(w)));
     }
+
+    /// <summary>The record's hourly dry-bulbs in ascending order, C (sorted once per record; do not change the array).</summary>
+    internal static double[] SortedDryBulb(HourlyWeather weather) => SortedDryBulbs.GetValue(weather, w => Sorted(w.DryBulbC));
 
     /// <summary>
     /// Computes design conditions from hourly columns of equal length at a site pressure, Pa; the dew points are over
     /// <paramref name="over"/> below 0 C (liquid water, the weather convention, by default).
     /// </summary>
     public static DesignConditions FromHours(double[] dryBulbC, double[] wetBulbC, double[] dewPointC, double[] enthalpyJPerKg, double sitePressurePa,
-        HumidityOver over = HumidityOver.Water)
+        HumidityOver over = HumidityOver.Water) => FromHours(dryBulbC, wetBulbC, dewPointC, enthalpyJPerKg, sitePressurePa, over, null);
+
+    private static DesignConditions FromHours(double[] dryBulbC, double[] wetBulbC, double[] dewPointC, double[] enthalpyJPerKg, double sitePressurePa,
+        HumidityOver over, double[]? sortedDryBulbC)
     {
         int n = dryBulbC.Length;
         if (n == 0 || wetBulbC.Length != n || dewPointC.Length != n || enthalpyJPerKg.Length != n)
@@ -66,7 +80,7 @@ public sealed record DesignConditions
             throw new ArgumentException("the hourly columns must be non-empty and of equal length");
         }
 
-        var db = Sorted(dryBulbC);
+        var db = sortedDryBulbC ?? Sorted(dryBulbC);
         var dp = Sorted(dewPointC);
         var h = Sorted(enthalpyJPerKg);
         double Q(double[] sorted, double tau) => SortedArrayStatistics.QuantileCustom(sorted, tau, Definition);

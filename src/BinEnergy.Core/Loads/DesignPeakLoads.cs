@@ -61,7 +61,7 @@ internal static class DesignPeakLoads
     /// <summary>Mean humidity ratio of the coincident hours of a dry-bulb, capped at saturation at it.</summary>
     private static double CoincidentHumidityRatio(HourlyWeather weather, double dryBulbC, double pressurePa)
     {
-        double w = CoincidentHours.Around(weather.DryBulbC, dryBulbC).MeanOf(weather.DryBulbC, weather.HumidityRatio);
+        double w = CoincidentHours.AroundSorted(DesignConditions.SortedDryBulb(weather), dryBulbC).MeanOf(weather.DryBulbC, weather.HumidityRatio);
         return Math.Min(w, Saturation.HumidityRatio(dryBulbC, pressurePa));
     }
 }

@@ -13,6 +13,9 @@ public sealed class PlantModel(PlantSettings settings)
     /// <summary>The settings this model applies.</summary>
     public PlantSettings Settings { get; } = settings;
 
+    /// <summary>The tariff of each fuel, by the fuel's number, looked up once (the economizer buys energy for every hour of five controls).</summary>
+    private readonly FuelTariff[] tariffs = [.. Enum.GetValues<Fuel>().Order().Select(settings.TariffOf)];
+
     /// <summary>
     /// The energy bought for a set of loads at one outdoor dry-bulb: heating by the heating
     /// source, sensible plus latent cooling through the cooling COP, humidification by the
@@ -96,7 +99,7 @@ public sealed class PlantModel(PlantSettings settings)
         var s = Settings;
         if (s.Heating != HeatingSource.HeatPump)
         {
-            return (SiteEnergy.Buy(s.HeatingFuel, heatingJ / s.HeatingEfficiency, s.TariffOf(s.HeatingFuel)), SiteEnergy.Zero);
+            return (SiteEnergy.Buy(s.HeatingFuel, heatingJ / s.HeatingEfficiency, Tariff(s.HeatingFuel)), SiteEnergy.Zero);
         }
 
         var curve = s.HeatPumpCop ?? throw new InvalidOperationException("heat pump without a COP curve");
@@ -119,11 +122,11 @@ public sealed class PlantModel(PlantSettings settings)
             }
 
             double cop = curve.Evaluate(outdoorC) * (s.DefrostBelow is { } d && outdoorC < d.Celsius ? 1.0 - s.DefrostPenalty : 1.0);
-            main = SiteEnergy.Buy(Fuel.Electricity, carried / cop, s.TariffOf(Fuel.Electricity));
+            main = SiteEnergy.Buy(Fuel.Electricity, carried / cop, Tariff(Fuel.Electricity));
         }
 
         double rest = heatingJ - carried;
-        var backup = rest > 0 ? SiteEnergy.Buy(s.BackupFuel, rest / s.BackupEfficiency, s.TariffOf(s.BackupFuel)) : SiteEnergy.Zero;
+        var backup = rest > 0 ? SiteEnergy.Buy(s.BackupFuel, rest / s.BackupEfficiency, Tariff(s.BackupFuel)) : SiteEnergy.Zero;
         return (main, backup);
     }
 
@@ -157,7 +160,7 @@ public sealed class PlantModel(PlantSettings settings)
         double steam = water * PlantSettings.SteamJoulesPerKilogram / Settings.HumidifierEfficiency;
         return Settings.Humidifier switch
         {
-            HumidifierType.SteamGas => SiteEnergy.Buy(Fuel.Gas, steam, Settings.TariffOf(Fuel.Gas)),
+            HumidifierType.SteamGas => SiteEnergy.Buy(Fuel.Gas, steam, Tariff(Fuel.Gas)),
             HumidifierType.Adiabatic => Heating(water * Psychrometrics.MoistAir.LatentHeat, outdoorC, hours, clamps),
             _ => Electricity(steam),
         };
@@ -165,5 +168,7 @@ public sealed class PlantModel(PlantSettings settings)
 
     /// <summary>Electricity, J, priced and weighed.</summary>
     public SiteEnergy Electricity(double joules) =>
-        SiteEnergy.Buy(Fuel.Electricity, joules, Settings.TariffOf(Fuel.Electricity));
+        SiteEnergy.Buy(Fuel.Electricity, joules, Tariff(Fuel.Electricity));
+
+    private FuelTariff Tariff(Fuel fuel) => tariffs[(int)fuel];
 }

@@ -19,7 +19,7 @@ public sealed class BatchSession : IDisposable
     private readonly BatchSessionSettings settings;
     private readonly List<(BatchStation Station, int Position)> stations;
     private readonly IReadOnlyList<BatchProblem> listProblems;
-    private readonly Dictionary<string, (int Count, List<string> First)> seen = new(StringComparer.Ordinal);
+    private readonly Dictionary<string, (int Count, List<(int Position, string Climate)> First)> seen = new(StringComparer.Ordinal);
     private readonly IReadOnlyDictionary<string, string> slugs;
     private readonly HashSet<string> charted = new(StringComparer.Ordinal);
     private BatchOutput? writer;
@@ -88,7 +88,7 @@ public sealed class BatchSession : IDisposable
         foreach (var p in listProblems.Where(p => !output.Finished.Contains(p.Climate)))
         {
             output.Add(p);
-            Record([p]);
+            Record([p], -1);
         }
 
         try
@@ -102,7 +102,7 @@ public sealed class BatchSession : IDisposable
                 }
 
                 var recorded = output.Add(result);
-                Record(recorded.Problems);
+                Record(recorded.Problems, recorded.Position);
                 if (!recorded.Failed && settings.ChartsFor.NameOf(recorded.Station) is string name)
                 {
                     var study = settings.Output.Study with { Climates = [recorded.Cases[0].Case.Climate] };
@@ -123,7 +123,7 @@ public sealed class BatchSession : IDisposable
 
         var counts = Finish(output);
         var groups = counts.Warnings.Select(kv => new BatchWarningGroup(kv.Key, kv.Value,
-            seen.TryGetValue(kv.Key, out var k) ? k.First : [])).ToList();
+            seen.TryGetValue(kv.Key, out var k) ? k.First.Select(f => f.Climate).ToList() : [])).ToList();
         var notes = todo.Where(s => settings.ChartsFor.NameOf(s.Station) is string n && !charted.Contains(n))
             .Select(s => $"--charts-for '{settings.ChartsFor.NameOf(s.Station)}': the input was stopped by a problem (see tables/warnings), so it has no charts").ToList();
         var report = Report(counts, notes, ct);
@@ -158,14 +158,20 @@ public sealed class BatchSession : IDisposable
         return counts;
     }
 
-    private void Record(IEnumerable<BatchProblem> problems)
+    /// <summary>Counts the problems by kind and keeps the first climates of each in input order (station-list rows first), whatever order the files finish in.</summary>
+    private void Record(IEnumerable<BatchProblem> problems, int position)
     {
         foreach (var p in problems)
         {
-            var (count, first) = seen.TryGetValue(p.Kind, out var k) ? k : (0, new List<string>());
-            if (first.Count < FirstClimatesShown && !first.Contains(p.Climate))
+            var (count, first) = seen.TryGetValue(p.Kind, out var k) ? k : (0, []);
+            if (!first.Any(f => f.Climate == p.Climate))
             {
-                first.Add(p.Climate);
+                int at = first.FindIndex(f => f.Position > position);
+                first.Insert(at < 0 ? first.Count : at, (position, p.Climate));
+                if (first.Count > FirstClimatesShown)
+                {
+                    first.RemoveAt(first.Count - 1);
+                }
             }
 
             seen[p.Kind] = (count + 1, first);

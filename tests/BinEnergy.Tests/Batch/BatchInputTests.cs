@@ -29,17 +29,22 @@ public sealed class BatchInputTests
             "weather/station-01.csv,c-bad-row,,south",
             "weather/station-00.csv,d-bad-elevation,high,south",
             "weather/station-00.csv,a-good,,south",
+            "weather/also-missing.csv,e-missing,,south",
         ]);
         string output = Path.Combine(f.Path, "out");
         var (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", list, "--out", output, "--csv");
         Assert.True(code == 0, err);
 
         var summary = BatchFolder.Summary(Path.Combine(output, "summary.json")).GetProperty("batch");
-        Assert.Equal(5, summary.GetProperty("files").GetInt32());
+        Assert.Equal(6, summary.GetProperty("files").GetInt32());
         Assert.Equal(1, summary.GetProperty("done").GetInt32());
-        Assert.Equal(4, summary.GetProperty("failed").GetInt32());
+        Assert.Equal(5, summary.GetProperty("failed").GetInt32());
         var kinds = summary.GetProperty("warnings");
-        foreach (string kind in new[] { "missing-file", "bad-weather-data", "bad-station-row", "duplicate-name" })
+
+        // Grouped: one line per kind with its count and its first climates in input order, whichever file finished first.
+        Assert.Equal(2, kinds.GetProperty("missing-file").GetInt32());
+        Assert.Contains("binenergy: warning: missing-file: 2 (b-missing, e-missing)", err, StringComparison.Ordinal);
+        foreach (string kind in new[] { "bad-weather-data", "bad-station-row", "duplicate-name" })
         {
             Assert.Equal(1, kinds.GetProperty(kind).GetInt32());
             Assert.Contains($"binenergy: warning: {kind}: 1 (", err, StringComparison.Ordinal);
@@ -48,7 +53,8 @@ public sealed class BatchInputTests
         var warnings = File.ReadAllLines(Directory.GetFiles(Path.Combine(output, "tables", "warnings"), "*.csv", SearchOption.AllDirectories).Single());
         Assert.Equal("climate,file,line,kind,message,region", warnings[0]);
         string Row(string kind) => warnings.Single(l => l.Contains("," + kind + ",", StringComparison.Ordinal));
-        Assert.StartsWith($"b-missing,{list},3,missing-file,", Row("missing-file"), StringComparison.Ordinal);
+        Assert.Single(warnings, l => l.StartsWith($"b-missing,{list},3,missing-file,", StringComparison.Ordinal));
+        Assert.Single(warnings, l => l.StartsWith($"e-missing,{list},7,missing-file,", StringComparison.Ordinal));
         Assert.StartsWith($"c-bad-row,{f.File(1)},20,bad-weather-data,", Row("bad-weather-data"), StringComparison.Ordinal);
         Assert.StartsWith($"line 5,{list},5,bad-station-row,", Row("bad-station-row"), StringComparison.Ordinal);
         Assert.Contains("line 6: the name 'a-good' is already given on line 2", Row("duplicate-name"), StringComparison.Ordinal);

@@ -62,6 +62,25 @@ public sealed class RecordDesignConditionsTests
         Assert.True(d.Enthalpy[0].EnthalpyJPerKg > d.Enthalpy[1].EnthalpyJPerKg);
     }
 
+    [Fact]
+    public void FromRecord_IsComputedOncePerRecord_AndEqualsTheColumnsOwn()
+    {
+        // Every variant of a climate asks for its record's design conditions: the same record gives the same object, and
+        // its figures are those of the definition on the record's columns (FromHours sorts them itself).
+        var w = RealWeatherFileTests.Read("725300TYA.CSV");
+        var once = DesignConditions.FromRecord(w);
+        Assert.Same(once, DesignConditions.FromRecord(w));
+        var direct = DesignConditions.FromHours(w.DryBulbC, w.WetBulbC, w.DewPointC, w.EnthalpyJPerKg, w.Site.SitePressurePa, w.HumidityOver);
+        Assert.Equal(direct.Heating996DryBulbC, once.Heating996DryBulbC);
+        Assert.Equal(direct.Cooling, once.Cooling);
+        Assert.Equal(direct.Dehumidification, once.Dehumidification);
+        Assert.Equal(direct.Enthalpy, once.Enthalpy);
+
+        // A slice of the record is another record, with its own design conditions (the winter quarter has no 0.4 % summer day).
+        var winter = w.Slice(0, 2160);
+        Assert.True(DesignConditions.FromRecord(winter).Cooling[0].DryBulbC < once.Cooling[0].DryBulbC - 5);
+    }
+
     [Theory]
     [MemberData(nameof(Tmy3))]
     public void DailyMeanDegreeDays_MatchTheDefinitionOnTheRawColumn(string name)
