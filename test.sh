@@ -14,4 +14,9 @@ if ! tests/cluster/slurm-cluster.sh check 2>/dev/null; then
     export BINENERGY_SLURM_ABSENT_NOTED=1
 fi
 
+if ! { command -v chromium && command -v pdftotext; } >/dev/null 2>&1; then
+    echo "test.sh: Chromium or poppler-utils is not installed: the report print test (Reporting.ReportPrintTests) does not run. Install them with: apt-get install chromium poppler-utils" >&2
+    export BINENERGY_BROWSER_ABSENT_NOTED=1
+fi
+
 dotnet test BinEnergy.sln --nologo "$@"

@@ -17,9 +17,10 @@ set -euo pipefail
 : "${STUDY:?set STUDY to the study file (TOML)}"
 : "${STATIONS:?set STATIONS to the station list (CSV with a weather column), a folder or a glob}"
 : "${OUT:?set OUT to the output folder, on storage every node sees}"
-BINENERGY=${BINENERGY:-binenergy}
+# The program: binenergy on the PATH, or a command with its arguments (BINENERGY="dotnet /opt/binenergy/binenergy.dll").
+read -r -a binenergy <<< "${BINENERGY:-binenergy}"
 # Further batch options, e.g. BATCH_OPTIONS=--resume to rerun the array after a failure, keeping finished parts.
 read -r -a options <<< "${BATCH_OPTIONS:-}"
 
 echo "binenergy batch: array task ${SLURM_ARRAY_TASK_ID} of ${SLURM_ARRAY_TASK_COUNT} on $(hostname)"
-exec "$BINENERGY" batch "$STUDY" --weather "$STATIONS" --out "$OUT" "${options[@]}"
+exec "${binenergy[@]}" batch "$STUDY" --weather "$STATIONS" --out "$OUT" "${options[@]}"

@@ -26,10 +26,14 @@ public static class BatchRunner
     public static void Run(StudyDefinition study, IReadOnlyList<(BatchStation Station, int Position)> stations, Action<BatchFileResult> handle,
         int? workers = null, CancellationToken ct = default)
     {
-        var placeholder = new StudyClimate("batch", string.Empty, null, null, 0);
-        var variants = StudyCaseBuilder.Build(study with { Climates = [placeholder] });
+        var variants = Variants(study);
         ForEachFile(stations, s => RunOne(study, variants, s.Station, s.Position), handle, workers, ct);
     }
+
+    /// <summary>The study's variants as cases of a placeholder climate (each file's own climate replaces it): checks every variant before any file is read.</summary>
+    /// <exception cref="StudyFileException">A variant of the study is not valid.</exception>
+    public static IReadOnlyList<StudyCase> Variants(StudyDefinition study) =>
+        StudyCaseBuilder.Build(study with { Climates = [new StudyClimate("batch", string.Empty, null, null, 0)] });
 
     /// <summary>
     /// The engine's pipeline: <paramref name="work"/> on every item, one item per worker on <paramref name="workers"/> cores

@@ -23,7 +23,7 @@ public sealed record DesignConditions
 
     /// <summary>The percentile method, named for reports.</summary>
     public const string QuantileMethod =
-        "sample quantile of the hours, Hyndman and Fan (1996) definition 7 (linear interpolation between order statistics; R's default, Excel PERCENTILE.INC), MathNet.Numerics QuantileDefinition.R7";
+        "sample quantile of the hours, Hyndman and Fan (1996) definition 7 (linear interpolation between order statistics; R's default, Excel PERCENTILE.INC)";
 
     /// <summary>Hours in the record.</summary>
     public required int Hours { get; init; }

@@ -24,4 +24,10 @@ public sealed record StudyDefinition(
 
     /// <summary>How each climate's degree-days are counted (<c>[study] degree_days</c>, default daily-mean).</summary>
     public Climate.DegreeDayMethod DegreeDayMethod { get; init; } = Climate.DegreeDayMethod.DailyMean;
+
+    /// <summary>Every key the study's own tables set (not the climates' or variants'), as written, in file order.</summary>
+    public IReadOnlyList<StudySetting> Settings { get; init; } = [];
+
+    /// <summary>The variants the report shows in detail (charts, economizer and method-check rows) (<c>[report] detail_variants</c>; default every variant).</summary>
+    public IReadOnlyList<string> DetailVariants { get; init; } = [];
 }

@@ -104,7 +104,37 @@ public static class StudyFileReader
 
             Loads.IntegrationMethods.TryParse(study.Text("headline_method") ?? "hourly", out var headline);
             Climate.DegreeDayMethods.TryParse(study.Text("degree_days") ?? "daily-mean", out var degreeDays);
-            return new StudyDefinition(file, name, units, currency, hash, climates, variants) { HeadlineMethod = headline, DegreeDayMethod = degreeDays };
+            var settings = baseSections.Values.Where(s => s.Present)
+                .SelectMany(s => s.Values.Values.Select(v => (v.Line, Setting: new StudySetting(s.Definition.Name + "." + v.WrittenKey, v.Written))))
+                .OrderBy(x => x.Line).Select(x => x.Setting).ToList();
+            return new StudyDefinition(file, name, units, currency, hash, climates, variants)
+            {
+                HeadlineMethod = headline,
+                DegreeDayMethod = degreeDays,
+                Settings = settings,
+                DetailVariants = DetailVariants(groups, variants),
+            };
+        }
+
+        /// <summary>The variants named by <c>[report] detail_variants</c> (default: all), each checked against the study's variants.</summary>
+        private List<string> DetailVariants(List<IGrouping<(string Table, int Index), TomlEntry>> groups, List<StudyVariant> variants)
+        {
+            var report = Section("report", 0, groups, string.Empty);
+            var named = report.TextList("detail_variants");
+            if (named is null)
+            {
+                return [.. variants.Select(v => v.Name)];
+            }
+
+            var names = variants.Select(v => v.Name).ToList();
+            foreach (string n in named.Where(n => !names.Contains(n, StringComparer.Ordinal)))
+            {
+                string? near = KeySuggester.Nearest(n, names);
+                throw report.ErrorAt("detail_variants", $"no variant is named \"{n}\"" + (near is null ? string.Empty : $"; did you mean \"{near}\"?")
+                    + " (the variants: " + string.Join(", ", names) + ")");
+            }
+
+            return [.. named.Distinct(StringComparer.Ordinal)];
         }
 
         private void CheckTables(List<TomlEntry> entries)
@@ -177,7 +207,7 @@ public static class StudyFileReader
                 ValueKind.NumberOrPoints => e.Value is List<object> list ? ToPoints(e, fullKey, def, alt, list) : ToNumber(e, fullKey, def, alt, e.Value),
                 _ => throw new InvalidOperationException("unknown kind"),
             };
-            return (def.Name, new StudyValue(value, key, e.Line, origin));
+            return (def.Name, new StudyValue(value, key, e.Line, origin) { Written = StudySetting.Format(e.Value) });
         }
 
         private StudyFileException Unknown(TomlEntry e, SectionDefinition section, string key, string fullKey)
@@ -484,6 +514,7 @@ public static class StudyFileReader
                 string origin = $"variant \"{name}\"";
                 var overrides = new Dictionary<string, Dictionary<string, StudyValue>>(StringComparer.Ordinal);
                 var written = new List<string>();
+                var changes = new List<StudySetting>();
                 foreach (var e in g.Where(e => e.Key.Length > 0 && e.Key != "name"))
                 {
                     int dot = e.Key.IndexOf('.', StringComparison.Ordinal);
@@ -539,6 +570,7 @@ public static class StudyFileReader
 
                     forTable[validated.defName] = validated.value;
                     written.Add(e.Key);
+                    changes.Add(new StudySetting(e.Key, validated.value.Written));
                 }
 
                 var sections = new Dictionary<string, StudySection>(baseSections, StringComparer.Ordinal);
@@ -549,7 +581,7 @@ public static class StudyFileReader
                     sections[table] = baseSection.With(values, present);
                 }
 
-                list.Add(new StudyVariant(name, nameEntry.Line, sections, written));
+                list.Add(new StudyVariant(name, nameEntry.Line, sections, written) { Changes = changes });
             }
 
             return list;

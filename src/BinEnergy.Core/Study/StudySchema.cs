@@ -208,6 +208,13 @@ internal static class StudySchema
             ], "Heat content of the oil.") { Min = 50e6, Max = 250e6, DefaultText = "138,500 Btu/gal (recalled from memory)" },
         ], true, "Heating and cooling plant, fans, prices and carbon factors."),
 
+        new("report", false,
+        [
+            new KeyDefinition("detail_variants", ValueKind.TextList, Unitless("detail_variants"),
+                "Variants the report shows in detail: their charts (load by bin, economizer, monthly, method check) and their rows of the economizer and method-check tables. The headline, peaks and comparisons, and every table file, hold every variant.")
+            { DefaultText = "every variant" },
+        ], false, "What the report shows."),
+
         new("variant", true,
         [
             Text("name", "Name of the variant (a column of every table)."),

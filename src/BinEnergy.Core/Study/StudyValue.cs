@@ -5,4 +5,8 @@ namespace BinEnergy.Core.Study;
 /// numbers, or (outdoor C, value) pairs; with the key as written and its line, so later
 /// checks (between keys) can still point at the file.
 /// </summary>
-internal sealed record StudyValue(object Value, string WrittenKey, int Line, string Origin);
+internal sealed record StudyValue(object Value, string WrittenKey, int Line, string Origin)
+{
+    /// <summary>The value as the user wrote it (TOML text, in the user's unit), for the report's inputs.</summary>
+    public string Written { get; init; } = string.Empty;
+}

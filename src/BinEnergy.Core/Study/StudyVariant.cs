@@ -23,5 +23,8 @@ public sealed class StudyVariant
     /// <summary>The keys it overrides, as written (e.g. <c>ventilation.airflow_cfm</c>).</summary>
     public IReadOnlyList<string> Overrides { get; }
 
+    /// <summary>The settings it changes against the base, as written (<c>ventilation.airflow_cfm = 3170</c>).</summary>
+    public IReadOnlyList<StudySetting> Changes { get; init; } = [];
+
     internal IReadOnlyDictionary<string, StudySection> Sections { get; }
 }

@@ -1,5 +1,4 @@
 using System.Globalization;
-using System.Text.Json;
 using BinEnergy.Core.Batch;
 using BinEnergy.Core.Study;
 using BinEnergy.Reporting.Study;
@@ -131,7 +130,8 @@ public sealed class BatchOutput : IDisposable
         if (earlier is null)
         {
             bool ours = !existed || Directory.EnumerateFileSystemEntries(root).All(e => Path.GetFileName(e) is "tables" || Path.GetFileName(e).StartsWith("manifest", StringComparison.Ordinal)
-                || Path.GetFileName(e).StartsWith("summary", StringComparison.Ordinal) || Path.GetFileName(e).StartsWith(".lock-shard-", StringComparison.Ordinal));
+                || Path.GetFileName(e).StartsWith("summary", StringComparison.Ordinal) || Path.GetFileName(e).StartsWith(".lock-shard-", StringComparison.Ordinal)
+                || Path.GetFileName(e) is "report.html" or "charts");
             if (!ours)
             {
                 throw new BatchInputException($"{s.Folder} already holds files that are not a batch's: choose a new or empty --out folder");
@@ -368,28 +368,8 @@ public sealed class BatchOutput : IDisposable
         return sum;
     }
 
-    /// <summary>Writes <c>summary.json</c> (or the shard's summary) atomically: the counts, the hashes and the shard.</summary>
-    public void WriteSummary(BatchCounts counts)
-    {
-        var summary = new Dictionary<string, object?>
-        {
-            ["study"] = settings.Study.Name,
-            ["study_sha256"] = settings.Study.Hash,
-            ["inputs_sha256"] = settings.Inputs.Hash,
-            ["engine_version"] = StudyRunner.EngineVersion,
-            ["shard"] = settings.Shard.Index,
-            ["shards"] = settings.Shard.Count,
-            ["partition_by"] = settings.PartitionBy,
-            ["files"] = counts.Files,
-            ["done"] = counts.Done,
-            ["failed"] = counts.Failed,
-            ["warnings"] = counts.Warnings,
-            ["rows"] = counts.Rows,
-            ["parts"] = counts.Parts,
-        };
-        string json = JsonSerializer.Serialize(summary, new JsonSerializerOptions { WriteIndented = true }) + "\n";
-        AtomicFile.Write(SummaryPath, temporary => File.WriteAllText(temporary, json), flushToDisk: true);
-    }
+    /// <summary>Writes <c>summary.json</c> (or the shard's summary) atomically: the counts, the hashes and the shard, under <c>batch</c> (<see cref="BatchSummary"/>).</summary>
+    public void WriteSummary(BatchCounts counts) => BatchSummary.Write(SummaryPath, null, BatchSummary.Counts(settings, counts));
 
     /// <summary>Releases the shard's lock (gathered rows not yet written are dropped: call <see cref="WriteAll"/> first).</summary>
     public void Dispose() => lockFile.Dispose();

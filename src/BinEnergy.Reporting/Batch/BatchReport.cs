@@ -19,20 +19,23 @@ namespace BinEnergy.Reporting.Batch;
 /// years) and variant, gives its distribution across climates (box chart), a ranking (the
 /// highest and lowest 10), the figure against heating or cooling degree-days (scatter), and a
 /// national table (count, lowest, quartiles, median, mean, highest). Writes <c>report.html</c>
-/// and <c>summary.json</c> into the folder. Only reads and arranges the tables; no physics.
+/// and <c>summary.json</c> (with the batch's counts under <c>batch</c>, <see cref="BatchSummary"/>) into the folder. Only reads and arranges the tables; no physics.
 /// </summary>
 public sealed class BatchReport
 {
     /// <summary>How the quartiles are taken, for the report.</summary>
     public const string QuartileNote =
-        "Quartiles and median: sample quantiles of the climates' values, Hyndman and Fan (1996) definition 7 (linear interpolation between order statistics; R's default, Excel PERCENTILE.INC), MathNet.Numerics QuantileDefinition.R7. Each climate counts once, whatever its population or floor area.";
+        "Quartiles and median: sample quantiles of the climates' values, Hyndman and Fan (1996) definition 7 (linear interpolation between order statistics; R's default, Excel PERCENTILE.INC). Each climate counts once, whatever its population or floor area.";
 
     /// <summary>How many climates each end of a ranking lists.</summary>
     public const int RankingLength = 10;
 
     private BatchReport(PartitionedTable annual, PartitionedTable climates, DisplayUnits u, IReadOnlyList<HeadlineFigure> figures, IReadOnlyList<HeadlineRow> rows,
-        IReadOnlyDictionary<string, (double Heating, double Cooling)> degreeDays, IReadOnlyList<string> warnings)
+        IReadOnlyDictionary<string, (double Heating, double Cooling)> degreeDays, IReadOnlyList<string> warnings, System.Text.Json.Nodes.JsonObject? batch,
+        IReadOnlyList<(string Climate, string Variant, IReadOnlyList<RenderedChart> Charts)> climateCharts)
     {
+        Batch = batch;
+        ClimateCharts = climateCharts;
         Annual = annual;
         Climates = climates;
         Units = u;
@@ -77,6 +80,12 @@ public sealed class BatchReport
 
     /// <summary>What the report noticed (climates without a climates row, ...).</summary>
     public IReadOnlyList<string> Warnings { get; }
+
+    /// <summary>The batch's counts (files, done, failed, warnings, rows, parts; every shard's added up), from its summaries; null when the folder has none.</summary>
+    public System.Text.Json.Nodes.JsonObject? Batch { get; }
+
+    /// <summary>The per-climate charts of the climates the batch named with <c>--charts-for</c> (<see cref="BatchClimateCharts"/>), by climate.</summary>
+    public IReadOnlyList<(string Climate, string Variant, IReadOnlyList<RenderedChart> Charts)> ClimateCharts { get; }
 
     /// <summary>The variants in order of first mention.</summary>
     public IReadOnlyList<string> Variants => Rows.Select(r => r.Variant).Distinct().ToList();
@@ -127,7 +136,9 @@ public sealed class BatchReport
             warnings.Add($"{missing.Count} climate(s) of the annual table have no row in the climates table and are left out of the degree-day charts: {string.Join(", ", missing.Take(5))}{(missing.Count > 5 ? ", ..." : "")}.");
         }
 
-        return new BatchReport(annual, climates, u, figures, rows, degreeDays, warnings);
+        var batch = BatchSummary.Gather(folder, warnings);
+        var climateCharts = BatchClimateCharts.Read(folder, hash);
+        return new BatchReport(annual, climates, u, figures, rows, degreeDays, warnings, batch, climateCharts);
     }
 
     private static DisplayUnits UnitsOf(PartitionedTable annual)
@@ -352,6 +363,11 @@ public sealed class BatchReport
             sections.Add(new ReportSection($"{f.Label} ({f.Unit})", blocks));
         }
 
+        foreach (var (climate, variant, climateCharts) in ClimateCharts)
+        {
+            sections.Add(new ReportSection($"{climate} (variant {variant})", [.. climateCharts.Select(c => new ReportChart(c, c.Description))]));
+        }
+
         return new ReportModel
         {
             StudyName = StudyName,
@@ -363,6 +379,8 @@ public sealed class BatchReport
                     new ReportKeyValue("variants", string.Join(", ", Variants)),
                     new ReportKeyValue("units", Units.Description),
                     new ReportKeyValue("tables read", $"{Annual.Parts.Count} annual and {Climates.Parts.Count} climates part file(s)"),
+                    .. ClimateCharts.Count == 0 ? [] : new[] { new ReportKeyValue("per-climate charts", string.Join(", ", ClimateCharts.Select(c => c.Climate))) },
+                    .. Batch is null ? [] : new[] { new ReportKeyValue("inputs", FormattableString.Invariant($"{Batch["files"]} files: {Batch["done"]} ran, {Batch["failed"]} stopped by a problem (tables/warnings)")) },
                 ],
                 StudyHash = Annual.Metadata.GetValueOrDefault(PartitionedTable.StudyHashKey, string.Empty),
                 EngineVersion = Annual.Metadata.GetValueOrDefault("binenergy.engine_version", string.Empty),
@@ -418,8 +436,7 @@ public sealed class BatchReport
         var report = await ReadAsync(folder, ct);
         var charts = report.Charts();
         string html = HtmlReport.Build(report.Model(charts, runAt));
-        string json = JsonRenderer.Render(report.Summary());
-        AtomicFile.Write(Path.Combine(folder, "summary.json"), System.Text.Encoding.UTF8.GetBytes(json));
+        BatchSummary.Write(Path.Combine(folder, "summary.json"), JsonRenderer.Build(report.Summary()), report.Batch);
         AtomicFile.Write(Path.Combine(folder, "report.html"), System.Text.Encoding.UTF8.GetBytes(html));
         return report;
     }

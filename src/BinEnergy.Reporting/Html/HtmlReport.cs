@@ -17,9 +17,12 @@ namespace BinEnergy.Reporting.Html;
 public static partial class HtmlReport
 {
     /// <summary>The ids of the fixed sections, in page order.</summary>
-    public static IReadOnlyList<string> SectionIds { get; } = ["run", "assumptions", "results", "warnings", "cautions"];
+    public static IReadOnlyList<string> SectionIds { get; } = ["run", "inputs", "assumptions", "results", "warnings", "cautions"];
 
-    private static readonly string[] SectionTitles = ["What was run", "Assumptions", "Results", "Warnings", "Cautions"];
+    /// <summary>A table wider than this many columns is printed in parts of at most this many, its leading text columns repeated in each.</summary>
+    public const int PrintColumns = 11;
+
+    private static readonly string[] SectionTitles = ["What was run", "Inputs", "Assumptions", "Results", "Warnings", "Cautions"];
 
     /// <summary>The page as a string.</summary>
     public static string Build(ReportModel model)
@@ -58,7 +61,9 @@ public static partial class HtmlReport
         KeyValues(page, run);
         Close(page);
 
-        Open(page, 1);
+        Sections(page, 1, model.Inputs, "The inputs are listed under What was run.");
+
+        Open(page, 2);
         var a = model.Assumptions;
         var assumptions = new List<ReportKeyValue>
         {
@@ -74,20 +79,9 @@ public static partial class HtmlReport
         KeyValues(page, assumptions);
         Close(page);
 
-        Open(page, 2);
-        if (model.Results.Count == 0)
-        {
-            page.Append("<p>No results.</p>\n");
-        }
+        Sections(page, 3, model.Results, "No results.");
 
-        foreach (var section in model.Results)
-        {
-            Section(page, section, 3);
-        }
-
-        Close(page);
-
-        Open(page, 3);
+        Open(page, 4);
         if (model.Warnings.Count == 0)
         {
             page.Append("<p>No warnings.</p>\n");
@@ -99,7 +93,7 @@ public static partial class HtmlReport
 
         Close(page);
 
-        Open(page, 4);
+        Open(page, 5);
         Items(page, Cautions.Report.Concat(model.ExtraCautions).ToArray(), "cautions");
         Close(page);
 
@@ -131,12 +125,29 @@ public static partial class HtmlReport
     private static void Open(StringBuilder page, int index) =>
         page.Append("<section id=\"").Append(SectionIds[index]).Append("\">\n<h2>").Append(SectionTitles[index]).Append("</h2>\n");
 
+    private static void Sections(StringBuilder page, int index, IReadOnlyList<ReportSection> sections, string whenNone)
+    {
+        Open(page, index);
+        if (sections.Count == 0)
+        {
+            page.Append("<p>").Append(E(whenNone)).Append("</p>\n");
+        }
+
+        foreach (var section in sections)
+        {
+            Section(page, section, 3);
+        }
+
+        Close(page);
+    }
+
     private static void Close(StringBuilder page) => page.Append("</section>\n");
 
     private static void Section(StringBuilder page, ReportSection section, int level)
     {
         int h = Math.Min(level, 6);
-        page.Append("<section class=\"result\">\n<h").Append(h).Append('>').Append(E(section.Heading)).Append("</h").Append(h).Append(">\n");
+        bool chartOnly = section.Subsections.Count == 0 && section.Blocks.Count == 1 && section.Blocks[0] is ReportChart;
+        page.Append(chartOnly ? "<section class=\"result chart\">\n<h" : "<section class=\"result\">\n<h").Append(h).Append('>').Append(E(section.Heading)).Append("</h").Append(h).Append(">\n");
         foreach (var block in section.Blocks)
         {
             Block(page, block);
@@ -203,21 +214,65 @@ public static partial class HtmlReport
             }
         }
 
-        page.Append("<div class=\"table-wrap\"><table>\n<caption>").Append(E(table.Caption)).Append("</caption>\n<thead><tr>");
-        foreach (var header in table.Headers)
+        var parts = PrintParts(table);
+        if (parts.Count == 1)
         {
-            page.Append("<th scope=\"col\">").Append(E(header)).Append("</th>");
+            TableHtml(page, table, parts[0], "table-wrap", table.Caption);
+            return;
+        }
+
+        // On screen the whole table (scrolling sideways when it must); on paper the same table in parts that fit the page.
+        TableHtml(page, table, [.. Enumerable.Range(0, table.Headers.Count)], "table-wrap screen-only", table.Caption);
+        for (int p = 0; p < parts.Count; p++)
+        {
+            TableHtml(page, table, parts[p], "table-wrap print-only", $"{table.Caption} (part {p + 1} of {parts.Count})");
+        }
+    }
+
+    /// <summary>
+    /// The columns of each printed part of a table: the whole table when it has at most <see cref="PrintColumns"/>
+    /// columns; else its leading text columns (up to three: climate, variant, ...) and as many of the rest as fit.
+    /// </summary>
+    public static IReadOnlyList<IReadOnlyList<int>> PrintParts(ReportTable table)
+    {
+        ArgumentNullException.ThrowIfNull(table);
+        int n = table.Headers.Count;
+        if (n <= PrintColumns)
+        {
+            return [Enumerable.Range(0, n).ToList()];
+        }
+
+        int keys = 0;
+        while (keys < Math.Min(3, n - 1) && table.Rows.All(r => !Numeric().IsMatch(r[keys])))
+        {
+            keys++;
+        }
+
+        keys = Math.Max(keys, 1);
+        int room = PrintColumns - keys;
+        var rest = Enumerable.Range(keys, n - keys).ToList();
+        int count = (rest.Count + room - 1) / room;
+        int size = (rest.Count + count - 1) / count;
+        return rest.Chunk(size).Select(chunk => (IReadOnlyList<int>)[.. Enumerable.Range(0, keys), .. chunk]).ToList();
+    }
+
+    private static void TableHtml(StringBuilder page, ReportTable table, IReadOnlyList<int> columns, string wrapClass, string caption)
+    {
+        page.Append("<div class=\"").Append(wrapClass).Append("\"><table>\n<caption>").Append(E(caption)).Append("</caption>\n<thead><tr>");
+        foreach (int c in columns)
+        {
+            page.Append("<th scope=\"col\">").Append(E(table.Headers[c])).Append("</th>");
         }
 
         page.Append("</tr></thead>\n<tbody>\n");
         foreach (var row in table.Rows)
         {
             page.Append("<tr>");
-            for (int c = 0; c < row.Count; c++)
+            for (int i = 0; i < columns.Count; i++)
             {
-                string cell = row[c];
-                page.Append(c == 0 ? "<th scope=\"row\"" : "<td").Append(Numeric().IsMatch(cell) ? " class=\"num\">" : ">")
-                    .Append(E(cell)).Append(c == 0 ? "</th>" : "</td>");
+                string cell = row[columns[i]];
+                page.Append(i == 0 ? "<th scope=\"row\"" : "<td").Append(Numeric().IsMatch(cell) ? " class=\"num\">" : ">")
+                    .Append(E(cell)).Append(i == 0 ? "</th>" : "</td>");
             }
 
             page.Append("</tr>\n");
@@ -273,7 +328,27 @@ public static partial class HtmlReport
         #cautions { background: var(--sand); padding: 0.2rem 1.2rem 0.8rem; border-left: 5px solid var(--orange); }
         #cautions h2 { border-bottom-color: var(--orange); }
         footer { margin-top: 2.5rem; border-top: 1px solid var(--rule); color: #555; font-size: 0.85rem; }
-        @media print { body { max-width: none; padding: 0; } nav { display: none; } figure.chart, table { break-inside: avoid; } }
+        .print-only { display: none; }
+        @page { margin: 14mm 12mm 16mm; @bottom-right { content: "Page " counter(page) " of " counter(pages); font: 8pt "DejaVu Sans", sans-serif; color: #555; } }
+        @media print {
+          body { max-width: none; padding: 0; font-size: 9.5pt; }
+          nav { display: none; }
+          .screen-only { display: none; }
+          .print-only { display: block; }
+          h2 { margin-top: 1.2rem; break-before: auto; }
+          h2, h3, h4, h5, h6, caption { break-after: avoid; }
+          .table-wrap { overflow: visible; margin: 0.6rem 0; }
+          table { width: 100%; font-size: 7.5pt; }
+          th, td { padding: 0.15rem 0.3rem; }
+          thead { display: table-header-group; }
+          tr { break-inside: avoid; }
+          section.chart { break-inside: avoid; }
+          figure.chart { margin: 0.4rem 0; break-inside: avoid; }
+          section.chart > :is(h3, h4, h5, h6) { display: none; }
+          figure.chart img { max-height: 7.3cm; width: auto; max-width: 100%; }
+          tbody th { white-space: nowrap; }
+          #cautions { break-inside: avoid; }
+        }
 
         """;
 }

@@ -14,6 +14,9 @@ public sealed record ReportModel
 
     public required ReportAssumptions Assumptions { get; init; }
 
+    /// <summary>Input sections (weather files, settings, variants, defaults), each with tables.</summary>
+    public IReadOnlyList<ReportSection> Inputs { get; init; } = [];
+
     /// <summary>Result sections (per study, per climate ...), each with tables and charts.</summary>
     public IReadOnlyList<ReportSection> Results { get; init; } = [];
 

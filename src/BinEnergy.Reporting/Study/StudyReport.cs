@@ -19,95 +19,24 @@ namespace BinEnergy.Reporting.Study;
 /// </summary>
 public static class StudyReport
 {
-    /// <summary>Renders every chart of the run (per climate: for the first variant; across climates: all cases), by the study's headline method.</summary>
-    public static IReadOnlyList<(string Name, RenderedChart Chart)> Charts(StudyRunResult run)
+    /// <summary>
+    /// Renders every chart of the run, by the study's headline method: per climate its weather (bin hours, the
+    /// psychrometric chart); per climate and charted variant (<see cref="StudyDefinition.DetailVariants"/>) the load
+    /// by bin, the economizer's modes and savings, the monthly energy and the method check; across climates the
+    /// comparisons of every case.
+    /// </summary>
+    public static IReadOnlyList<StudyChart> Charts(StudyRunResult run)
     {
         var u = StudyTables.Units(run);
-        var units = run.Study.Units;
         var headline = run.Study.HeadlineMethod;
         string method = IntegrationMethods.Label(headline);
-        string tUnit = u.Temperature.Symbol;
         string eUnit = u.Energy.Symbol;
-        double T(Temperature t) => u.Temperature.FromSi(t.Celsius);
         double E(Energy e) => u.Energy.FromSi(e.Joules);
-        var charts = new List<(string, RenderedChart)>();
-
+        var charts = new List<StudyChart>();
         var slugs = UniqueSlugs(run.Study.Climates.Select(c => c.Name).ToList());
         foreach (var climateCases in run.Cases.GroupBy(c => c.Case.Climate.Name))
         {
-            var first = climateCases.First();
-            string climate = climateCases.Key;
-            string slug = slugs[climate];
-            string subject = $"{climate}, {first.Case.Variant.Name}";
-            var bins = first.OutdoorAir.Bins;
-
-            charts.Add(($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
-            {
-                Subject = climate,
-                TemperatureUnit = tUnit,
-                Bins = bins.Select(b => new BinHoursRow(T(b.Bin.Low), T(b.Bin.High), b.Bin.Occupied.Hours, b.Bin.Unoccupied.Hours,
-                    b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
-            })));
-
-            charts.Add(($"load-by-bin-{slug}", LoadByBinChart.Render(new LoadByBinData
-            {
-                Subject = $"{subject} ({method})",
-                TemperatureUnit = tUnit,
-                EnergyUnit = eUnit,
-                Bins = bins.Select(b =>
-                {
-                    var l = b.Figures[headline].Loads;
-                    return new LoadByBinRow(T(b.Bin.Low), T(b.Bin.High), E(l.Heating), E(l.CoolingSensible), E(l.CoolingLatent), E(l.Humidification));
-                }).ToList(),
-            })));
-
-            var eco = first.Economizer;
-            EconomizerRegionLimits? region = eco is null ? null : new EconomizerRegionLimits(
-                "differential enthalpy region (return air)",
-                Math.Min(eco.Settings.ReturnTemperature.Celsius, eco.Settings.Limits.DryBulb.Celsius),
-                eco.Model.ReturnEnthalpyJPerKg);
-            charts.Add(($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
-                climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region))));
-
-            if (eco is not null)
-            {
-                var best = eco.Best(headline);
-                charts.Add(($"economizer-modes-{slug}", EconomizerModesChart.Render(new EconomizerModesData
-                {
-                    Subject = subject,
-                    ControlName = best.Control.Describe(),
-                    TemperatureUnit = tUnit,
-                    Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
-                        best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
-                })));
-                charts.Add(($"economizer-savings-{slug}", EconomizerSavingsChart.Render(new SavingsByControlData
-                {
-                    Subject = $"{subject} ({method})",
-                    EnergyUnit = eUnit + " coil",
-                    Controls = eco.Controls.Select(c => new ControlSavingsRow(c.Control.Describe(), E(c.Savings(headline)))).ToList(),
-                })));
-            }
-
-            charts.Add(($"monthly-{slug}", MonthlyEnergyChart.Render(new MonthlyEnergyData
-            {
-                Subject = $"{subject} ({method})",
-                EnergyUnit = eUnit,
-                Series =
-                [
-                    new MonthlyEnergySeries("heating", Months(first, headline, l => E(l.Heating)), ChartPalette.Heating),
-                    new MonthlyEnergySeries("sensible cooling", Months(first, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
-                    new MonthlyEnergySeries("latent cooling", Months(first, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
-                ],
-            })));
-
-            var annual = first.OutdoorAir.Annual;
-            charts.Add(($"method-check-{slug}", MethodCheckChart.Render(new MethodCheckData
-            {
-                Subject = subject,
-                EnergyUnit = eUnit,
-                Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
-                    .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
-            })));
+            charts.AddRange(ClimateCharts(run, climateCases.ToList(), slugs[climateCases.Key]));
         }
 
         var comparison = new ComparisonData
@@ -127,13 +56,122 @@ public static class StudyReport
                 };
             }).ToList(),
         };
-        charts.Add(("comparison-energy", ComparisonChart.RenderEnergy(comparison)));
-        charts.Add(("comparison-cost", ComparisonChart.RenderCost(comparison)));
+        charts.Add(new("comparison-energy", ComparisonChart.RenderEnergy(comparison), null, null));
+        charts.Add(new("comparison-cost", ComparisonChart.RenderCost(comparison), null, null));
         return charts;
     }
 
+    /// <summary>
+    /// The charts of one climate: its weather (bin hours, the psychrometric chart with the economizer region of its first
+    /// detailed variant), then for each variant the study details (<see cref="StudyDefinition.DetailVariants"/>) the load
+    /// by bin, the economizer's modes and savings, the monthly energy and the method check; file names end in
+    /// <paramref name="slug"/> (and the variant's).
+    /// </summary>
+    /// <param name="run">The run (its study's units, headline method and variants).</param>
+    /// <param name="climateCases">The climate's cases, in variant order.</param>
+    /// <param name="slug">The climate's file-name-safe name (<see cref="UniqueSlugs"/>).</param>
+    public static IReadOnlyList<StudyChart> ClimateCharts(StudyRunResult run, IReadOnlyList<StudyCaseResult> climateCases, string slug)
+    {
+        var u = StudyTables.Units(run);
+        var units = run.Study.Units;
+        var headline = run.Study.HeadlineMethod;
+        string method = IntegrationMethods.Label(headline);
+        string tUnit = u.Temperature.Symbol;
+        string eUnit = u.Energy.Symbol;
+        double T(Temperature t) => u.Temperature.FromSi(t.Celsius);
+        double E(Energy e) => u.Energy.FromSi(e.Joules);
+        var charts = new List<StudyChart>();
+        var variantSlugs = UniqueSlugs(run.Study.Variants.Select(v => v.Name).ToList(), "variant");
+        var charted = DetailedVariants(run.Study);
+        string climate = climateCases[0].Case.Climate.Name;
+        var shown = climateCases.Where(c => charted.Contains(c.Case.Variant.Name)).ToList();
+        var first = shown.FirstOrDefault() ?? climateCases[0];
+        var weatherBins = first.OutdoorAir.Bins;
+
+        charts.Add(new($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
+        {
+            Subject = climate,
+            TemperatureUnit = tUnit,
+            Bins = weatherBins.Select(b => new BinHoursRow(T(b.Bin.Low), T(b.Bin.High), b.Bin.Occupied.Hours, b.Bin.Unoccupied.Hours,
+                b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
+        }), climate, null));
+
+        var firstEconomizer = first.Economizer;
+        EconomizerRegionLimits? region = firstEconomizer is null ? null : new EconomizerRegionLimits(
+            "differential enthalpy region (return air)",
+            Math.Min(firstEconomizer.Settings.ReturnTemperature.Celsius, firstEconomizer.Settings.Limits.DryBulb.Celsius),
+            firstEconomizer.Model.ReturnEnthalpyJPerKg);
+        charts.Add(new($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
+            climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region)), climate, null));
+
+        foreach (var c in shown)
+        {
+            string variant = c.Case.Variant.Name;
+            string stem = slug + "-" + variantSlugs[variant];
+            string subject = $"{climate}, {variant}";
+            void Add(string kind, RenderedChart chart) => charts.Add(new($"{kind}-{stem}", chart, climate, variant));
+
+            Add("load-by-bin", LoadByBinChart.Render(new LoadByBinData
+            {
+                Subject = $"{subject} ({method})",
+                TemperatureUnit = tUnit,
+                EnergyUnit = eUnit,
+                Bins = c.OutdoorAir.Bins.Select(b =>
+                {
+                    var l = b.Figures[headline].Loads;
+                    return new LoadByBinRow(T(b.Bin.Low), T(b.Bin.High), E(l.Heating), E(l.CoolingSensible), E(l.CoolingLatent), E(l.Humidification));
+                }).ToList(),
+            }));
+
+            if (c.Economizer is { } eco)
+            {
+                var best = eco.Best(headline);
+                Add("economizer-modes", EconomizerModesChart.Render(new EconomizerModesData
+                {
+                    Subject = subject,
+                    ControlName = best.Control.Describe(),
+                    TemperatureUnit = tUnit,
+                    Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
+                        best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
+                }));
+                Add("economizer-savings", EconomizerSavingsChart.Render(new SavingsByControlData
+                {
+                    Subject = $"{subject} ({method})",
+                    EnergyUnit = eUnit + " coil",
+                    Controls = eco.Controls.Select(x => new ControlSavingsRow(x.Control.Describe(), E(x.Savings(headline)))).ToList(),
+                }));
+            }
+
+            Add("monthly", MonthlyEnergyChart.Render(new MonthlyEnergyData
+            {
+                Subject = $"{subject} ({method})",
+                EnergyUnit = eUnit,
+                Series =
+                [
+                    new MonthlyEnergySeries("heating", Months(c, headline, l => E(l.Heating)), ChartPalette.Heating),
+                    new MonthlyEnergySeries("sensible cooling", Months(c, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
+                    new MonthlyEnergySeries("latent cooling", Months(c, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
+                ],
+            }));
+
+            var annual = c.OutdoorAir.Annual;
+            Add("method-check", MethodCheckChart.Render(new MethodCheckData
+            {
+                Subject = subject,
+                EnergyUnit = eUnit,
+                Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
+                    .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
+            }));
+        }
+
+        return charts;
+    }
+
+    /// <summary>The variants the report charts one by one: those <c>[report] detail_variants</c> names (every variant unless the study says).</summary>
+    public static IReadOnlySet<string> DetailedVariants(StudyDefinition study) => study.DetailVariants.ToHashSet(StringComparer.Ordinal);
+
     /// <summary>The report model of a run, with its charts.</summary>
-    public static ReportModel Model(StudyRunResult run, IReadOnlyList<(string Name, RenderedChart Chart)> charts, DateTimeOffset runAt)
+    public static ReportModel Model(StudyRunResult run, IReadOnlyList<StudyChart> charts, DateTimeOffset runAt)
     {
         var u = StudyTables.Units(run);
         var headline = run.Study.HeadlineMethod;
@@ -157,22 +195,45 @@ public static class StudyReport
         {
             new("Climates",
             [
-                Table(climateTable, "Each climate's record: site, air density and sensible factor, degree-days and design conditions"),
+                Table(climateTable, "Each climate's degree-days and design conditions (its site is under Inputs)"),
                 .. climateTable.Notes.Select(n => new ReportParagraph(n)),
             ]),
             new($"Annual outdoor-air loads, cost and carbon ({IntegrationMethods.Label(headline)})",
             [
                 Table(summary.Table("headline"), $"Per climate and variant, {IntegrationMethods.Label(headline)} (the headline method)"),
             ]),
-            new("Method check",
-            [
-                Table(summary.Table("method_check"), "Each annual figure by the hourly sum, joint bins and the bin method, with each bin method's difference from hourly"),
-                new ReportParagraph("When to use which: the hourly sum is the reference wherever an hourly record exists. "
-                    + "The bin method is the right tool when only bin data are at hand, and to explain where in the year the load falls; "
-                    + "it misses latent loads because a bin's mean humidity ratio hides its humid hours. Joint dry-bulb x humidity bins close most of that error. "
-                    + AssumptionText.LatentError),
-            ]),
         };
+        var peaks = summary.Table("peaks");
+        if (peaks.RowCount > 0)
+        {
+            sections.Add(new ReportSection("Peak outdoor-air loads at the design conditions",
+            [
+                Table(peaks, "The outdoor air's load at each design condition of the climate (heating: sensible and humidification; cooling and dehumidification: the total)"),
+            ]));
+        }
+
+        var detailed = DetailedVariants(run.Study);
+        string which = detailed.Count == run.Study.Variants.Count ? string.Empty
+            : " Shown for the variants the study details ([report] detail_variants: " + string.Join(", ", run.Study.DetailVariants) + "); tables/ and summary.json hold every variant.";
+        var economizer = summary.Table("economizer");
+        if (economizer.RowCount > 0)
+        {
+            sections.Add(new ReportSection("Economizer",
+            [
+                Table(economizer, detailed, $"Every control against the same system without an economizer: hours by mode, energy and cost saved ({IntegrationMethods.Label(headline)})"),
+                new ReportParagraph("The savings are of the cooling coil (and of reheat and preheat where the system has them) against the baseline; "
+                    + "the modes are counted over the hours the system runs. The per-bin modes are in tables/economizer and on each variant's modes chart." + which),
+            ]));
+        }
+
+        sections.Add(new ReportSection("Method check",
+        [
+            Table(summary.Table("method_check"), detailed, "Each annual figure by the hourly sum, joint bins and the bin method, with each bin method's difference from hourly"),
+            new ReportParagraph("When to use which: the hourly sum is the reference wherever an hourly record exists. "
+                + "The bin method is the right tool when only bin data are at hand, and to explain where in the year the load falls; "
+                + "it misses latent loads because a bin's mean humidity ratio hides its humid hours. Joint dry-bulb x humidity bins close most of that error. "
+                + AssumptionText.LatentError + which),
+        ]));
         if (run.Cases.Any(c => c.IsMultiYear))
         {
             sections.Add(new ReportSection("Year-to-year spread",
@@ -182,10 +243,7 @@ public static class StudyReport
             ]));
         }
 
-        foreach (var (name, chart) in charts)
-        {
-            sections.Add(new ReportSection(chart.Title, [new ReportChart(chart, chart.Description)]));
-        }
+        sections.AddRange(ChartSections(run, charts));
 
         return new ReportModel
         {
@@ -204,11 +262,12 @@ public static class StudyReport
                 EngineVersion = run.EngineVersion,
                 RunAt = runAt,
             },
+            Inputs = Inputs(run, summary),
             Assumptions = new ReportAssumptions
             {
                 FlowBasis = a.FlowBasis.ToString().ToLowerInvariant(),
-                AirDensity = DisplayUnits.Text(u.Density, a.DryAirDensity) + " of dry air (first climate)",
-                SiteSensibleFactor = DisplayUnits.Text(u.SensibleFactor, a.Factors.SensibleSi) + " at the first climate",
+                AirDensity = Span(run, u.Density, c => c.OutdoorAir.Assumptions.DryAirDensity) + " of dry air (each climate's under Inputs, Weather files)",
+                SiteSensibleFactor = Span(run, u.SensibleFactor, c => c.OutdoorAir.Assumptions.Factors.SensibleSi) + " (each climate's under Inputs)",
                 BinWidth = AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol),
                 Calendar = a.Calendar,
                 Schedule = a.Schedule + "; " + AssumptionText.Clock(a.DaylightSaving),
@@ -219,11 +278,108 @@ public static class StudyReport
         };
     }
 
+    /// <summary>
+    /// The inputs a reader needs to repeat the run: each weather file and the site it sets; every key the study
+    /// sets, as written; each variant as the keys it changes against the base; the defaults taken for keys left out.
+    /// </summary>
+    private static IReadOnlyList<ReportSection> Inputs(StudyRunResult run, ResultDocument summary)
+    {
+        var settings = run.Study.Settings
+            .Select(s => (Table: s.Key[..Math.Max(s.Key.IndexOf('.', StringComparison.Ordinal), 0)], Key: s.Key[(s.Key.IndexOf('.', StringComparison.Ordinal) + 1)..], s.Value))
+            .Select(s => (IReadOnlyList<string>)[s.Table, s.Key, s.Value, Meaning(s.Table, s.Key)])
+            .ToList();
+        var variants = run.Study.Variants
+            .Select(v => (IReadOnlyList<string>)[v.Name, v.Changes.Count == 0 ? "nothing: the study's settings as they are" : string.Join("; ", v.Changes)])
+            .ToList();
+        int variantCount = run.Study.Variants.Count;
+        var defaults = run.Cases
+            .SelectMany(c => c.Case.Assumptions.Select(text => (Text: text, Variant: c.Case.Variant.Name)))
+            .GroupBy(x => x.Text, StringComparer.Ordinal)
+            .Select(g =>
+            {
+                var names = g.Select(x => x.Variant).Distinct(StringComparer.Ordinal).ToList();
+                return (IReadOnlyList<string>)[g.Key, names.Count == variantCount ? "every variant" : string.Join(", ", names)];
+            })
+            .ToList();
+
+        return
+        [
+            new ReportSection("Weather files", [Table(summary.Table("weather_files"), "Each climate's weather file, its period and hours, and the site it sets")]),
+            new ReportSection("Study settings",
+            [
+                new ReportTable("Every key the study file sets, as written (the unit is in the key's name)", ["Table", "Key", "Value", "Meaning"], settings),
+            ]),
+            new ReportSection("Variants",
+            [
+                new ReportTable("Each variant as the settings it changes against the study's own", ["Variant", "Changes"], variants),
+            ]),
+            new ReportSection("Defaults taken",
+            [
+                new ReportTable("Keys the study leaves out, and the value the engine took for them", ["Default", "Variants"], defaults),
+            ]),
+        ];
+    }
+
+    private static string Meaning(string table, string key)
+    {
+        try
+        {
+            return StudyKeys.Describe(table, key).Description;
+        }
+        catch (KeyNotFoundException)
+        {
+            return string.Empty;
+        }
+    }
+
+    /// <summary>A value across the climates: one value, or the lowest to the highest.</summary>
+    private static string Span(StudyRunResult run, DisplayUnit unit, Func<StudyCaseResult, double> si)
+    {
+        var values = run.Cases.Select(si).ToList();
+        double low = values.Min(), high = values.Max();
+        return DisplayUnits.Text(unit, low) is var l && DisplayUnits.Text(unit, high) is var h && l == h ? l : $"{l} to {h}";
+    }
+
+    /// <summary>The charts as report sections: per climate its weather, then each charted variant; then the comparisons.</summary>
+    private static IEnumerable<ReportSection> ChartSections(StudyRunResult run, IReadOnlyList<StudyChart> charts)
+    {
+        static ReportSection One(StudyChart c) => new(c.Chart.Title, [new ReportChart(c.Chart, c.Chart.Description)]);
+        foreach (var climate in run.Study.Climates.Select(c => c.Name))
+        {
+            var own = charts.Where(c => c.Climate == climate).ToList();
+            if (own.Count == 0)
+            {
+                continue;
+            }
+
+            var byVariant = own.Where(c => c.Variant is not null).GroupBy(c => c.Variant!)
+                .Select(g => new ReportSection($"{climate}, {g.Key}", []) { Subsections = g.Select(One).ToList() });
+            yield return new ReportSection($"Charts: {climate}", [])
+            {
+                Subsections = [.. own.Where(c => c.Variant is null).Select(One), .. byVariant],
+            };
+        }
+
+        var across = charts.Where(c => c.Climate is null).ToList();
+        if (across.Count > 0)
+        {
+            yield return new ReportSection("Charts across climates", []) { Subsections = across.Select(One).ToList() };
+        }
+    }
+
     /// <summary>A result table as a report table: the cells the terminal shows (<see cref="TextRenderer.Grid"/>).</summary>
     public static ReportTable Table(ResultTable table, string caption)
     {
         var (headings, rows, _) = TextRenderer.Grid(table);
         return new ReportTable(caption, headings, rows);
+    }
+
+    /// <summary>The rows of a result table whose <c>variant</c> is one of <paramref name="variants"/>, as a report table.</summary>
+    private static ReportTable Table(ResultTable table, IReadOnlySet<string> variants, string caption)
+    {
+        var full = Table(table, caption);
+        var keep = table["variant"].Texts;
+        return full with { Rows = full.Rows.Where((_, i) => variants.Contains(keep[i])).ToList() };
     }
 
     /// <summary>Writes the charts into <c>charts/</c> and the report into <c>report.html</c> of the folder being written.</summary>

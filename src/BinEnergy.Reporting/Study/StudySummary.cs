@@ -36,6 +36,7 @@ public static class StudySummary
             .Integer("variants", "Variants", r => r.Study.Variants.Count)
             .Fill(new ResultTable(JsonRenderer.FactsTable) { Layout = TableLayout.Record, ShowInTerminal = false }, [run]));
 
+        doc.Add(WeatherFiles(run, u));
         var climates = run.Cases.GroupBy(c => c.Case.Climate.Name)
             .Select(g => (Case: g.First(), DegreeDays: StudyTables.DegreeDaysPerYear(g.First(), run.Study.DegreeDayMethod, u.DegreeDayBaseC), Design: g.First().OutdoorAir.Design!))
             .ToList();
@@ -44,10 +45,10 @@ public static class StudySummary
             .Text("site", "Site in the file", x => x.Case.Weather.Site.Name, detail: true)
             .Integer("hours_in_record", "Hours", x => x.Case.Weather.Count, detail: true)
             .Text("humidity_over", "Dew points over", x => x.Case.Weather.HumidityOver == Core.Psychrometrics.HumidityOver.Water ? "water" : "ice", detail: true)
-            .Number("elevation", u.Length, "Elevation", x => x.Case.Weather.Site.ElevationM ?? double.NaN)
-            .Number("site_pressure", u.Pressure, "Site pressure", x => x.Case.Weather.Site.SitePressurePa)
-            .Number("dry_air_density", u.Density, "Dry-air density", x => x.Case.OutdoorAir.Assumptions.DryAirDensity)
-            .Number("site_sensible_factor", u.SensibleFactor, "Sensible factor", x => x.Case.OutdoorAir.Assumptions.Factors.SensibleSi)
+            .Number("elevation", u.Length, "Elevation", x => x.Case.Weather.Site.ElevationM ?? double.NaN, detail: true)
+            .Number("site_pressure", u.Pressure, "Site pressure", x => x.Case.Weather.Site.SitePressurePa, detail: true)
+            .Number("dry_air_density", u.Density, "Dry-air density", x => x.Case.OutdoorAir.Assumptions.DryAirDensity, detail: true)
+            .Number("site_sensible_factor", u.SensibleFactor, "Sensible factor", x => x.Case.OutdoorAir.Assumptions.Factors.SensibleSi, detail: true)
             .Text("degree_day_method", "Degree-days", _ => DegreeDayMethods.Name(run.Study.DegreeDayMethod), detail: true)
             .Number("heating_degree_days", u.DegreeDays, "HDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.DegreeDays.Heating)
             .Number("cooling_degree_days", u.DegreeDays, "CDD " + u.Temperature.FromSi(u.DegreeDayBaseC).ToString("0.#", System.Globalization.CultureInfo.InvariantCulture), x => x.DegreeDays.Cooling)
@@ -57,7 +58,7 @@ public static class StudySummary
             .Number("dehumidification_0_4_dewpoint", u.Temperature, "Dew point 0.4 %", x => x.Design.Dehumidification[0].DewPointC)
             .Fill(new ResultTable("climates")
             {
-                Title = "Climates: the site, degree-days and design conditions of each record",
+                Title = "Climates: the degree-days and design conditions of each record (the site of each in weather_files)",
                 ShowInTerminal = false,
                 Notes =
                 {
@@ -108,6 +109,8 @@ public static class StudySummary
             .Fill(new ResultTable("economizer") { Title = $"Economizer controls against the baseline, {IntegrationMethods.Label(headline)}", ShowInTerminal = false },
                 run.Cases.Where(c => c.Economizer is not null).SelectMany(c => c.Economizer!.Controls.Select(x => (c, x)))));
 
+        doc.Add(StudyTables.Peaks(run.Cases, u, show, showInTerminal: false));
+
         doc.Add(new ColumnSet<(StudyCaseResult Case, string Text)>()
             .Add(StudyTables.CaseColumns, x => x.Case)
             .Text("assumption", "Assumption", x => x.Text)
@@ -117,6 +120,40 @@ public static class StudySummary
         doc.NoteAll(NoteKind.Warning, run.Warnings);
         doc.NoteAll(NoteKind.Caution, Cautions.OutdoorAir);
         return doc;
+    }
+
+    /// <summary>
+    /// The weather file of each climate: the file, the site and station its header names, the layout it was read
+    /// with, its period and hours, and the site it sets (elevation, site pressure and where it came from, the
+    /// dry-air density of the flow basis and the sensible factor).
+    /// </summary>
+    public static ResultTable WeatherFiles(StudyRunResult run, DisplayUnits u) =>
+        new ColumnSet<StudyCaseResult>()
+            .Text("climate", "Climate", c => c.Case.Climate.Name)
+            .Text("weather_file", "Weather file", c => Path.GetFileName(c.Case.Climate.WeatherPath))
+            .Text("source", "Source (site in the file; layout)", c => Source(c))
+            .Text("period", "Period", c => StudyTables.Period(c.Weather))
+            .Integer("hours_in_record", "Hours", c => c.Weather.Count)
+            .Number("elevation", u.Length, "Elevation", c => c.Weather.Site.ElevationM ?? double.NaN)
+            .Number("site_pressure", u.Pressure, "Site pressure", c => c.Weather.Site.SitePressurePa)
+            .Text("site_pressure_from", "Pressure from", c => c.Weather.Site.PressureSource switch
+            {
+                Core.Weather.SitePressureSource.StandardAtmosphereAtElevation => "standard atmosphere at the elevation",
+                Core.Weather.SitePressureSource.RecordMean => "the record's mean pressure",
+                _ => "sea level (assumed)",
+            })
+            .Number("dry_air_density", u.Density, "Dry-air density", c => c.OutdoorAir.Assumptions.DryAirDensity)
+            .Number("site_sensible_factor", u.SensibleFactor, "Sensible factor", c => c.OutdoorAir.Assumptions.Factors.SensibleSi)
+            .Fill(new ResultTable("weather_files") { Title = "The weather files and the site each sets", ShowInTerminal = false },
+                run.Cases.GroupBy(c => c.Case.Climate.Name).Select(g => g.First()));
+
+    private static string Source(StudyCaseResult c)
+    {
+        var site = c.Weather.Site;
+        string name = string.IsNullOrWhiteSpace(site.Name) ? "no site name" : site.Name;
+        string station = site.StationId is { Length: > 0 } id ? $", station {id}" : string.Empty;
+        string layout = c.Case.Climate.Map is { } map ? (map.Contains(Path.DirectorySeparatorChar) ? Path.GetFileName(map) + " map" : map + " layout") : "open layout";
+        return $"{name}{station}; {layout}";
     }
 
     /// <summary>A figure's mean year and its lowest and highest complete year.</summary>
@@ -165,7 +202,12 @@ public static class StudySummary
             "calendar: " + a.Calendar,
             AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol),
             "plant energy of the hourly method uses each hour's outdoor dry-bulb for the COP curves; the bin methods use each bin's or cell's evaluation dry-bulb",
-            "humidification is met by an electric humidifier",
+            c.Case.Plant is { } plant ? "humidification: " + plant.Humidifier switch
+            {
+                Core.Plant.HumidifierType.SteamGas => $"gas-fired steam humidifier, efficiency {plant.HumidifierEfficiency:0.##}",
+                Core.Plant.HumidifierType.Adiabatic => "adiabatic humidifier (the evaporation's heat is bought as heating)",
+                _ => $"electric steam humidifier, efficiency {plant.HumidifierEfficiency:0.##}",
+            } : "no [plant] table: loads only, nothing is bought",
         ];
     }
 

@@ -161,12 +161,13 @@ public static class StudyTables
                 cases.SelectMany(c => YearsOf(c).Where(y => y.Economizer is not null)
                     .SelectMany(y => IntegrationMethods.All.SelectMany(m => y.Economizer!.BaselineAndControls.Select(x => (c, y.Year, x, m))))));
 
-    private static ResultTable Peaks(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>
+    /// <summary>The peak outdoor-air loads at each case's design conditions.</summary>
+    public static ResultTable Peaks(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show, bool showInTerminal = true) =>
         new ColumnSet<(StudyCaseResult Case, OutdoorAirPeak Peak)>()
             .Add(CaseColumns, x => x.Case)
             .Text("condition", "Condition", x => x.Peak.Key)
             .Add(FigureColumns.Peaks(u, show.Recovery), x => x.Peak)
-            .Fill(new ResultTable("peaks") { Title = "Peak outdoor-air loads at the design conditions" },
+            .Fill(new ResultTable("peaks") { Title = "Peak outdoor-air loads at the design conditions", ShowInTerminal = showInTerminal },
                 cases.SelectMany(c => c.OutdoorAir.Peaks?.All.Select(p => (c, p)) ?? []));
 
     private static ResultTable Hourly(IEnumerable<StudyCaseResult> cases, DisplayUnits u, FigureSet show) =>

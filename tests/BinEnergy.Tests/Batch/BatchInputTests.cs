@@ -34,7 +34,7 @@ public sealed class BatchInputTests
         var (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", list, "--out", output, "--csv");
         Assert.True(code == 0, err);
 
-        var summary = BatchFolder.Summary(Path.Combine(output, "summary.json"));
+        var summary = BatchFolder.Summary(Path.Combine(output, "summary.json")).GetProperty("batch");
         Assert.Equal(5, summary.GetProperty("files").GetInt32());
         Assert.Equal(1, summary.GetProperty("done").GetInt32());
         Assert.Equal(4, summary.GetProperty("failed").GetInt32());

@@ -81,7 +81,7 @@ public sealed class BatchResumeTests
         var present = Directory.EnumerateFiles(Path.Combine(killed, "tables"), "*", SearchOption.AllDirectories)
             .Select(p => Path.GetRelativePath(killed, p).Replace(Path.DirectorySeparatorChar, '/')).ToHashSet();
         Assert.Equal(listed, present);
-        Assert.Equal(12, BatchFolder.Summary(Path.Combine(killed, "summary.json")).GetProperty("done").GetInt32());
+        Assert.Equal(12, BatchFolder.Summary(Path.Combine(killed, "summary.json")).GetProperty("batch").GetProperty("done").GetInt32());
 
         // The input list changed (a file more): refused.
         File.Copy(f.File(0), Path.Combine(f.Weather, "station-99.csv"));

@@ -48,11 +48,31 @@ public sealed class BatchRunTests
         }
 
         // 500 rows a part: the bins table (about 25 bins x 3 methods x 3 variants a climate) fills a part every climate or two.
-        var summary = BatchFolder.Summary(Path.Combine(batch, "summary.json"));
+        var summary = BatchFolder.Summary(Path.Combine(batch, "summary.json")).GetProperty("batch");
         Assert.Equal(6, summary.GetProperty("done").GetInt32());
         Assert.Equal(fromBatch["annual"].rows, summary.GetProperty("rows").GetProperty("annual").GetInt32());
         Assert.True(summary.GetProperty("parts").GetInt32() >= 2, "several parts");
         Assert.Equal("Harbor office ventilation options", fromBatch["annual"].metadata["binenergy.study"]);
+
+        // The batch ends with its cross-climate report: report.html, and one summary.json with the figures beside the counts.
+        Assert.True(File.Exists(Path.Combine(batch, "report.html")));
+        var figures = BatchFolder.Summary(Path.Combine(batch, "summary.json"));
+        Assert.Equal(6, figures.GetProperty("climates").GetInt32());
+        Assert.Equal(fromBatch["annual"].metadata["binenergy.study_sha256"], figures.GetProperty("study_sha256").GetString());
+
+        // Its national heating per variant is the lowest, median and highest of the hourly rows DuckDB reads (six climates:
+        // the median is the mean of the third and fourth, Hyndman and Fan 1996 definition 7).
+        var hourly = fromBatch["annual"].all!.Where(r => r["method"].GetString() == "hourly").ToList();
+        var heating = figures.GetProperty("national").EnumerateArray().Where(n => n.GetProperty("figure").GetString() == "Heating").ToList();
+        Assert.Equal(3, heating.Count);
+        foreach (var national in heating)
+        {
+            var values = hourly.Where(r => r["variant"].GetString() == national.GetProperty("variant").GetString()).Select(r => r["heating_kbtu"].GetDouble()).Order().ToList();
+            Assert.Equal(6, values.Count);
+            Assert.Equal(values[0], national.GetProperty("min").GetDouble(), 6);
+            Assert.Equal((values[2] + values[3]) / 2, national.GetProperty("median").GetDouble(), 6);
+            Assert.Equal(values[^1], national.GetProperty("max").GetDouble(), 6);
+        }
     }
 
     [Fact]
@@ -66,7 +86,13 @@ public sealed class BatchRunTests
         {
             (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", f.Weather, "--out", sharded, "--shard", $"{i}/4");
             Assert.True(code == 0, err);
+            Assert.False(File.Exists(Path.Combine(sharded, "report.html")), "a shard of several leaves the report to batch-report");
         }
+
+        // A report of half the shards says which have not finished.
+        (code, _, err) = BatchFolder.Cli("batch-report", sharded);
+        Assert.True(code == 0, err);
+        Assert.Contains("2 of 4 shards have not finished (no summary-shard-I-of-4.json for shard 2, 3)", File.ReadAllText(Path.Combine(sharded, "summary.json")), StringComparison.Ordinal);
 
         // The third part as a Slurm array task (--array=1-4: task 3 is part 2), the fourth as a Kubernetes Indexed Job's index 3.
         var slurm = Support.CliProcess.Run(["batch", f.Study, "--weather", f.Weather, "--out", sharded],
@@ -89,7 +115,20 @@ public sealed class BatchRunTests
         var perShard = four["annual"].all!.GroupBy(r => r["shard"].GetInt32()).ToDictionary(g => g.Key, g => g.Select(r => r["climate"].GetString()).Distinct().Count());
         Assert.Equal(new Dictionary<int, int> { [0] = 3, [1] = 3, [2] = 2, [3] = 2 }, perShard);
         Assert.True(File.Exists(Path.Combine(sharded, "manifest-shard-2-of-4.json")));
-        Assert.Equal(2, BatchFolder.Summary(Path.Combine(sharded, "summary-shard-3-of-4.json")).GetProperty("done").GetInt32());
+        Assert.Equal(2, BatchFolder.Summary(Path.Combine(sharded, "summary-shard-3-of-4.json")).GetProperty("batch").GetProperty("done").GetInt32());
+
+        // batch-report over the four shards: the national table and ranking of the one batch, and the shards' counts added up.
+        (code, _, err) = BatchFolder.Cli("batch-report", sharded);
+        Assert.True(code == 0, err);
+        var whole1 = BatchFolder.Summary(Path.Combine(whole, "summary.json"));
+        var all4 = BatchFolder.Summary(Path.Combine(sharded, "summary.json"));
+        Assert.Equal(whole1.GetProperty("national").GetRawText(), all4.GetProperty("national").GetRawText());
+        Assert.Equal(whole1.GetProperty("ranking").GetRawText(), all4.GetProperty("ranking").GetRawText());
+        var counts = all4.GetProperty("batch");
+        Assert.Equal((10, 10, 0, 4, 4), (counts.GetProperty("files").GetInt32(), counts.GetProperty("done").GetInt32(), counts.GetProperty("failed").GetInt32(),
+            counts.GetProperty("shards").GetInt32(), counts.GetProperty("shards_finished").GetInt32()));
+        Assert.Equal(whole1.GetProperty("batch").GetProperty("rows").GetRawText(), counts.GetProperty("rows").GetRawText());
+        Assert.Empty(all4.GetProperty("warnings").EnumerateArray());
 
         // Names from the files: the site name and the file's id.
         Assert.Contains(one["annual"].all!, r => r["climate"].GetString() == "Aster Flats (station-00)");

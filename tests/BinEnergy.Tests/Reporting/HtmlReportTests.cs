@@ -107,7 +107,7 @@ public class HtmlReportTests
         Assert.Equal("utf-8", doc.CharacterSet, ignoreCase: true);
         var ids = doc.QuerySelectorAll("main > section").Select(s => s.Id ?? "").ToArray();
         Assert.Equal(HtmlReport.SectionIds, ids);
-        Assert.Equal(["What was run", "Assumptions", "Results", "Warnings", "Cautions"], doc.QuerySelectorAll("main > section > h2").Select(h => h.TextContent));
+        Assert.Equal(["What was run", "Inputs", "Assumptions", "Results", "Warnings", "Cautions"], doc.QuerySelectorAll("main > section > h2").Select(h => h.TextContent));
         Assert.All(doc.QuerySelectorAll("nav a"), a => Assert.NotNull(doc.GetElementById(a.GetAttribute("href")!.TrimStart('#'))));
     }
 

@@ -49,6 +49,9 @@ public sealed class StudyFileErrorTests : IDisposable
         var adiabatic = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nhumidifier = \"adiabatic\"\nhumidifier_efficiency = 0.9");
         Add("adiabatic humidifier with an efficiency", (adiabatic.Text, ExampleStudy.LineOf(adiabatic.Text, "humidifier_efficiency")), "key plant.humidifier_efficiency",
             "an adiabatic humidifier has no efficiency here");
+        var detail = ExampleStudy.ReplaceLine("[plant]", "[report]\ndetail_variants = [\"minimun\"]\n\n[plant]");
+        Add("report detailing a variant the study does not have", (detail.Text, ExampleStudy.LineOf(detail.Text, "detail_variants")), "key report.detail_variants",
+            "no variant is named \"minimun\"; did you mean \"minimum\"? (the variants: minimum, plus-30");
         var capacity = ExampleStudy.ReplaceLine("fan_efficiency = 0.6", "fan_efficiency = 0.6\nheating_capacity_btuh = 120000");
         Add("heat-pump capacity on a gas plant", (capacity.Text, ExampleStudy.LineOf(capacity.Text, "heating_capacity_btuh")), "key plant.heating_capacity_btuh",
             "heating_capacity_btuh applies to heating_fuel = \"heat-pump\" only");

@@ -35,6 +35,10 @@ internal static class CrossClimateStudy
 
         """,
         string.Concat(Climates.Select(c => $"[[climate]]\nname = \"{c.Name}\"\nweather = \"{c.Weather}\"\n" + (c.Map is null ? string.Empty : $"map = \"{c.Map}\"\n") + "\n")),
+        Settings);
+
+    /// <summary>The settings and the two variants (recovery, no-recovery), without the header and climates: a batch study is this alone.</summary>
+    public const string Settings =
         """
         [schedule]
         occupied = "Mon-Fri 07:00-19:00"
@@ -63,7 +67,7 @@ internal static class CrossClimateStudy
         name = "no-recovery"
         recovery.enabled = false
 
-        """);
+        """;
 
     /// <summary>The study, parsed from <see cref="Text"/> as if it were a file in the repository root.</summary>
     public static StudyDefinition Definition() => StudyFileReader.Parse(Text, Path.Combine(RepoPaths.Root, "cross-climate-check.toml"), RepoPaths.Root);
