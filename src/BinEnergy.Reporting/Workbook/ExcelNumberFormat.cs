@@ -13,6 +13,9 @@ public static partial class ExcelNumberFormat
     /// <summary>Excel's General format: as many digits as fit.</summary>
     public const string General = "General";
 
+    /// <summary>A whole number with thousands separators (hours, as the terminal shows them).</summary>
+    public const string WholeNumber = "#,##0";
+
     /// <summary>The Excel format for the .NET format <paramref name="dotnet"/> (General when null).</summary>
     public static string From(string? dotnet)
     {

@@ -61,7 +61,7 @@ public static class SummaryWorkbook
                 {
                     ColumnKind.Text => column.Texts[r],
                     ColumnKind.Number => double.IsFinite(column.Numbers[r]) ? new WorkbookNumber(column.Numbers[r], ExcelNumberFormat.From(column.Unit?.Format)) : null,
-                    _ => new WorkbookNumber(column.Integers[r], "#,##0"),
+                    _ => new WorkbookNumber(column.Integers[r], ExcelNumberFormat.WholeNumber),
                 };
                 Add("climate", name, column.Label, value, column.Unit?.Symbol ?? string.Empty);
             }

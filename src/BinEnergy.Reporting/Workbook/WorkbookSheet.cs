@@ -47,7 +47,7 @@ public sealed class WorkbookSheet
 
     /// <summary>
     /// A result table as a sheet: every column (those kept out of the terminal too), in order, headed by its label and unit;
-    /// numbers at full precision in the unit's number format; text made printable.
+    /// numbers at full precision in the unit's number format, whole numbers (hours, months) with thousands separators; text made printable.
     /// </summary>
     public static WorkbookSheet From(ResultTable table)
     {
@@ -56,7 +56,7 @@ public sealed class WorkbookSheet
         {
             ColumnKind.Text => null,
             ColumnKind.Number => ExcelNumberFormat.From(c.Unit?.Format),
-            _ => ExcelNumberFormat.General,
+            _ => ExcelNumberFormat.WholeNumber,
         }).ToList();
         var rows = Enumerable.Range(0, table.RowCount)
             .Select(r => (IReadOnlyList<object?>)table.Columns.Select(c => Cell(c, r)).ToList())

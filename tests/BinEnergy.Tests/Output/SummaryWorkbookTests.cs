@@ -70,6 +70,7 @@ public sealed class SummaryWorkbookTests : IDisposable
         int heating = annual.Headings.IndexOf("Heating, kBtu");
         Assert.True(heating >= 0, string.Join(" | ", annual.Headings));
         Assert.Equal("#,##0", FormatOf(annual.Cells[0][heating]));
+        Assert.Equal("#,##0", FormatOf(annual.Cells[0][annual.Headings.IndexOf("Hours ventilated")])); // 3,392 h
         var bins = Read(workbook, sheets.Single(s => s.Name == "bins"));
         Assert.Equal("0.0", FormatOf(bins.Cells[0][bins.Headings.IndexOf("Bin from, F")]));
         Assert.Contains("Mean coincident humidity ratio, gr/lb", bins.Headings);
