@@ -54,6 +54,6 @@ public static class BinHoursChart
         }
 
         canvas.ShowLegendBelow();
-        return canvas.Render(FileStem, $"Hours per year in each {unit} dry-bulb bin, occupied and unoccupied, with the mean coincident wet-bulb of each bin.", size ?? ChartSize.Report);
+        return canvas.Render(FileStem, $"Hours per year in each {BinAxis.WidthText(edges, unit)} dry-bulb bin, occupied and unoccupied, with the mean coincident wet-bulb of each bin.", size ?? ChartSize.Report);
     }
 }

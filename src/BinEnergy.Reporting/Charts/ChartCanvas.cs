@@ -14,6 +14,7 @@ internal sealed class ChartCanvas
     public const float LabelSize = 15;
     public const float TickSize = 13;
     public const float LegendSize = 13;
+    public const float ValueLabelSize = 11;
 
     private readonly List<PlottedSeries> series = [];
     private IReadOnlyList<string>? categories;
@@ -55,22 +56,35 @@ internal sealed class ChartCanvas
     public static string FormatTick(double value) =>
         Math.Abs(value) < 1e-9 ? "0" : value.ToString("#,0.###", CultureInfo.InvariantCulture);
 
+    /// <summary>
+    /// The title as drawn at this width: on one line when it fits (about 10 px per character at
+    /// the title size), else broken after "{what}" so the subject goes on a second line rather
+    /// than off the edge.
+    /// </summary>
+    internal static string FitTitle(string title, int widthPx)
+    {
+        int fits = (int)(widthPx * 0.94 / (TitleSize * 0.56));
+        int dash = title.IndexOf(" — ", StringComparison.Ordinal);
+        return title.Length <= fits || dash < 0 ? title : title[..dash] + "\n" + title[(dash + 3)..];
+    }
+
     /// <summary>A title "{what} — {subject}", or just what when there is no subject.</summary>
     public static string TitleFor(string what, string? subject) =>
         string.IsNullOrWhiteSpace(subject) ? what : what + " — " + subject.Trim();
 
     public void Record(PlottedSeries plotted) => series.Add(plotted);
 
-    /// <summary>Adds a legend entry for a filled shape.</summary>
-    public void LegendFill(string label, ChartColor color, IHatch? hatch = null) =>
+    /// <summary>Adds a legend entry for a filled shape (optionally translucent, as drawn, and
+    /// with the shape's own outline colour).</summary>
+    public void LegendFill(string label, ChartColor color, IHatch? hatch = null, double alpha = 1, ChartColor? outline = null) =>
         Plot.Legend.ManualItems.Add(new LegendItem
         {
             LabelText = label,
-            FillColor = color.ToScottPlot(),
+            FillColor = color.ToScottPlot().WithAlpha(alpha),
             FillHatch = hatch,
             FillHatchColor = ChartPalette.Ink.ToScottPlot().WithAlpha(0.55),
-            OutlineColor = ChartPalette.Ink.ToScottPlot(),
-            OutlineWidth = 1,
+            OutlineColor = (outline ?? ChartPalette.Ink).ToScottPlot(),
+            OutlineWidth = outline is null ? 1 : 2,
         });
 
     /// <summary>Adds a legend entry for a line (with an optional marker).</summary>
@@ -310,12 +324,14 @@ internal sealed class ChartCanvas
         }
 
         ApplyCategories(size);
+        Plot.Title(FitTitle(Title, size.Width), TitleSize);
         byte[] png = Plot.GetImageBytes(size.Width, size.Height, ImageFormat.Png);
         // ScottPlot embeds heatmaps in SVG as small bitmaps; keep their cells sharp when a
         // viewer scales them up, as in the PNG.
         string svg = Plot.GetSvgXml(size.Width, size.Height)
             .Replace("<image ", "<image style=\"image-rendering:pixelated\" ", StringComparison.Ordinal);
-        return new RenderedChart(fileStem, Title, description, size, png, svg, series.ToArray(), isEmpty);
+        var legend = Plot.Legend.ManualItems.Select(i => i.LabelText).ToArray();
+        return new RenderedChart(fileStem, Title, description, size, png, svg, series.ToArray(), isEmpty) { LegendLabels = legend };
     }
 
     private static double RequireFinite(double value, string label, int index)
@@ -346,6 +362,9 @@ internal sealed class ChartCanvas
         if (bars.Count > 0)
         {
             var plot = Plot.Add.Bars(bars);
+            plot.ValueLabelStyle.FontSize = ValueLabelSize;
+            plot.ValueLabelStyle.FontName = ChartFonts.FamilyName;
+            plot.ValueLabelStyle.ForeColor = ChartPalette.Ink.ToScottPlot();
             if (layer.YAxis is not null)
             {
                 plot.Axes.YAxis = layer.YAxis;
@@ -353,6 +372,6 @@ internal sealed class ChartCanvas
         }
 
         Record(new PlottedSeries(layer.Label, PlottedSeriesKind.Bars, bars.Select(b => b.Position).ToArray(), bars.Select(b => b.Value - b.ValueBase).ToArray()));
-        LegendFill(layer.Label, layer.Color, layer.Hatch);
+        LegendFill(layer.LegendText ?? layer.Label, layer.Color, layer.Hatch);
     }
 }

@@ -11,8 +11,8 @@ namespace BinEnergy.Reporting.Charts;
 /// </summary>
 public static class ComparisonChart
 {
-    public const string EnergyFileStem = "comparison-annual-energy";
-    public const string CostFileStem = "comparison-annual-cost";
+    public const string EnergyFileStem = "comparison-energy";
+    public const string CostFileStem = "comparison-cost";
 
     public static RenderedChart RenderEnergy(ComparisonData data, ChartSize? size = null)
     {

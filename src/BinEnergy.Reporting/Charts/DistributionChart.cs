@@ -67,9 +67,9 @@ public static class DistributionChart
         {
             canvas.Plot.Axes.SetLimitsX(-0.6, data.Variants.Count - 0.4);
             EconomizerSavingsChart.FitFromZero(canvas.Plot, canvas.Plot.Axes.Left, all);
-            canvas.LegendFill("quartiles (box), median (line), lowest to highest (whiskers)", ChartPalette.Rule);
-            canvas.LegendLine("mean", ChartPalette.Ink, 0, LinePattern.Solid, MarkerShape.FilledDiamond);
-            canvas.LegendLine("one climate", ChartPalette.Rule, 0, LinePattern.Solid, MarkerShape.FilledCircle);
+            canvas.LegendFill("Quartiles (box), median (line), lowest to highest (whiskers)", ChartPalette.Rule);
+            canvas.LegendLine("Mean", ChartPalette.Ink, 0, LinePattern.Solid, MarkerShape.FilledDiamond);
+            canvas.LegendLine("One climate", ChartPalette.Rule, 0, LinePattern.Solid, MarkerShape.FilledCircle);
         }
 
         canvas.ShowLegendBelow();

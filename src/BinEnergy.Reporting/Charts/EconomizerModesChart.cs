@@ -8,7 +8,7 @@ namespace BinEnergy.Reporting.Charts;
 /// </summary>
 public static class EconomizerModesChart
 {
-    public const string FileStem = "economizer-modes-by-bin";
+    public const string FileStem = "economizer-modes";
     public const string NoCoolingLabel = "No cooling";
     public const string FreeCoolingLabel = "Free cooling";
     public const string IntegratedLabel = "Integrated (economizer + coil)";
@@ -41,6 +41,6 @@ public static class EconomizerModesChart
         }
 
         canvas.ShowLegendBelow();
-        return canvas.Render(FileStem, $"Occupied hours per year in each economizer mode by dry-bulb bin ({data.ControlName}).", size ?? ChartSize.Report);
+        return canvas.Render(FileStem, $"Occupied hours per year in each economizer mode under the {data.ControlName} control, stacked in each {BinAxis.WidthText(edges, data.TemperatureUnit)} dry-bulb bin.", size ?? ChartSize.Report);
     }
 }

@@ -10,7 +10,7 @@ namespace BinEnergy.Reporting.Charts;
 /// </summary>
 public static class EconomizerSavingsChart
 {
-    public const string FileStem = "economizer-savings-by-control";
+    public const string FileStem = "economizer-savings";
     public const string EnergyLabel = "Energy saved";
     public const string CostLabel = "Cost saved";
 
@@ -21,14 +21,14 @@ public static class EconomizerSavingsChart
         var rows = data.Controls;
         bool withCost = data.CostUnit is not null && rows.Any(r => r.CostSavings is not null);
         var right = canvas.Plot.Axes.Right;
-        var layers = new List<BarLayer> { new(EnergyLabel, rows.Select(r => r.EnergySavings).ToArray(), ChartPalette.Steel) };
+        var layers = new List<BarLayer> { new(EnergyLabel, rows.Select(r => r.EnergySavings).ToArray(), ChartPalette.Steel, LegendText: withCost ? EnergyLabel + " (left axis)" : null) };
         if (withCost)
         {
             right.Label.Text = $"Cost saved ({data.CostUnit})";
             right.Label.FontSize = ChartCanvas.LabelSize;
             right.TickLabelStyle.FontSize = ChartCanvas.TickSize;
             right.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic { LabelFormatter = ChartCanvas.FormatTick };
-            layers.Add(new(CostLabel, rows.Select(r => r.CostSavings ?? double.NaN).ToArray(), ChartPalette.Orange, YAxis: right));
+            layers.Add(new(CostLabel, rows.Select(r => r.CostSavings ?? double.NaN).ToArray(), ChartPalette.Orange, YAxis: right, LegendText: CostLabel + " (right axis)"));
         }
 
         var bars = canvas.GroupedBars(rows.Count, layers, withCost ? 0.7 : 0.5);
@@ -53,7 +53,9 @@ public static class EconomizerSavingsChart
         }
 
         canvas.ShowLegendBelow();
-        return canvas.Render(FileStem, $"Annual savings of each economizer high-limit control against no economizer ({data.EnergyUnit}{(withCost ? ", " + data.CostUnit : "")}).", size ?? ChartSize.Report);
+        return canvas.Render(FileStem, withCost
+            ? $"Annual savings of each economizer high-limit control against no economizer: {data.Quantity.ToLowerInvariant()} ({data.EnergyUnit}, left axis) and the {data.CostQuantity} ({data.CostUnit}, right axis)."
+            : $"Annual savings of each economizer high-limit control against no economizer: {data.Quantity.ToLowerInvariant()} ({data.EnergyUnit}).", size ?? ChartSize.Report);
     }
 
     /// <summary>Y limits from 0 (or the lowest negative value) to the highest value plus room for the labels.</summary>

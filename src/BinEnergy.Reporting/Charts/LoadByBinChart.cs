@@ -8,7 +8,7 @@ namespace BinEnergy.Reporting.Charts;
 /// </summary>
 public static class LoadByBinChart
 {
-    public const string FileStem = "outdoor-air-load-by-bin";
+    public const string FileStem = "load-by-bin";
     public const string HeatingLabel = "Heating";
     public const string SensibleCoolingLabel = "Sensible cooling";
     public const string LatentCoolingLabel = "Latent cooling";
@@ -45,6 +45,6 @@ public static class LoadByBinChart
         }
 
         canvas.ShowLegendBelow();
-        return canvas.Render(FileStem, $"Annual outdoor-air energy ({data.EnergyUnit}) in each dry-bulb bin: heating, sensible cooling and latent cooling.", size ?? ChartSize.Report);
+        return canvas.Render(FileStem, $"Annual outdoor-air energy ({data.EnergyUnit}) in each {BinAxis.WidthText(edges, data.TemperatureUnit)} dry-bulb bin: heating, sensible cooling and latent cooling stacked.", size ?? ChartSize.Report);
     }
 }

@@ -27,7 +27,7 @@ public static class MethodCheckChart
             new BarLayer(HourlyLabel, rows.Select(r => r.Hourly).ToArray(), ChartPalette.Navy),
             new BarLayer(JointLabel, rows.Select(r => r.JointBin).ToArray(), ChartPalette.Steel),
             new BarLayer(BinLabel, rows.Select(r => r.BinMethod).ToArray(), ChartPalette.PaleBlue),
-        ], 0.75);
+        ], 0.9);
         foreach (var bar in bars)
         {
             bar.Label = (bar.Value - bar.ValueBase).ToString("#,0", CultureInfo.InvariantCulture);

@@ -6,7 +6,7 @@ namespace BinEnergy.Reporting.Charts;
 /// components (X is the month index 0..11).</summary>
 public static class MonthlyEnergyChart
 {
-    public const string FileStem = "monthly-energy";
+    public const string FileStem = "monthly";
 
     /// <summary>Month labels (English abbreviations, fixed so output does not depend on the machine's culture).</summary>
     public static IReadOnlyList<string> MonthLabels { get; } = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];

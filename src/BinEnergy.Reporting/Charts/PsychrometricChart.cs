@@ -5,14 +5,21 @@ namespace BinEnergy.Reporting.Charts;
 
 /// <summary>
 /// The hourly weather on a psychrometric chart (dry-bulb across, humidity ratio up): hours as a
-/// density (hours per cell, a 2-D histogram), the saturation curve, RH lines with their labels,
-/// and the economizer's enabled region shaded beneath the hours with its outline above them.
+/// density (hours per cell, a 2-D histogram) cut off at the saturation curve, RH lines with their
+/// labels inside the plot, and the economizer's enabled region drawn over the hours (translucent
+/// fill and solid outline), its control named in the title.
 /// Series: "Hours" (density), the saturation curve, each RH line, and the region (area).
 /// </summary>
 public static class PsychrometricChart
 {
-    public const string FileStem = "psychrometric-hours";
+    public const string FileStem = "psychrometric";
     public const string HoursLabel = "Hours";
+
+    /// <summary>Legend text of the hours (the colour bar gives the scale).</summary>
+    public const string HoursLegend = "Hours per cell (scale at right)";
+
+    /// <summary>Opacity of the economizer region's fill over the hour cells.</summary>
+    internal const double RegionFillAlpha = 0.3;
 
     public static RenderedChart Render(PsychroChartData data, ChartSize? size = null)
     {
@@ -22,7 +29,12 @@ public static class PsychrometricChart
             throw new ArgumentException($"the chart has {data.HourDryBulb.Count} dry-bulb values but {data.HourHumidityRatio.Count} humidity ratios; they must match");
         }
 
-        string title = ChartCanvas.TitleFor("Hourly weather on the psychrometric chart", data.Subject);
+        string what = data.EconomizerRegion is null
+            ? "Hourly weather on the psychrometric chart"
+            : string.IsNullOrWhiteSpace(data.ControlName)
+                ? "Hourly weather and the economizer region"
+                : "Hourly weather and the economizer region, " + data.ControlName.Trim();
+        string title = ChartCanvas.TitleFor(what, data.Subject);
         string yLabel = $"Humidity ratio ({data.HumidityRatioUnit} dry air)";
         var canvas = new ChartCanvas(title, $"Dry-bulb ({data.TemperatureUnit})", yLabel);
         var plot = canvas.Plot;
@@ -43,14 +55,6 @@ public static class PsychrometricChart
         }
 
         yTop = Math.Max(yTop, 1e-6);
-
-        // Region first, beneath the hours.
-        if (data.EconomizerRegion is { } economizer)
-        {
-            Polygon(plot, economizer, ChartPalette.PaleBlue.ToScottPlot().WithAlpha(0.55), Colors.Transparent, 0);
-            canvas.Record(new PlottedSeries(economizer.Label, PlottedSeriesKind.Area, economizer.X, economizer.Y));
-            canvas.LegendFill(economizer.Label, ChartPalette.PaleBlue);
-        }
 
         // Hours as a 2-D histogram.
         double dx = data.DryBulbCell ?? NiceStep((xMax - xMin) / 55.0);
@@ -107,19 +111,25 @@ public static class PsychrometricChart
             bar.LabelStyle.FontName = ChartFonts.FamilyName;
             bar.Axis.TickLabelStyle.FontSize = ChartCanvas.TickSize;
             bar.Axis.TickLabelStyle.FontName = ChartFonts.FamilyName;
+            bar.Axis.TickGenerator = new ScottPlot.TickGenerators.NumericAutomatic { IntegerTicksOnly = true, LabelFormatter = ChartCanvas.FormatTick }; // whole hours
         }
 
-        // Region outline above the hours so its edge shows through the density.
-        if (data.EconomizerRegion is { } outline && outline.X.Count > 2)
+        // Above the saturation curve no state exists: cover the parts of cells that straddle it.
+        MaskAboveSaturation(plot, data.SaturationCurve, yTop);
+
+        // The region over the hours: a translucent fill, so the cells show through, and a solid outline.
+        if (data.EconomizerRegion is { } economizer)
         {
-            var edge = Polygon(plot, outline, Colors.Transparent, ChartPalette.Steel.ToScottPlot(), 2);
-            edge.LinePattern = LinePattern.Dashed;
+            var edge = Polygon(plot, economizer, ChartPalette.PaleBlue.ToScottPlot().WithAlpha(RegionFillAlpha), ChartPalette.Navy.ToScottPlot(), 2);
+            edge.LinePattern = LinePattern.Solid;
+            canvas.Record(new PlottedSeries(economizer.Label, PlottedSeriesKind.Area, economizer.X, economizer.Y));
+            canvas.LegendFill(economizer.Label, ChartPalette.PaleBlue, alpha: RegionFillAlpha, outline: ChartPalette.Navy);
         }
 
         foreach (var line in data.RelativeHumidityLines)
         {
             AddCurve(canvas, line, ChartPalette.Rule, 1, LinePattern.Dotted, legend: false);
-            LabelRhLine(plot, line, xMax, yTop);
+            LabelRhLine(plot, line, xMin, xMax, yTop);
         }
 
         AddCurve(canvas, data.SaturationCurve, ChartPalette.Ink, 2.5f, LinePattern.Solid, legend: true);
@@ -128,7 +138,10 @@ public static class PsychrometricChart
             canvas.LegendLine("Relative humidity (20 % steps)", ChartPalette.Rule, 1.5f, LinePattern.Dotted);
         }
 
-        canvas.LegendFill(HoursLabel + " (density)", ChartPalette.Orange);
+        if (hours.Length > 0)
+        {
+            canvas.LegendFill(HoursLegend, ChartPalette.Orange);
+        }
         if (!string.IsNullOrWhiteSpace(data.PressureNote))
         {
             var note = plot.Add.Annotation(data.PressureNote.Trim(), Alignment.UpperLeft);
@@ -150,8 +163,13 @@ public static class PsychrometricChart
         }
 
         canvas.ShowLegendBelow();
-        return canvas.Render(FileStem, $"Every hour of the weather record on a psychrometric chart (dry-bulb {data.TemperatureUnit}, humidity ratio {data.HumidityRatioUnit}), as hours per cell, with the saturation curve, RH lines and the economizer's enabled region.", size ?? ChartSize.Report);
+        return canvas.Render(FileStem, $"Every hour of the weather record on a psychrometric chart (dry-bulb {data.TemperatureUnit}, humidity ratio {data.HumidityRatioUnit}) as hours per cell, with the saturation curve and RH lines{RegionText(data)}.", size ?? ChartSize.Report);
     }
+
+    private static string RegionText(PsychroChartData data) =>
+        data.EconomizerRegion is null ? ""
+        : string.IsNullOrWhiteSpace(data.ControlName) ? ", and the economizer's enabled region drawn over the cells"
+        : $", and the region where the {data.ControlName.Trim()} economizer is enabled drawn over the cells";
 
     private static ScottPlot.Plottables.Polygon Polygon(Plot plot, ChartLine line, Color fill, Color stroke, float width)
     {
@@ -179,13 +197,41 @@ public static class PsychrometricChart
         }
     }
 
-    /// <summary>Puts the line's label at its last point inside the chart.</summary>
-    private static void LabelRhLine(Plot plot, ChartLine line, double xMax, double yTop)
+    /// <summary>
+    /// Covers everything above the saturation curve with the background colour, so density cells
+    /// that straddle the curve end at it.
+    /// </summary>
+    private static void MaskAboveSaturation(Plot plot, ChartLine saturation, double yTop)
     {
+        var points = saturation.X.Zip(saturation.Y, (x, y) => (X: x, Y: y)).Where(p => double.IsFinite(p.X) && double.IsFinite(p.Y)).ToArray();
+        if (points.Length < 2)
+        {
+            return;
+        }
+
+        double roof = Math.Max(yTop, points.Max(p => p.Y)) * 2;
+        var outline = points.Select(p => new Coordinates(p.X, p.Y))
+            .Append(new Coordinates(points[^1].X, roof))
+            .Append(new Coordinates(points[0].X, roof))
+            .ToArray();
+        var mask = plot.Add.Polygon(outline);
+        mask.FillColor = Colors.White;
+        mask.LineWidth = 0;
+    }
+
+    /// <summary>
+    /// Puts the line's label, right-aligned, just left of the last point that lies inside the plot
+    /// with room to spare (2 % of the width from the right edge, 10 % of the height from the top),
+    /// so it is never cut off by the frame.
+    /// </summary>
+    private static void LabelRhLine(Plot plot, ChartLine line, double xMin, double xMax, double yTop)
+    {
+        double right = xMax - (xMax - xMin) * 0.02;
+        double top = yTop * 0.90;
         int at = -1;
         for (int i = 0; i < line.X.Count; i++)
         {
-            if (line.X[i] <= xMax && line.Y[i] <= yTop * 0.97)
+            if (line.X[i] <= right && line.Y[i] <= top)
             {
                 at = i;
             }
@@ -197,11 +243,13 @@ public static class PsychrometricChart
         }
 
         var text = plot.Add.Text(line.Label, line.X[at], line.Y[at]);
-        text.LabelFontSize = 11;
+        text.LabelFontSize = ChartCanvas.TickSize - 1;
         text.LabelFontName = ChartFonts.FamilyName;
         text.LabelFontColor = ChartPalette.Ink.ToScottPlot();
-        text.LabelBackgroundColor = Colors.White.WithAlpha(0.8);
-        text.LabelAlignment = Alignment.LowerRight;
+        text.LabelBackgroundColor = Colors.White.WithAlpha(0.85);
+        text.LabelPadding = 2;
+        text.LabelAlignment = Alignment.MiddleRight;
+        text.OffsetX = -3;
     }
 
     private static double NiceStep(double raw)

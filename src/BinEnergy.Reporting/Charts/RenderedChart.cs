@@ -40,6 +40,11 @@ public sealed class RenderedChart
     /// <summary>The series as drawn, in drawing order.</summary>
     public IReadOnlyList<PlottedSeries> Series { get; }
 
+    /// <summary>The legend's entries, in order, as shown (all charts put the legend in one framed
+    /// band below the data; the chart's own words are in sentence case, names from the study as
+    /// written).</summary>
+    public IReadOnlyList<string> LegendLabels { get; internal init; } = [];
+
     /// <summary>True when there was nothing to draw and the chart says "no data".</summary>
     public bool IsEmpty { get; }
 

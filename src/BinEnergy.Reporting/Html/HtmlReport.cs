@@ -297,7 +297,7 @@ public static partial class HtmlReport
     private const string Css = """
         :root { --ink: #1a1a1a; --navy: #1d3557; --rule: #c9c9c9; --pale: #eef4fa; --sand: #f7efd9; --orange: #e08a2e; }
         * { box-sizing: border-box; }
-        body { margin: 0 auto; max-width: 980px; padding: 1.5rem 1.25rem 3rem; color: var(--ink);
+        body { margin: 0 auto; max-width: 1180px; padding: 1.5rem 1.25rem 3rem; color: var(--ink);
                font: 16px/1.5 "DejaVu Sans", "Segoe UI", Helvetica, Arial, sans-serif; background: #fff; }
         header { border-bottom: 3px solid var(--navy); margin-bottom: 1.5rem; }
         .kicker { margin: 0; color: var(--navy); font-size: 0.85rem; letter-spacing: 0.08em; text-transform: uppercase; }

@@ -56,8 +56,8 @@ public static class StudyReport
                 };
             }).ToList(),
         };
-        charts.Add(new("comparison-energy", ComparisonChart.RenderEnergy(comparison), null, null));
-        charts.Add(new("comparison-cost", ComparisonChart.RenderCost(comparison), null, null));
+        charts.Add(new(ComparisonChart.EnergyFileStem, ComparisonChart.RenderEnergy(comparison), null, null));
+        charts.Add(new(ComparisonChart.CostFileStem, ComparisonChart.RenderCost(comparison), null, null));
         return charts;
     }
 
@@ -88,7 +88,7 @@ public static class StudyReport
         var first = shown.FirstOrDefault() ?? climateCases[0];
         var weatherBins = first.OutdoorAir.Bins;
 
-        charts.Add(new($"bin-hours-{slug}", BinHoursChart.Render(new BinChartData
+        charts.Add(new($"{BinHoursChart.FileStem}-{slug}", BinHoursChart.Render(new BinChartData
         {
             Subject = climate,
             TemperatureUnit = tUnit,
@@ -96,13 +96,12 @@ public static class StudyReport
                 b.Bin.All.Hours > 0 ? T(b.Bin.All.MeanWetBulb) : null)).ToList(),
         }), climate, null));
 
+        // The psychrometric chart shades the region of the control the modes chart of the first detailed variant shows.
         var firstEconomizer = first.Economizer;
-        EconomizerRegionLimits? region = firstEconomizer is null ? null : new EconomizerRegionLimits(
-            "differential enthalpy region (return air)",
-            Math.Min(firstEconomizer.Settings.ReturnTemperature.Celsius, firstEconomizer.Settings.Limits.DryBulb.Celsius),
-            firstEconomizer.Model.ReturnEnthalpyJPerKg);
-        charts.Add(new($"psychrometric-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
-            climate, first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region)), climate, null));
+        var firstBest = firstEconomizer?.Best(headline);
+        EconomizerRegionLimits? region = firstEconomizer is null || firstBest is null ? null : EconomizerRegionLimits.For(firstBest.Control, firstEconomizer.Model, units);
+        charts.Add(new($"{PsychrometricChart.FileStem}-{slug}", PsychrometricChart.Render(PsychroChartData.FromSi(
+            region is null ? climate : $"{climate}, {first.Case.Variant.Name}", first.Weather.DryBulbC, first.Weather.HumidityRatio, first.Weather.Site.SitePressurePa, units, region)), climate, null));
 
         foreach (var c in shown)
         {
@@ -111,7 +110,7 @@ public static class StudyReport
             string subject = $"{climate}, {variant}";
             void Add(string kind, RenderedChart chart) => charts.Add(new($"{kind}-{stem}", chart, climate, variant));
 
-            Add("load-by-bin", LoadByBinChart.Render(new LoadByBinData
+            Add(LoadByBinChart.FileStem, LoadByBinChart.Render(new LoadByBinData
             {
                 Subject = $"{subject} ({method})",
                 TemperatureUnit = tUnit,
@@ -126,7 +125,7 @@ public static class StudyReport
             if (c.Economizer is { } eco)
             {
                 var best = eco.Best(headline);
-                Add("economizer-modes", EconomizerModesChart.Render(new EconomizerModesData
+                Add(EconomizerModesChart.FileStem, EconomizerModesChart.Render(new EconomizerModesData
                 {
                     Subject = subject,
                     ControlName = best.Control.Describe(),
@@ -134,32 +133,36 @@ public static class StudyReport
                     Bins = eco.Bins.Select((b, i) => new EconomizerModesRow(T(b.Low), T(b.High),
                         best.ByBin[i].Hourly.HoursNoCooling, best.ByBin[i].Hourly.HoursFree, best.ByBin[i].Hourly.HoursIntegrated, best.ByBin[i].Hourly.HoursMinimum)).ToList(),
                 }));
-                Add("economizer-savings", EconomizerSavingsChart.Render(new SavingsByControlData
+                Add(EconomizerSavingsChart.FileStem, EconomizerSavingsChart.Render(new SavingsByControlData
                 {
                     Subject = $"{subject} ({method})",
-                    EnergyUnit = eUnit + " coil",
-                    Controls = eco.Controls.Select(x => new ControlSavingsRow(x.Control.Describe(), E(x.Savings(headline)))).ToList(),
+                    Quantity = "Cooling coil energy saved",
+                    EnergyUnit = eUnit,
+                    CostUnit = eco.HasPlant ? u.Cost.Symbol : null,
+                    CostQuantity = "cost saved on the energy the air system buys (compressor, reheat and preheat, fans)",
+                    Controls = eco.Controls.Select(x => new ControlSavingsRow(x.Control.Describe(), E(x.Savings(headline)),
+                        eco.HasPlant ? x.PurchasedSavings(headline).Cost : null)).ToList(),
                 }));
             }
 
-            Add("monthly", MonthlyEnergyChart.Render(new MonthlyEnergyData
+            Add(MonthlyEnergyChart.FileStem, MonthlyEnergyChart.Render(new MonthlyEnergyData
             {
                 Subject = $"{subject} ({method})",
                 EnergyUnit = eUnit,
                 Series =
                 [
-                    new MonthlyEnergySeries("heating", Months(c, headline, l => E(l.Heating)), ChartPalette.Heating),
-                    new MonthlyEnergySeries("sensible cooling", Months(c, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
-                    new MonthlyEnergySeries("latent cooling", Months(c, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
+                    new MonthlyEnergySeries("Heating", Months(c, headline, l => E(l.Heating)), ChartPalette.Heating),
+                    new MonthlyEnergySeries("Sensible cooling", Months(c, headline, l => E(l.CoolingSensible)), ChartPalette.SensibleCooling),
+                    new MonthlyEnergySeries("Latent cooling", Months(c, headline, l => E(l.CoolingLatent)), ChartPalette.LatentCooling),
                 ],
             }));
 
             var annual = c.OutdoorAir.Annual;
-            Add("method-check", MethodCheckChart.Render(new MethodCheckData
+            Add(MethodCheckChart.FileStem, MethodCheckChart.Render(new MethodCheckData
             {
                 Subject = subject,
                 EnergyUnit = eUnit,
-                Rows = new (string Name, LoadFigure Figure)[] { ("heating", LoadFigure.Heating), ("sensible cooling", LoadFigure.CoolingSensible), ("latent cooling", LoadFigure.CoolingLatent), ("humidification", LoadFigure.Humidification) }
+                Rows = new (string Name, LoadFigure Figure)[] { ("Heating", LoadFigure.Heating), ("Sensible cooling", LoadFigure.CoolingSensible), ("Latent cooling", LoadFigure.CoolingLatent), ("Humidification", LoadFigure.Humidification) }
                     .Select(f => new MethodCheckRow(f.Name, E(annual.Hourly.Loads[f.Figure]), E(annual.JointBin.Loads[f.Figure]), E(annual.Bin.Loads[f.Figure]))).ToList(),
             }));
         }

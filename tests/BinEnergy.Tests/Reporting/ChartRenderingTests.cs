@@ -259,6 +259,78 @@ public class ChartRenderingTests
         ChartReview.Save(chart, "si-enthalpy");
     }
 
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void Distribution_DrawsEveryClimateOfEveryVariant(string @case)
+    {
+        int climates = @case switch { "empty" => 0, "ten-climates" => 10, _ => 1 };
+        var values = ReportingSamples.Comparison(climates).Cells.GroupBy(c => c.Variant)
+            .Select(g => (g.Key, (IReadOnlyList<double>)g.Select(c => c.AnnualEnergy).ToList())).ToList();
+        var data = new DistributionData { Subject = "invented climates", Figure = "Heating", Unit = "MBtu", Variants = values };
+        var chart = DistributionChart.Render(data, "distribution-heating");
+        foreach (var (variant, v) in values)
+        {
+            Assert.Equal(v.Sum(), chart.SeriesLabelled(variant).Total, 9); // one dot per climate
+            var box = chart.SeriesLabelled(variant + " box").Y;
+            Assert.Equal(v.Min(), box[0], 9);
+            Assert.Equal(v.Max(), box[4], 9);
+        }
+
+        Assert.All(chart.LegendLabels, l => Assert.True(char.IsUpper(l[0]), l));
+        AssertImages(chart, @case);
+    }
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void DegreeDayScatter_DrawsAPointPerClimateAndVariant(string @case)
+    {
+        int climates = @case switch { "empty" => 0, "ten-climates" => 10, _ => 1 };
+        var cells = ReportingSamples.Comparison(climates).Cells;
+        var points = cells.GroupBy(c => c.Variant)
+            .Select(g => (g.Key, (IReadOnlyList<(double, double)>)g.Select((c, i) => (2000.0 + 450 * i, c.AnnualEnergy)).ToList())).ToList();
+        var data = new DegreeDayScatterData { Subject = "invented climates", Figure = "Heating", Unit = "MBtu", DegreeDays = "Heating degree-days, base 65 F (F-day)", Variants = points };
+        var chart = DegreeDayScatterChart.Render(data, "heating-against-heating-degree-days");
+        foreach (var (variant, p) in points)
+        {
+            Assert.Equal(p.Count, chart.SeriesLabelled(variant).Count);
+            Assert.Equal(p.Sum(x => x.Item2), chart.SeriesLabelled(variant).Total, 9);
+        }
+
+        AssertImages(chart, @case);
+    }
+
+    [Fact]
+    public void BinCharts_TwoDegreeSiBins_CaptionStatesTheWidthAndTicksSitOnTheEdges()
+    {
+        var climate = Climates.Value[3];
+        var rows = Enumerable.Range(0, climate.Hours)
+            .GroupBy(h => (int)Math.Floor(Math.Round(climate.DryBulbC[h], 6) / 2.0)) // 2 C bins (DESIGN 6: the SI default)
+            .OrderBy(g => g.Key)
+            .Select(g => new BinHoursRow(g.Key * 2.0, g.Key * 2.0 + 2.0, g.Count(h => climate.Occupied[h]), g.Count(h => !climate.Occupied[h]),
+                g.Average(h => Core.Psychrometrics.MoistAir.WetBulb(climate.DryBulbC[h], climate.HumidityRatio[h], climate.PressurePa))))
+            .ToList();
+        var chart = BinHoursChart.Render(new BinChartData { Subject = climate.Name, TemperatureUnit = "C", Bins = rows });
+        Assert.Contains("each 2 C dry-bulb bin", chart.Description, StringComparison.Ordinal);
+        Assert.Equal(climate.Hours, chart.Series.Where(s => s.Kind == PlottedSeriesKind.Bars).Sum(s => s.Total), 9);
+
+        var positions = BinAxis.EdgeTickPositions(rows.Select(r => (r.LowEdge, r.HighEdge)).ToList(), rows[0].LowEdge - 1, rows[^1].HighEdge + 1);
+        Assert.InRange(positions.Count, 5, 21);
+        Assert.All(positions, p => Assert.Equal(0, Math.IEEERemainder(p, 2.0), 9)); // every tick on a bin edge
+        ChartReview.Save(chart, "si-2c-bins");
+    }
+
+    [Fact]
+    public void Psychrometric_WithoutAnEconomizer_DrawsNoRegionAndSaysSoInTheTitle()
+    {
+        var data = ReportingSamples.Psychro(Climates.Value[2]) with { EconomizerRegion = null, ControlName = "" };
+        var chart = PsychrometricChart.Render(data);
+        Assert.DoesNotContain(chart.Series, s => s.Kind == PlottedSeriesKind.Area);
+        Assert.DoesNotContain("economizer", chart.Title, StringComparison.OrdinalIgnoreCase);
+        Assert.DoesNotContain("economizer", chart.Description, StringComparison.OrdinalIgnoreCase);
+        Assert.Equal(data.HourDryBulb.Count, chart.SeriesLabelled(PsychrometricChart.HoursLabel).Total, 9);
+        ChartReview.Save(chart, "no-economizer");
+    }
+
     [Fact]
     public void Charts_RefuseBadInputWithAClearMessage()
     {

@@ -40,6 +40,10 @@ public sealed record PsychroChartData
     /// <summary>Polygon of the outdoor states where the economizer is enabled, or null.</summary>
     public ChartLine? EconomizerRegion { get; init; }
 
+    /// <summary>The control whose region is drawn (e.g. "differential-enthalpy (integrated)"),
+    /// named in the title; empty when there is no region or its control is not known.</summary>
+    public string ControlName { get; init; } = "";
+
     /// <summary>Width of a density cell in the temperature unit; null picks about 45 cells across.</summary>
     public double? DryBulbCell { get; init; }
 
@@ -97,6 +101,7 @@ public sealed record PsychroChartData
             SaturationCurve = Line("Saturation (100 %)", ChartCurves.SaturationCurve(fromC, toC, pressurePa)),
             RelativeHumidityLines = rh,
             EconomizerRegion = region,
+            ControlName = economizer?.ControlName ?? "",
         };
     }
 }

@@ -12,6 +12,9 @@ public sealed record SavingsByControlData
     /// <summary>Display unit of the energy savings, e.g. "kBtu".</summary>
     public required string EnergyUnit { get; init; }
 
+    /// <summary>What the cost saved covers, for the caption (e.g. "cost saved on compressor, reheat and fan energy").</summary>
+    public string CostQuantity { get; init; } = "cost saved";
+
     /// <summary>Currency of the cost savings, e.g. "USD"; null when costs are not given.</summary>
     public string? CostUnit { get; init; }
 
