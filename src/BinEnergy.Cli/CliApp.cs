@@ -1,3 +1,4 @@
+using System.Reflection;
 using BinEnergy.Cli.Commands;
 using BinEnergy.Core.Errors;
 using BinEnergy.Core.Psychrometrics;
@@ -14,6 +15,13 @@ namespace BinEnergy.Cli;
 /// </summary>
 public static class CliApp
 {
+    /// <summary>The version of the <c>binenergy</c> tool (its package version).</summary>
+    public static string ToolVersion { get; } =
+        typeof(CliApp).Assembly.GetCustomAttribute<AssemblyInformationalVersionAttribute>()?.InformationalVersion.Split('+')[0] ?? "0.0.0";
+
+    /// <summary>What <c>--version</c> prints: the tool's version and the engine version every output records.</summary>
+    public static string VersionLine => $"binenergy {ToolVersion} (engine {Core.Study.StudyRunner.EngineVersion})";
+
     /// <summary>Runs the command line with the given writers (tests pass their own).</summary>
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
@@ -32,7 +40,7 @@ public static class CliApp
         app.Configure(config =>
         {
             config.SetApplicationName("binenergy");
-            config.SetApplicationVersion(Core.Study.StudyRunner.EngineVersion);
+            config.SetApplicationVersion(VersionLine);
             config.ConfigureConsole(console);
             config.PropagateExceptions();
             config.Settings.StrictParsing = true;

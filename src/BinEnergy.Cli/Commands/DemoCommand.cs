@@ -17,7 +17,7 @@ public sealed class DemoCommand : Command<DemoCommand.Settings>
         public string? Out { get; init; }
     }
 
-    /// <summary>Where the demo study lives, relative to the repository or the installed program.</summary>
+    /// <summary>Where the demo study lives, relative to the repository or the installed tool (which carries a copy).</summary>
     public const string StudyRelativePath = "weather-samples/demo/demo-study.toml";
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
@@ -44,11 +44,13 @@ public sealed class DemoCommand : Command<DemoCommand.Settings>
                 string candidate = Path.Combine(dir.FullName, StudyRelativePath);
                 if (File.Exists(candidate))
                 {
-                    return Path.GetRelativePath(Directory.GetCurrentDirectory(), candidate);
+                    // Below the current folder (a clone), say the short path; else (the installed tool's copy) the full one.
+                    string relative = Path.GetRelativePath(Directory.GetCurrentDirectory(), candidate);
+                    return relative.StartsWith("..", StringComparison.Ordinal) ? candidate : relative;
                 }
             }
         }
 
-        throw new UsageException($"cannot find the demo study {StudyRelativePath}: run binenergy demo from the BinEnergy repository (or a folder below it)");
+        throw new UsageException($"cannot find the demo study {StudyRelativePath}: run binenergy demo from the BinEnergy repository (or a folder below it), or install the tool (see the README)");
     }
 }

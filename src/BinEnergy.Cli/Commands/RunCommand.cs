@@ -64,7 +64,7 @@ public sealed class RunCommand : Command<RunCommand.Settings>
         if (!format.Json)
         {
             summary.Note(NoteKind.Note, $"Wrote {Path.GetFullPath(folder)}: " + string.Join(", ", tables.Select(t => $"{t.Name} ({t.RowCount} rows)"))
-                + " as Parquet and CSV in tables/, charts in charts/, and summary.json.");
+                + " as Parquet and CSV in tables/, charts in charts/, summary.xlsx (a sheet per table and the inputs) and summary.json.");
             summary.Note(NoteKind.Note, "Report: " + Path.GetFullPath(Path.Combine(folder, "report.html")));
         }
 

@@ -5,22 +5,27 @@ using Spectre.Console;
 namespace BinEnergy.Reporting.Output;
 
 /// <summary>
-/// A result document as text: bordered tables in the terminal (Spectre.Console), tab-separated
-/// values that paste into a spreadsheet, or Markdown. Every value is formatted in the invariant
-/// culture with its column's number format; every text is made printable first.
+/// A result document as text, one renderer per format over the same grid of cells: bordered tables
+/// in the terminal (<see cref="TerminalRenderer"/>), tab-separated values that paste into a spreadsheet
+/// (<see cref="TsvRenderer"/>), or Markdown (<see cref="MarkdownRenderer"/>). Every value is formatted in
+/// the invariant culture with its column's number format; every text is made printable first.
 /// </summary>
 public static class TextRenderer
 {
-    /// <summary>Writes <paramref name="document"/> in <paramref name="format"/>: tables to the console, or plain text to <paramref name="writer"/>.</summary>
+    /// <summary>Writes <paramref name="document"/> in <paramref name="format"/>: bordered tables to the console (<see cref="TerminalRenderer"/>), or plain text to <paramref name="writer"/> (<see cref="TsvRenderer"/>, <see cref="MarkdownRenderer"/>).</summary>
     public static void Render(ResultDocument document, TextFormat format, IAnsiConsole console, TextWriter writer)
     {
-        if (format == TextFormat.Table)
+        switch (format)
         {
-            RenderTables(document, console);
-        }
-        else
-        {
-            RenderPlain(document, format, writer);
+            case TextFormat.Tsv:
+                TsvRenderer.Render(document, writer);
+                break;
+            case TextFormat.Markdown:
+                MarkdownRenderer.Render(document, writer);
+                break;
+            default:
+                TerminalRenderer.Render(document, console);
+                break;
         }
     }
 
@@ -35,14 +40,21 @@ public static class TextRenderer
     };
 
     /// <summary>The grid a table shows as text: a heading row, then the body rows, with which columns are numeric.</summary>
-    public static (IReadOnlyList<string> Headings, IReadOnlyList<IReadOnlyList<string>> Rows, IReadOnlyList<bool> Numeric) Grid(ResultTable table)
+    /// <param name="table">The table.</param>
+    /// <param name="unitsInHeadings">
+    /// For a record (items and values): put each item's unit beside its name ("Dry-bulb, F" and "95.0") rather than
+    /// after its value ("95.0 F"), so that a spreadsheet reads the value as a number.
+    /// </param>
+    public static (IReadOnlyList<string> Headings, IReadOnlyList<IReadOnlyList<string>> Rows, IReadOnlyList<bool> Numeric) Grid(ResultTable table, bool unitsInHeadings = false)
     {
         var visible = table.Columns.Where(c => !c.Detail).ToList();
         if (table.Layout == TableLayout.Record)
         {
-            var rows = visible.Select(c => (IReadOnlyList<string>)[PrintableText.Of(c.Label),
-                table.RowCount == 0 ? string.Empty : Cell(c, 0) + (c.Unit is { Symbol.Length: > 0 } u && Cell(c, 0).Length > 0 ? " " + u.Symbol : string.Empty)]).ToList();
-            return (["Item", "Value"], rows, [false, false]);
+            var rows = visible.Select(c => (IReadOnlyList<string>)(unitsInHeadings
+                ? [PrintableText.Of(c.Heading), table.RowCount == 0 ? string.Empty : Cell(c, 0)]
+                : [PrintableText.Of(c.Label),
+                    table.RowCount == 0 ? string.Empty : Cell(c, 0) + (c.Unit is { Symbol.Length: > 0 } u && Cell(c, 0).Length > 0 ? " " + u.Symbol : string.Empty)])).ToList();
+            return (["Item", "Value"], rows, [false, unitsInHeadings]);
         }
 
         if (table.Transpose && table.KeyColumn is string key)
@@ -59,82 +71,8 @@ public static class TextRenderer
         return (visible.Select(c => PrintableText.Of(c.Heading)).ToList(), body, visible.Select(c => c.Kind != ColumnKind.Text).ToList());
     }
 
-    private static void RenderTables(ResultDocument document, IAnsiConsole console)
-    {
-        console.MarkupLine("[bold]" + Markup.Escape(PrintableText.Of(document.Title)) + "[/]");
-        foreach (var table in document.Tables.Where(t => t.ShowInTerminal))
-        {
-            var (headings, rows, numeric) = Grid(table);
-            var grid = new Table().Border(TableBorder.Rounded);
-            if (table.Title is string title)
-            {
-                grid.Title(Markup.Escape(PrintableText.Of(title)));
-            }
-
-            for (int i = 0; i < headings.Count; i++)
-            {
-                var column = new TableColumn(Markup.Escape(headings[i]));
-                grid.AddColumn(numeric[i] ? column.RightAligned() : column);
-            }
-
-            foreach (var row in rows)
-            {
-                grid.AddRow([.. row.Select(Markup.Escape)]);
-            }
-
-            console.Write(grid);
-            foreach (var note in table.Notes)
-            {
-                console.WriteLine(PrintableText.Of(note));
-            }
-        }
-
-        WriteNotes(document, line => console.WriteLine(line), warning => console.MarkupLine("[yellow]Warning:[/] " + Markup.Escape(warning)));
-    }
-
-    private static void RenderPlain(ResultDocument document, TextFormat format, TextWriter writer)
-    {
-        bool markdown = format == TextFormat.Markdown;
-        writer.WriteLine(markdown ? "## " + PrintableText.Of(document.Title) : "# " + PrintableText.Of(document.Title));
-        foreach (var table in document.Tables.Where(t => t.ShowInTerminal))
-        {
-            var (headings, rows, numeric) = Grid(table);
-            writer.WriteLine();
-            if (table.Title is string title)
-            {
-                writer.WriteLine(markdown ? "### " + PrintableText.Of(title) + "\n" : "# " + PrintableText.Of(title));
-            }
-
-            if (markdown)
-            {
-                writer.WriteLine("| " + string.Join(" | ", headings.Select(EscapeMarkdown)) + " |");
-                writer.WriteLine("|" + string.Join("|", numeric.Select(n => n ? "---:" : ":---")) + "|");
-                foreach (var row in rows)
-                {
-                    writer.WriteLine("| " + string.Join(" | ", row.Select(EscapeMarkdown)) + " |");
-                }
-            }
-            else
-            {
-                writer.WriteLine(string.Join('\t', headings.Select(Tsv)));
-                foreach (var row in rows)
-                {
-                    // Spreadsheets read "1,234" as text or as two cells: TSV numbers carry no thousands separator.
-                    writer.WriteLine(string.Join('\t', row.Select((v, i) => numeric[i] ? v.Replace(",", string.Empty, StringComparison.Ordinal) : Tsv(v))));
-                }
-            }
-
-            foreach (var note in table.Notes)
-            {
-                writer.WriteLine((markdown ? "\n" : "# ") + PrintableText.Of(note));
-            }
-        }
-
-        writer.WriteLine();
-        WriteNotes(document, line => writer.WriteLine(markdown ? line : "# " + line), warning => writer.WriteLine((markdown ? "**Warning:** " : "# Warning: ") + PrintableText.Of(warning)));
-    }
-
-    private static void WriteNotes(ResultDocument document, Action<string> line, Action<string> warning)
+    /// <summary>The document's notes in the order every format gives them: notes, assumptions, warnings, cautions.</summary>
+    internal static void WriteNotes(ResultDocument document, Action<string> line, Action<string> warning)
     {
         foreach (var note in document.NotesOf(NoteKind.Note))
         {
@@ -161,8 +99,4 @@ public static class TextRenderer
             line("Caution: " + PrintableText.Of(c));
         }
     }
-
-    private static string Tsv(string text) => text.Replace('\t', ' ').Replace('\n', ' ');
-
-    private static string EscapeMarkdown(string text) => text.Replace("|", "\\|", StringComparison.Ordinal).Replace('\n', ' ');
 }

@@ -5,7 +5,7 @@ namespace BinEnergy.Reporting.Study;
 
 /// <summary>
 /// Writes a study run into its output folder atomically: <c>tables/NAME.parquet</c> and
-/// <c>tables/NAME.csv</c> for every table, and <c>summary.json</c>. Extra content (charts,
+/// <c>tables/NAME.csv</c> for every table, the workbook <c>summary.xlsx</c> (a sheet per table and the inputs) and <c>summary.json</c>. Extra content (charts,
 /// report) is added through the <c>extra</c> callback before the folder is committed.
 /// </summary>
 public static class StudyOutputWriter
@@ -40,6 +40,7 @@ public static class StudyOutputWriter
             CsvTableWriter.Write(table, output.PathFor("tables", table.Name + ".csv"));
         }
 
+        Workbook.SummaryWorkbook.Write(run, tables, output.PathFor(Workbook.SummaryWorkbook.FileName));
         await File.WriteAllTextAsync(output.PathFor("summary.json"), StudySummary.ToJson(run), ct);
         extra?.Invoke(output);
         output.Commit();

@@ -1,12 +1,14 @@
 using System.Globalization;
+using BinEnergy.Reporting.Units;
 using CsvHelper;
 
 namespace BinEnergy.Reporting.Tables;
 
 /// <summary>
 /// Writes a <see cref="ResultTable"/> as CSV (CsvHelper, invariant culture): a header of the
-/// column names, then one record per row; numbers in round-trip form ("R"), so the CSV and
-/// the Parquet file hold the same doubles.
+/// column names, then one record per row; numbers rounded to the digits their quantity warrants
+/// (<see cref="DisplayUnit.FileDigits"/>: <c>-5.98</c>, not the <c>-5.980000000000004</c> of a sum),
+/// written in the shortest form that reads back to the rounded value. The Parquet tables keep full precision.
 /// </summary>
 public static class CsvTableWriter
 {
@@ -32,7 +34,7 @@ public static class CsvTableWriter
                 fields[i] = column.Kind switch
                 {
                     ColumnKind.Text => column.Texts[row],
-                    ColumnKind.Number => double.IsFinite(column.Numbers[row]) ? column.Numbers[row].ToString("R", CultureInfo.InvariantCulture) : string.Empty,
+                    ColumnKind.Number => (column.Unit?.FileDigits ?? FileDigits.Default).Text(column.Numbers[row]),
                     _ => column.Integers[row].ToString(CultureInfo.InvariantCulture),
                 };
             }

@@ -53,6 +53,8 @@ public class ResultDocumentTests
         Assert.Contains("# Sample \\x1B[31mred\\x1B[0m site", lines);
         Assert.Contains("Figure\thourly\tjoint-bin", lines);
         Assert.Contains("Heating, kBtu\t12346\t12000", lines); // N0 rounding, no thousands separator
+        Assert.Contains("Airflow, cfm\t1000", lines); // a record's unit beside its item, so the value pastes as a number
+        Assert.DoesNotContain(lines, l => l.Contains('│') || l.Contains('─') || l.Contains('╭')); // no box-drawing
         Assert.DoesNotContain(lines, l => l.Contains("Spare", StringComparison.Ordinal)); // detail columns stay in the data
         Assert.Contains("# Warning: look at this", lines);
         Assert.DoesNotContain('\u001b', text.ToString());

@@ -58,7 +58,7 @@ public sealed class StudyRunTests : IDisposable
         string out1 = Path.Combine(folder, "out");
         var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
         Assert.True(code == 0, err);
-        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        var annual = ParquetRows.Read(out1, "annual");
         Assert.Equal(9, annual.Count); // 1 climate x 3 variants x 3 methods
 
         // The same settings written out by hand from the example study, given to the engine directly.
@@ -123,7 +123,7 @@ public sealed class StudyRunTests : IDisposable
         string out1 = Path.Combine(folder, "out");
         var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
         Assert.True(code == 0, err);
-        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        var annual = ParquetRows.Read(out1, "annual");
         string[] common = ["outdoor-air", Path.Combine(folder, "harbor.csv"), "--heat-to", "70", "--cool-to", "75", "--max-rh", "50",
             "--occupied", "Mon-Fri 07:00-19:00; Sat 08:00-13:00", "--flow-basis", "site", "--json"];
         string[] recovery = ["--recovery-sensible", "0.70", "--recovery-latent", "0.55", "--frost-limit", "10", "--frost-effectiveness", "0.35",
@@ -158,7 +158,7 @@ public sealed class StudyRunTests : IDisposable
         string out1 = Path.Combine(folder, "out");
         var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", out1);
         Assert.True(code == 0, err);
-        var rows = ReadCsv(Path.Combine(out1, "tables", "economizer.csv"));
+        var rows = ParquetRows.Read(out1, "economizer");
 
         // The [economizer] table of the example, given to the economizer command.
         var (code2, json, err2) = Cli("economizer", Path.Combine(folder, "harbor.csv"), "--supply-airflow", "10000", "--min-outdoor-airflow", "2000",
@@ -204,7 +204,7 @@ public sealed class StudyRunTests : IDisposable
         string out1 = Path.Combine(folder, "out-hp");
         var (code, _, err) = Cli("run", StudyPath(text), "--out", out1);
         Assert.True(code == 0, err);
-        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+        var annual = ParquetRows.Read(out1, "annual");
         var row = annual.First(r => r["variant"] == "no-recovery" && r["method"] == "hourly");
         double backup = D(row["backup_heating_electricity_kwh"]);
         Assert.True(backup > 0, "the backup carries what the heat pump cannot");
@@ -245,9 +245,14 @@ public sealed class StudyRunTests : IDisposable
 
             foreach (var col in columns)
             {
+                // The CSV keeps six significant digits of each value (FileDigits), Parquet every bit: the sums agree to that rounding.
                 double csvSum = rows.Sum(r => D(r[col]));
-                Assert.Equal(csvSum, seen.sums[col]!.Value, Math.Max(1e-9, Math.Abs(csvSum) * 1e-12));
+                double rounding = rows.Sum(r => Math.Max(1e-3, Math.Abs(D(r[col])) * 5e-6));
+                Assert.Equal(csvSum, seen.sums[col]!.Value, rounding);
             }
+
+            // No float noise in the CSV (-5.980000000000004): every value is rounded to its unit's digits.
+            Assert.All(File.ReadLines(csvPath).Skip(1).SelectMany(l => l.Split(',')), field => Assert.DoesNotMatch(Output.CsvDigitsTests.Noise(), field));
 
             Assert.Equal("Harbor office ventilation options", seen.metadata["binenergy.study"]);
             Assert.Equal("ip", seen.metadata["binenergy.units"]);
@@ -262,12 +267,12 @@ public sealed class StudyRunTests : IDisposable
         using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(out1, "summary.json")));
         Assert.Equal("hourly", summary.RootElement.GetProperty("headline_method").GetString());
         double summaryHeating = summary.RootElement.GetProperty("headline").EnumerateArray().Sum(c => c.GetProperty("heating_kbtu").GetDouble());
-        double annualHourlyHeating = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
+        double annualHourlyHeating = ParquetRows.Read(out1, "annual").Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
         Assert.Equal(annualHourlyHeating, summaryHeating, 6);
         Assert.Equal(64, summary.RootElement.GetProperty("study_sha256").GetString()!.Length);
 
         // The monthly table's hourly heating adds up to the hourly method's annual heating.
-        double monthly = ReadCsv(Path.Combine(out1, "tables", "monthly.csv")).Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
+        double monthly = ParquetRows.Read(out1, "monthly").Where(r => r["method"] == "hourly").Sum(r => D(r["heating_kbtu"]));
         Assert.Equal(annualHourlyHeating, monthly, 6);
     }
 
@@ -338,7 +343,7 @@ public sealed class StudyRunTests : IDisposable
             string out1 = Path.Combine(folder, "out-dcv-" + name);
             var (code, _, err) = Cli("run", StudyPath(text, "dcv-" + name + ".toml"), "--out", out1);
             Assert.True(code == 0, err);
-            annual[name] = ReadCsv(Path.Combine(out1, "tables", "annual.csv"));
+            annual[name] = ParquetRows.Read(out1, "annual");
         }
 
         // Invariant: a profile of 1.0 in every hour is the design airflow, so every table value is the same as without one.
@@ -376,11 +381,11 @@ public sealed class StudyRunTests : IDisposable
         Assert.True(code == 0, err);
 
         // Default: each bin's loads at the mean dry-bulb of its ventilated hours, inside the bin's edges.
-        var mean = ReadCsv(Path.Combine(outMean, "tables", "bins.csv")).Where(b => D(b["hours_ventilated"]) > 0).ToList();
+        var mean = ParquetRows.Read(outMean, "bins").Where(b => D(b["hours_ventilated"]) > 0).ToList();
         Assert.NotEmpty(mean);
         Assert.All(mean, b => Assert.InRange(D(b["evaluated_drybulb_f"]), D(b["bin_low_f"]), D(b["bin_high_f"])));
         Assert.Contains(mean, b => Math.Abs(D(b["evaluated_drybulb_f"]) - D(b["bin_mid_f"])) > 0.1);
-        var mid = ReadCsv(Path.Combine(outMid, "tables", "bins.csv"));
+        var mid = ParquetRows.Read(outMid, "bins");
         Assert.All(mid, b => Assert.Equal(D(b["bin_mid_f"]), D(b["evaluated_drybulb_f"]), 9));
 
         // The hourly rows do not depend on the evaluation point; the report states which one was used.
@@ -426,7 +431,7 @@ public sealed class StudyRunTests : IDisposable
         Assert.Contains("heating_kwh", header);
         Assert.Contains("mean_humidity_ratio_g_kg", header);
         Assert.Contains("gas_kwh", header);
-        var bins = ReadCsv(Path.Combine(out1, "tables", "bins.csv"));
+        var bins = ParquetRows.Read(out1, "bins");
         Assert.All(bins, b => Assert.Equal(2.0, D(b["bin_high_c"]) - D(b["bin_low_c"]), 9));
     }
 
@@ -439,13 +444,13 @@ public sealed class StudyRunTests : IDisposable
         Assert.True(code == 0, err);
         foreach (var table in new[] { "annual", "bins", "monthly", "economizer" })
         {
-            var methods = ReadCsv(Path.Combine(out1, "tables", table + ".csv")).Select(r => r["method"]).Distinct().Order().ToList();
+            var methods = ParquetRows.Read(out1, table).Select(r => r["method"]).Distinct().Order().ToList();
             Assert.Equal(["bin", "hourly", "joint-bin"], methods);
         }
 
         // Each bin row carries the exact figures of its own hours beside the method's estimate; they add up to the hourly year.
-        var bins = ReadCsv(Path.Combine(out1, "tables", "bins.csv")).Where(r => r["variant"] == "minimum" && r["method"] == "bin").ToList();
-        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["variant"] == "minimum").ToDictionary(r => r["method"]);
+        var bins = ParquetRows.Read(out1, "bins").Where(r => r["variant"] == "minimum" && r["method"] == "bin").ToList();
+        var annual = ParquetRows.Read(out1, "annual").Where(r => r["variant"] == "minimum").ToDictionary(r => r["method"]);
         Assert.Equal(D(annual["hourly"]["cooling_latent_kbtu"]), bins.Sum(b => D(b["hourly_cooling_latent_kbtu"])), 6);
         Assert.Equal(D(annual["bin"]["cooling_latent_kbtu"]), bins.Sum(b => D(b["cooling_latent_kbtu"])), 6);
 
@@ -492,7 +497,7 @@ public sealed class StudyRunTests : IDisposable
             .GroupBy(c => c.GetProperty("climate").GetString()!).ToDictionary(g => g.Key, g => g.First().GetProperty("humidity_over").GetString());
         Assert.Equal("ice", byClimate["frost-points"]);
         Assert.Equal("water", byClimate["default"]);
-        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["method"] == "hourly" && r["variant"] == "minimum")
+        var annual = ParquetRows.Read(out1, "annual").Where(r => r["method"] == "hourly" && r["variant"] == "minimum")
             .ToDictionary(r => r["climate"], r => D(r["humidification_kbtu"]));
         // Frost points mean drier air, so more humidification to 30 % RH.
         Assert.True(annual["frost-points"] > annual["default"], $"humidification {annual["frost-points"]} (frost points) vs {annual["default"]} (over water)");
@@ -552,7 +557,7 @@ public sealed class StudyRunTests : IDisposable
         Assert.True(code == 0, err);
         Assert.Contains("2020 has 500 hours, not a whole year: it is reported on its own and left out of the mean year", err, StringComparison.Ordinal);
 
-        var annual = ReadCsv(Path.Combine(out1, "tables", "annual.csv")).Where(r => r["variant"] == "minimum" && r["method"] == "hourly").ToDictionary(r => r["year"]);
+        var annual = ParquetRows.Read(out1, "annual").Where(r => r["variant"] == "minimum" && r["method"] == "hourly").ToDictionary(r => r["year"]);
         Assert.Equal(["2017", "2018", "2019", "2020", "mean"], annual.Keys.Order());
         Assert.Equal("0", annual["2020"]["complete_year"]);
         double mean = (D(annual["2017"]["heating_kbtu"]) + D(annual["2018"]["heating_kbtu"]) + D(annual["2019"]["heating_kbtu"])) / 3;
@@ -572,7 +577,7 @@ public sealed class StudyRunTests : IDisposable
         Assert.Equal(3, spread.GetProperty("years").GetInt32());
         Assert.Equal(D(annual["2019"]["heating_kbtu"]), spread.GetProperty("min").GetDouble(), 6);
         Assert.Equal(D(annual["2017"]["heating_kbtu"]), spread.GetProperty("max").GetDouble(), 6);
-        var economizerYears = ReadCsv(Path.Combine(out1, "tables", "economizer.csv")).Select(r => r["year"]).Distinct().Order();
+        var economizerYears = ParquetRows.Read(out1, "economizer").Select(r => r["year"]).Distinct().Order();
         Assert.Equal(["2017", "2018", "2019", "2020", "mean"], economizerYears);
         Assert.Contains("Year-to-year spread", File.ReadAllText(Path.Combine(out1, "report.html")), StringComparison.Ordinal);
     }
