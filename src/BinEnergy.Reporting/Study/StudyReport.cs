@@ -270,7 +270,7 @@ public static class StudyReport
             {
                 FlowBasis = a.FlowBasis.ToString().ToLowerInvariant(),
                 AirDensity = Span(run, u.Density, c => c.OutdoorAir.Assumptions.DryAirDensity) + " of dry air (each climate's under Inputs, Weather files)",
-                SiteSensibleFactor = Span(run, u.SensibleFactor, c => c.OutdoorAir.Assumptions.Factors.SensibleSi) + " (each climate's under Inputs)",
+                SiteSensibleFactor = Span(run, u.SensibleFactor, c => c.OutdoorAir.Assumptions.Factors.SensibleSi),
                 BinWidth = AssumptionText.Methods(a.BinPoint, a.BinScale.Width, u.TemperatureDifference.Symbol, a.HumidityScale.Width, u.Moisture.Symbol),
                 Calendar = a.Calendar,
                 Schedule = a.Schedule + "; " + AssumptionText.Clock(a.DaylightSaving),
