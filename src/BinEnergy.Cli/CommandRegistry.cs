@@ -73,7 +73,7 @@ internal static class CommandRegistry
 
         Add<RunCommand>("run")
             .WithData(output)
-            .WithDescription("Run a study file: every climate x variant, into tables (Parquet, CSV) and summary.json.")
+            .WithDescription("Run a study file: every climate x variant, into tables (Parquet, CSV), charts, report.html, summary.xlsx and summary.json.")
             .WithExample("run", "harbor-study.toml")
             .WithExample("run", "harbor-study.toml", "--out", "reports/harbor", "--hourly", "--force");
 
@@ -90,7 +90,7 @@ internal static class CommandRegistry
 
         Add<DemoCommand>("demo")
             .WithData(output)
-            .WithDescription("Runs the bundled demo study (invented climates, four ventilation options, economizer comparison) into reports/demo/.")
+            .WithDescription("Runs the bundled demo study (invented climates, four ventilation options, economizer) and replaces reports/demo/ with it.")
             .WithExample("demo")
             .WithExample("demo", "--out", "my-demo");
     }

@@ -23,6 +23,10 @@ public sealed class BatchCommand : Command<BatchCommand.Settings>
         [Description("The weather files: a folder (its .csv/.txt files, gzipped or not), a quoted glob such as 'wx/**/*.csv', or a station list (CSV with a weather column, paths relative to it; optional name, map, elevation_m; other columns are carried into every table).")]
         public string? Weather { get; init; }
 
+        [CommandOption("--map <MAP>")]
+        [Description("The column map of every weather file that does not name its own (a station list's map column wins): a shipped map (tmy3, pvgis) or the path of a TOML map file. Default: the open layout.")]
+        public string? Map { get; init; }
+
         [CommandOption("--out <DIR>")]
         [Description("Output folder. Default reports/<study name>-batch/.")]
         public string? Out { get; init; }
@@ -87,7 +91,7 @@ public sealed class BatchCommand : Command<BatchCommand.Settings>
         }
 
         var study = StudyFileReader.Read(settings.Study, climatesElsewhere: true);
-        var inputs = BatchInputList.Read(settings.Weather);
+        var inputs = BatchInputList.Read(settings.Weather, settings.Map);
         string folder = settings.Out ?? Path.Combine("reports", RunCommand.FolderName(study.Name) + "-batch");
         using var session = BatchSession.Plan(new BatchSessionSettings
         {
@@ -121,6 +125,14 @@ public sealed class BatchCommand : Command<BatchCommand.Settings>
         }
 
         output.Write(BatchSession.Document(study.Name, outcome), settings);
+        if (outcome.Counts.Done == 0 && outcome.Counts.Failed > 0)
+        {
+            // Nothing ran: that is a failed batch, whatever was recorded.
+            output.Error.WriteLine(PrintableText.Of(FormattableString.Invariant(
+                $"binenergy: error: no input ran: all {outcome.Counts.Failed:N0} were stopped by a problem (the kinds above; each file's message in tables/warnings, or with --csv in tables/warnings/**/*.csv). Files in another layout need --map (e.g. --map tmy3) or a station list with a map column.")));
+            return ExitCodes.BadInput;
+        }
+
         return ExitCodes.Ok;
     }
 }

@@ -21,8 +21,30 @@ public static class BatchInputList
     private static readonly string[] Known = ["weather", "name", "map", "elevation_m"];
 
     /// <summary>Reads the inputs named by <paramref name="spec"/> (relative to the current folder).</summary>
-    /// <exception cref="BatchInputException">Nothing to run: the folder, glob or list names no weather file, or the list has no <c>weather</c> column.</exception>
-    public static BatchInputs Read(string spec)
+    /// <param name="spec">A folder, a glob, a single file or a station list.</param>
+    /// <param name="map">The column map of every file that does not name its own (a station list's <c>map</c> column wins), or null for the open layout.</param>
+    /// <exception cref="BatchInputException">Nothing to run: the folder, glob or list names no weather file, or the list has no <c>weather</c> column; or the map is not a shipped name or a file.</exception>
+    public static BatchInputs Read(string spec, string? map = null)
+    {
+        if (map is not null)
+        {
+            map = map.Contains('/', StringComparison.Ordinal) || map.EndsWith(".toml", StringComparison.OrdinalIgnoreCase)
+                ? (File.Exists(map) ? Path.GetFullPath(map) : throw new BatchInputException($"--map {map}: no such map file; give a shipped name ({string.Join(", ", ColumnMap.ShippedNames)}) or the path of a TOML map file"))
+                : ColumnMap.ShippedText(map) is not null ? map
+                : throw new BatchInputException($"--map {map}: not a shipped column map (shipped: {string.Join(", ", ColumnMap.ShippedNames)}); give a shipped name or the path of a TOML map file");
+        }
+
+        var inputs = ReadWithoutMap(spec);
+        if (map is null)
+        {
+            return inputs;
+        }
+
+        var stations = inputs.Stations.Select(st => st.Map is null ? st with { Map = map } : st).ToList();
+        return inputs with { Stations = stations, Hash = Hash(stations, inputs.Problems) };
+    }
+
+    private static BatchInputs ReadWithoutMap(string spec)
     {
         if (string.IsNullOrWhiteSpace(spec))
         {

@@ -63,7 +63,7 @@ internal static class EconomizerSettingsBuilder
             FanCurve = FanCurve(e),
             SupplyAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("supply_airflow")),
             SupplyAirflowMin = e.Number("supply_airflow_min") is double min ? VolumeFlow.FromCubicMetresPerSecond(min) : null,
-            MinOutdoorAirflow = VolumeFlow.FromCubicMetresPerSecond(e.RequiredNumber("min_outdoor_airflow")),
+            MinOutdoorAirflow = MinimumOutdoorAirflow(e, outdoorAir, assumptions),
             FlowBasis = e.Has("flow_basis") ? StudyCaseBuilder.FlowBasisOf(e.Text("flow_basis")) : outdoorAir.FlowBasis,
             SupplyTemperature = Temperature.FromCelsius(e.RequiredNumber("supply_temp")),
             ReturnTemperature = Temperature.FromCelsius(e.RequiredNumber("return_temp")),
@@ -90,6 +90,31 @@ internal static class EconomizerSettingsBuilder
         }
 
         return settings;
+    }
+
+    /// <summary>
+    /// The economizer's minimum outdoor airflow: the study's <c>min_outdoor_airflow</c>, else the variant's own
+    /// ventilation airflow (so a variant that changes the ventilation rate changes the economizer's minimum too).
+    /// A set value that differs from the ventilation airflow is stated, since the two then tell different stories.
+    /// </summary>
+    private static VolumeFlow MinimumOutdoorAirflow(StudySection e, OutdoorAirSettings outdoorAir, List<string> assumptions)
+    {
+        var ventilation = outdoorAir.EffectiveAirflow;
+        if (e.Number("min_outdoor_airflow") is not double set)
+        {
+            assumptions.Add(FormattableString.Invariant(
+                $"economizer: minimum outdoor airflow = this variant's ventilation airflow ({ventilation.Cfm:N0} cfm, {ventilation.LitresPerSecond:N0} L/s; set economizer.min_outdoor_airflow to give another)"));
+            return ventilation;
+        }
+
+        if (Math.Abs(set - ventilation.CubicMetresPerSecond) > 0.005 * Math.Max(set, ventilation.CubicMetresPerSecond))
+        {
+            var given = VolumeFlow.FromCubicMetresPerSecond(set);
+            assumptions.Add(FormattableString.Invariant(
+                $"economizer: minimum outdoor airflow {given.Cfm:N0} cfm ({given.LitresPerSecond:N0} L/s) as the study sets it, not this variant's ventilation airflow ({ventilation.Cfm:N0} cfm); leave min_outdoor_airflow out to follow the variant"));
+        }
+
+        return VolumeFlow.FromCubicMetresPerSecond(set);
     }
 
     private static double FanEfficiency(StudySection plant) => plant.Number("fan_efficiency") ?? PlantSettingsBuilder.DefaultFanEfficiency;

@@ -109,7 +109,7 @@ internal static class StudySchema
             { Min = 0, Max = 30, DefaultText = "no reset" },
             new KeyDefinition("supply_temp_reset_outdoor_low", ValueKind.Number, Temperature("supply_temp_reset_outdoor_low"), "Outdoor dry-bulb at and below which the reset supply is at its warmest.") { Min = -40, Max = 50 },
             new KeyDefinition("supply_temp_reset_outdoor_high", ValueKind.Number, Temperature("supply_temp_reset_outdoor_high"), "Outdoor dry-bulb at and above which the supply is at the supply temperature.") { Min = -40, Max = 50 },
-            new KeyDefinition("min_outdoor_airflow", ValueKind.Number, Flow("min_outdoor_airflow"), "Minimum outdoor airflow; it must meet the ventilation code.") { Min = 0, Max = 1000 },
+            new KeyDefinition("min_outdoor_airflow", ValueKind.Number, Flow("min_outdoor_airflow"), "Minimum outdoor airflow; it must meet the ventilation code.") { Min = 0, Max = 1000, DefaultText = "the variant's ventilation airflow" },
             Choice("flow_basis", ["site", "standard", "actual"], "the ventilation flow basis", FlowBasisHelp),
             new KeyDefinition("supply_temp", ValueKind.Number, Temperature("supply_temp"), "Supply (coil-leaving) air temperature.") { Min = 0, Max = 30 },
             new KeyDefinition("return_temp", ValueKind.Number, Temperature("return_temp"), "Return air temperature.") { Min = 10, Max = 40 },

@@ -363,9 +363,10 @@ public sealed class BatchReport
             sections.Add(new ReportSection($"{f.Label} ({f.Unit})", blocks));
         }
 
-        foreach (var (climate, variant, climateCharts) in ClimateCharts)
+        foreach (var (climate, _, climateCharts) in ClimateCharts)
         {
-            sections.Add(new ReportSection($"{climate} (variant {variant})", [.. climateCharts.Select(c => new ReportChart(c, c.Description))]));
+            // Each chart's own title names its variant (the weather charts belong to every variant).
+            sections.Add(new ReportSection($"Charts: {climate}", [.. climateCharts.Select(c => new ReportChart(c, c.Description))]));
         }
 
         return new ReportModel

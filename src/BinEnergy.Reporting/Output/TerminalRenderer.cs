@@ -25,6 +25,13 @@ public static class TerminalRenderer
             for (int i = 0; i < headings.Count; i++)
             {
                 var column = new TableColumn(Markup.Escape(headings[i]));
+                // Names (a climate, a variant, a control) are copied into options: never broken inside; prose still wraps.
+                int at = i;
+                if (!numeric[i] && rows.Count > 0 && rows.Max(r => r[at].Length) <= 24)
+                {
+                    column.NoWrap();
+                }
+
                 grid.AddColumn(numeric[i] ? column.RightAligned() : column);
             }
 

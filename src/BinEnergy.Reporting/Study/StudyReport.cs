@@ -226,6 +226,9 @@ public static class StudyReport
                 Table(economizer, detailed, $"Every control against the same system without an economizer: hours by mode, energy and cost saved ({IntegrationMethods.Label(headline)})"),
                 new ReportParagraph("The savings are of the cooling coil (and of reheat and preheat where the system has them) against the baseline; "
                     + "the modes are counted over the hours the system runs. The per-bin modes are in tables/economizer and on each variant's modes chart." + which),
+                new ReportParagraph("The economizer evaluation takes each variant's ventilation airflow as its minimum outdoor air (unless [economizer] "
+                    + "min_outdoor_airflow sets one) and models the air system without energy recovery: a variant that changes only the recovery "
+                    + "or the heating plant has its base's rows. " + Unmet(run, u, headline)),
             ]));
         }
 
@@ -233,8 +236,7 @@ public static class StudyReport
         [
             Table(summary.Table("method_check"), detailed, "Each annual figure by the hourly sum, joint bins and the bin method, with each bin method's difference from hourly"),
             new ReportParagraph("When to use which: the hourly sum is the reference wherever an hourly record exists. "
-                + "The bin method is the right tool when only bin data are at hand, and to explain where in the year the load falls; "
-                + "it misses latent loads because a bin's mean humidity ratio hides its humid hours. Joint dry-bulb x humidity bins close most of that error. "
+                + "The bin method is the right tool when only bin data are at hand, and to explain where in the year the load falls. "
                 + AssumptionText.LatentError + which),
         ]));
         if (run.Cases.Any(c => c.IsMultiYear))
@@ -375,6 +377,19 @@ public static class StudyReport
     {
         var (headings, rows, _) = TextRenderer.Grid(table);
         return new ReportTable(caption, headings, rows);
+    }
+
+    /// <summary>The load the economizer's baseline system could not meet, per case where it is at least 0.1 % of the baseline coil energy.</summary>
+    private static string Unmet(StudyRunResult run, DisplayUnits u, IntegrationMethod method)
+    {
+        var unmet = run.Cases.Where(c => c.Economizer is not null)
+            .Select(c => (Case: c, Baseline: c.Economizer!.Baseline.Totals[method]))
+            .Where(x => x.Baseline.Unmet.Joules > 0.001 * Math.Max(x.Baseline.CoilTotal.Joules, 1))
+            .Select(x => FormattableString.Invariant($"{x.Case.Case.Climate.Name}, {x.Case.Case.Variant.Name}: {DisplayUnits.Text(u.Energy, x.Baseline.Unmet.Joules)} ({100 * x.Baseline.Unmet.Joules / x.Baseline.CoilTotal.Joules:0.0} % of the baseline coil energy)"))
+            .ToList();
+        return unmet.Count == 0
+            ? "The system meets the building's cooling load in every hour (no unmet load)."
+            : "Load the system could not meet at its supply airflow and temperature (the unmet load column; it is not bought, so check the system size): " + string.Join("; ", unmet) + ".";
     }
 
     /// <summary>The rows of a result table whose <c>variant</c> is one of <paramref name="variants"/>, as a report table.</summary>

@@ -80,8 +80,8 @@ public static class FigureColumns
         .Number("wetbulb", u.Temperature, "Wet-bulb", p => p.WetBulb.Celsius)
         .Number("dewpoint", u.Temperature, "Dew point", p => p.DewPoint.Celsius)
         .Number("humidity_ratio", u.Moisture, "Humidity ratio", p => p.HumidityRatio.KilogramsPerKilogram)
-        .Number("sensible", u.Power, "Sensible (heating at the heating condition)", p => p.Sensible.Watts)
-        .Number("latent", u.Power, "Latent (humidification at the heating condition)", p => p.Latent.Watts)
+        .Number("sensible", u.Power, "Sensible (heating or cooling)", p => p.Sensible.Watts)
+        .Number("latent", u.Power, "Latent (humidification or dehumidification)", p => p.Latent.Watts)
         .Number("total", u.Power, "Total", p => p.Total.Watts)
         .Number("total_without_recovery", u.Power, "Total without recovery", p => p.TotalWithoutRecovery.Watts, detail: !recovery);
 
@@ -99,9 +99,9 @@ public static class FigureColumns
             .Number("savings", u.Energy, "Savings", x => x.Control.Savings(x.Method).Joules)
             .Number("savings", u.Percent, "Share of baseline saved", x => x.Control.SavingsPercent(x.Method) ?? double.NaN)
             .Number("reheat", u.Energy, "Reheat", x => x.Control.Totals[x.Method].Reheat.Joules)
-            .Number("preheat", u.Energy, "Preheat", x => x.Control.Totals[x.Method].Preheat.Joules, detail: true)
+            .Number("preheat", u.Energy, "Preheat", x => x.Control.Totals[x.Method].Preheat.Joules)
             .Number("savings_heating", u.Energy, "Reheat and preheat saved", x => x.Control.HeatingSavings(x.Method).Joules)
-            .Number("unmet", u.Energy, "Unmet load", x => x.Control.Totals[x.Method].Unmet.Joules, detail: true)
+            .Number("unmet", u.Energy, "Unmet load", x => x.Control.Totals[x.Method].Unmet.Joules)
             .Number("fans", u.Electricity, "Fans", x => x.Control.Totals[x.Method].Fans.Joules);
         if (!plant)
         {

@@ -62,7 +62,7 @@ public sealed class BatchChartsTests
         Assert.Contains("bin-hours-station-02", figures);
         Assert.Contains("bin-hours-dunhollow-station-03", figures);
         Assert.Equal(2, figures.Count(x => x.StartsWith("bin-hours-", StringComparison.Ordinal)));
-        Assert.Contains("Calder Reach (station-02) (variant ", File.ReadAllText(Path.Combine(batch, "report.html")), StringComparison.Ordinal);
+        Assert.Contains("Charts: Calder Reach (station-02)", File.ReadAllText(Path.Combine(batch, "report.html")), StringComparison.Ordinal);
     }
 
     [Fact]
