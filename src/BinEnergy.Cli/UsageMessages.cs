@@ -18,6 +18,13 @@ internal static partial class UsageMessages
             return $"--{name} is not an option of {(command is null ? "binenergy" : "binenergy " + command)}" + (near is null ? "" : $"; did you mean --{near}?") + " " + help;
         }
 
+        if (UnknownCommand().Match(message) is { Success: true } unknownCommand)
+        {
+            string name = unknownCommand.Groups[1].Value;
+            string? near = Nearest(name, CommandRegistry.SettingsTypes.Keys);
+            return $"'{name}' is not a binenergy command" + (near is null ? "" : $"; did you mean {near}?") + " " + help;
+        }
+
         if (FailedToConvert().Match(message) is { Success: true } convert)
         {
             string value = convert.Groups[1].Value;
@@ -54,6 +61,9 @@ internal static partial class UsageMessages
 
     [GeneratedRegex("^Unknown option '(.*)'\\.?$")]
     private static partial Regex UnknownOption();
+
+    [GeneratedRegex("^Unknown command '(.*)'\\.?$")]
+    private static partial Regex UnknownCommand();
 
     [GeneratedRegex("^Failed to convert '(.*)' to (.*)\\.$")]
     private static partial Regex FailedToConvert();

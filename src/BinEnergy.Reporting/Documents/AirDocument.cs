@@ -61,7 +61,7 @@ public static class AirDocument
         string standardTemp = DisplayUnits.Text(u.Temperature, b.StandardAirTemperatureC, "0.0");
         return string.Create(CultureInfo.InvariantCulture,
             $"Sensible factor {site} is {Math.Abs(total) * 100:0.0} % {(total < 0 ? "below" : "above")} the trade's 1.08 Btu/(h cfm F): " +
-            $"pressure {Pct(b.Pressure)} ({state.Pressure.Kilopascals:0.00} kPa vs 101.325), " +
+            $"pressure {Pct(b.Pressure)} ({DisplayUnits.Text(u.Pressure, state.Pressure.Pascals)} vs {DisplayUnits.Text(u.Pressure, Core.Psychrometrics.Atmosphere.SeaLevelPressurePa)} at sea level), " +
             $"temperature {Pct(b.Temperature)} ({DisplayUnits.Text(u.Temperature, state.DryBulb.Celsius, "0.0")} vs the {standardTemp} at which dry sea-level air weighs 0.075 lb/ft3), " +
             $"moisture {Pct(b.Moisture)} (W = {state.HumidityRatio.KilogramsPerKilogram:0.0000}), rounding of 1.08 {Pct(b.Rounding)}.");
     }

@@ -9,6 +9,7 @@ public sealed class UsageMessageTests
     [InlineData("inspect,x.csv,--airflow,10", "--airflow is not an option of binenergy inspect (see binenergy inspect --help)")]
     [InlineData("synth,--monthly,a.csv,--seed,-1,--out,x.csv", "--seed -1: '-1' is not a whole number, 0 or more (see binenergy synth --help)")]
     [InlineData("outdoor-air,x.csv,--airflow,\"1,5\",--heat-to,70", "is not a number, with a dot as the decimal separator (see binenergy outdoor-air --help)")]
+    [InlineData("inpsect,x.csv", "'inpsect' is not a binenergy command; did you mean inspect? (see binenergy --help)")]
     [InlineData("inspect,-", "'-' (standard input) is not read: give the path of a file")]
     [InlineData("outdoor-air,WEATHER,--airflow,1000,--heat-to,21,--cool-to,24,--max-rh,60", "--heat-to: 21 F is out of range: expected 0 to 40 C (32 to 104 F); 21 would be in range in C: if that is what you meant, give the other --units (ip or si)")]
     [InlineData("outdoor-air,WEATHER,--airflow,1000,--heat-to,70,--cool-to,75,--max-rh,0.5", "--max-rh: 0.5 is out of range: expected a percentage from 1 to 100 (RH is in percent: 50 for 50 %, not 0.5)")]
