@@ -137,6 +137,15 @@ public sealed class BatchReport
         }
 
         var batch = BatchSummary.Gather(folder, warnings);
+        if (batch?["warnings"] is System.Text.Json.Nodes.JsonObject kinds)
+        {
+            // The inputs' own warnings (weather repairs, stopped files), by kind; each one is a row of tables/warnings.
+            foreach (var (kind, count) in kinds)
+            {
+                warnings.Add(FormattableString.Invariant($"{kind}: {count} (each with its climate, file, line and message in tables/warnings)."));
+            }
+        }
+
         var climateCharts = BatchClimateCharts.Read(folder, hash);
         return new BatchReport(annual, climates, u, figures, rows, degreeDays, warnings, batch, climateCharts);
     }
@@ -395,15 +404,62 @@ public sealed class BatchReport
                 BinWidth = "not used here: every figure is the hourly method's sum over the record's hours",
                 Calendar = "each record's own (tables/climates: hours and period)",
                 Schedule = "the study's schedule, the same in every climate",
+                DataRepairs = Batch?["warnings"] is System.Text.Json.Nodes.JsonObject repairs && repairs["weather-repairs"] is { } repaired
+                    ? [FormattableString.Invariant($"{repaired} climates had repairs to their weather data (counted per kind in each climate's rows of tables/warnings, kind weather-repairs)")]
+                    : [],
                 Other =
                 [
                     new ReportKeyValue("degree-days", $"{Climates.Table["degree_day_method"].Texts.FirstOrDefault() ?? "daily-mean"}, base {DisplayUnits.Text(Units.Temperature, Units.DegreeDayBaseC, "0.#")}"),
                     new ReportKeyValue("year shown", "typical year, the record's one year, or the mean of a multi-year record's complete years"),
                 ],
             },
+            Inputs = [WeatherFiles()],
             Results = sections,
             Warnings = Warnings,
         };
+    }
+
+    /// <summary>How many climates the report lists one by one under Inputs; a larger batch points to tables/climates.</summary>
+    public const int ListedClimates = 200;
+
+    /// <summary>Each climate's weather file and the site it sets, from the climates table (up to <see cref="ListedClimates"/> climates).</summary>
+    private ReportSection WeatherFiles()
+    {
+        var t = Climates.Table;
+        int n = t.RowCount;
+        if (n > ListedClimates)
+        {
+            return new ReportSection("Weather files", [new ReportParagraph(FormattableString.Invariant(
+                $"{n:N0} climates: each one's weather file, site, station, elevation, site pressure, hours and period are in tables/climates."))]);
+        }
+
+        // The columns a reader needs to know where each figure comes from, headed as people read them.
+        var columns = new List<(string Heading, Func<int, string> Cell)>
+        {
+            ("Climate", i => t["climate"].Texts[i]),
+            ("Weather file", i => Path.GetFileName(t["weather"].Texts[i])),
+            ("Site in the file", i => t["site"].Texts[i]),
+        };
+        if (t.HasColumn("station_id"))
+        {
+            columns.Add(("Station", i => t["station_id"].Texts[i]));
+        }
+
+        columns.Add(("Period", i => t["period"].Texts[i]));
+        columns.Add(("Hours", i => t["hours_in_record"].Integers[i].ToString("N0", CultureInfo.InvariantCulture)));
+        foreach (var (prefix, label, format) in new[] { ("elevation_", "Elevation", "#,##0"), ("site_pressure_", "Site pressure", "0.000") })
+        {
+            if (t.Columns.FirstOrDefault(c => c.Name.StartsWith(prefix, StringComparison.Ordinal)) is { } c)
+            {
+                string unit = c.Name[prefix.Length..];
+                columns.Add(($"{label}, {(unit == "ft" ? "ft" : unit == "m" ? "m" : unit == "psia" ? "psia" : unit == "kpa" ? "kPa" : unit)}",
+                    i => double.IsFinite(c.Numbers[i]) ? c.Numbers[i].ToString(format, CultureInfo.InvariantCulture) : string.Empty));
+            }
+        }
+
+        var rows = Enumerable.Range(0, n).Select(i => (IReadOnlyList<string>)columns.Select(c => c.Cell(i)).ToList()).ToList();
+        return new ReportSection("Weather files",
+            [new ReportTable("Each climate's weather file and the site it sets (tables/climates has the degree-days and design conditions too)", columns.Select(c => c.Heading).ToList(), rows)]);
     }
 
     private static ReportTable RankingTable(ResultTable ranking, HeadlineFigure f, string variant)

@@ -28,6 +28,12 @@ public sealed class BatchMapTests
         Assert.Equal(2, batch.GetProperty("done").GetInt32());
         Assert.Equal(0, batch.GetProperty("failed").GetInt32());
 
+        // The report names each weather file and the site it sets under Inputs.
+        var inputs = new AngleSharp.Html.Parser.HtmlParser().ParseDocument(File.ReadAllText(Path.Combine(f.Path, "with", "report.html"))).GetElementById("inputs")!.TextContent;
+        Assert.Contains("725300TYA.CSV.gz", inputs, StringComparison.Ordinal);
+        Assert.Contains("722040TYA.CSV.gz", inputs, StringComparison.Ordinal);
+        Assert.Contains("CHICAGO OHARE INTL AP", inputs, StringComparison.Ordinal); // the site name in the file's header
+
         (code, _, err) = BatchFolder.Cli("batch", f.Study, "--weather", glob, "--map", "tmy4", "--out", Path.Combine(f.Path, "bad"));
         Assert.Equal(3, code);
         Assert.Contains("--map tmy4: not a shipped column map (shipped: ", err, StringComparison.Ordinal);
