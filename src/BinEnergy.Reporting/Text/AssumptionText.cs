@@ -69,7 +69,9 @@ public static class AssumptionText
             string frost = r.FrostLimit is Temperature fl ? FormattableString.Invariant($"; below {u.Show(fl)} sensible {r.FrostEffectiveness:0.##}") : string.Empty;
             yield return FormattableString.Invariant($"energy recovery: sensible {r.SensibleEffectiveness:0.##}, latent {r.LatentEffectiveness:0.##}{frost}; off between the setpoints; ")
                 + $"{DisplayUnits.Text(u.PressureDrop, r.PressureDropPa)} per stream at fan efficiency {r.FanEfficiency.ToString("0.##", System.Globalization.CultureInfo.InvariantCulture)}: "
-                + $"{DisplayUnits.Text(u.Power, a.FanPenalty.Watts)} {(r.BypassWhenIdle ? "in recovering hours" : "in every ventilated hour")}";
+                + $"{DisplayUnits.Text(u.Power, a.FanPenalty.Watts)} {(r.BypassWhenIdle ? "in recovering hours" : "in every ventilated hour")}"
+                + (r.PressureDropPa > 0 ? string.Empty
+                    : " (at zero pressure drop the device costs no fan energy: give its pressure drop; a wheel or plate exchanger typically adds 0.5 to 1 in. w.g., 125 to 250 Pa, on each air stream, recalled from memory)");
         }
 
         yield return a.VentilationFanPower.Watts > 0
