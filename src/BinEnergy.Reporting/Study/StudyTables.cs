@@ -113,6 +113,7 @@ public static class StudyTables
             .Text("year", "Year", x => x.Year)
             .Integer("complete_year", "Complete year", x => x.Complete ? 1 : 0, detail: true)
             .Text("method", "Method", x => IntegrationMethods.Name(x.Method))
+            .Number("airflow", u.Airflow, "Airflow", x => x.Case.Case.OutdoorAir.EffectiveAirflow.CubicMetresPerSecond)
             .Add(FigureColumns.Loads(u, show), x => x.OutdoorAir.Annual[x.Method])
             .Fill(new ResultTable("annual") { Title = "Annual outdoor-air loads by method" },
                 cases.SelectMany(c => YearsOf(c).SelectMany(y => IntegrationMethods.All.Select(m => (c, y.Year, y.Complete, y.OutdoorAir, m)))));
