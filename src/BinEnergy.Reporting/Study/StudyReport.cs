@@ -211,7 +211,7 @@ public static class StudyReport
         {
             sections.Add(new ReportSection("Peak outdoor-air loads at the design conditions",
             [
-                Table(peaks, "The outdoor air's load at each design condition of the climate (heating: sensible and humidification; cooling and dehumidification: the total)"),
+                ConditionNames(Table(peaks, "The outdoor air's load at each design condition of the climate (heating: sensible and humidification; cooling and dehumidification: the total)"), run),
             ]));
         }
 
@@ -390,6 +390,17 @@ public static class StudyReport
         return unmet.Count == 0
             ? "The system meets the building's cooling load in every hour (no unmet load)."
             : "Load the system could not meet at its supply airflow and temperature (the unmet load column; it is not bought, so check the system size): " + string.Join("; ", unmet) + ".";
+    }
+
+    /// <summary>The peaks table with each condition's name as people read it ("heating 99.6 % dry-bulb") in place of its table key (<c>heating_99_6</c>).</summary>
+    private static ReportTable ConditionNames(ReportTable table, StudyRunResult run)
+    {
+        var names = run.Cases.SelectMany(c => c.OutdoorAir.Peaks?.All ?? []).GroupBy(p => p.Key).ToDictionary(g => g.Key, g => g.First().Condition, StringComparer.Ordinal);
+        int at = table.Headers.ToList().IndexOf("Condition");
+        return at < 0 ? table : table with
+        {
+            Rows = table.Rows.Select(r => (IReadOnlyList<string>)r.Select((cell, i) => i == at && names.TryGetValue(cell, out var n) ? n : cell).ToList()).ToList(),
+        };
     }
 
     /// <summary>The rows of a result table whose <c>variant</c> is one of <paramref name="variants"/>, as a report table.</summary>
