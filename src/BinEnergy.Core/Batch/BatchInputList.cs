@@ -26,26 +26,13 @@ public static class BatchInputList
     /// <exception cref="BatchInputException">Nothing to run: the folder, glob or list names no weather file, or the list has no <c>weather</c> column; or the map is not a shipped name or a file.</exception>
     public static BatchInputs Read(string spec, string? map = null)
     {
+        string? defaultMap = null;
         if (map is not null)
         {
-            map = map.Contains('/', StringComparison.Ordinal) || map.EndsWith(".toml", StringComparison.OrdinalIgnoreCase)
-                ? (File.Exists(map) ? Path.GetFullPath(map) : throw new BatchInputException($"--map {map}: no such map file; give a shipped name ({string.Join(", ", ColumnMap.ShippedNames)}) or the path of a TOML map file"))
-                : ColumnMap.ShippedText(map) is not null ? map
-                : throw new BatchInputException($"--map {map}: not a shipped column map (shipped: {string.Join(", ", ColumnMap.ShippedNames)}); give a shipped name or the path of a TOML map file");
+            var (resolved, problem) = ResolveMap(map, Directory.GetCurrentDirectory());
+            defaultMap = problem is null ? resolved : throw new BatchInputException($"--{problem}");
         }
 
-        var inputs = ReadWithoutMap(spec);
-        if (map is null)
-        {
-            return inputs;
-        }
-
-        var stations = inputs.Stations.Select(st => st.Map is null ? st with { Map = map } : st).ToList();
-        return inputs with { Stations = stations, Hash = Hash(stations, inputs.Problems) };
-    }
-
-    private static BatchInputs ReadWithoutMap(string spec)
-    {
         if (string.IsNullOrWhiteSpace(spec))
         {
             throw new BatchInputException("--weather is empty: give a folder of weather files, a glob such as 'weather/*.csv', or a station list (CSV with a weather column)");
@@ -54,26 +41,42 @@ public static class BatchInputList
         if (Directory.Exists(spec))
         {
             var files = Directory.EnumerateFiles(spec).Where(IsWeatherFile).ToList();
-            return FromFiles(files, Path.GetFullPath(spec), spec, "no weather file (" + string.Join(", ", WeatherEndings) + ") in the folder");
+            return FromFiles(files, Path.GetFullPath(spec), spec, defaultMap, "no weather file (" + string.Join(", ", WeatherEndings) + ") in the folder");
         }
 
         if (File.Exists(spec) && IsStationList(spec))
         {
-            return FromList(spec);
+            return FromList(spec, defaultMap);
         }
 
         if (File.Exists(spec))
         {
-            return FromFiles([spec], Path.GetDirectoryName(Path.GetFullPath(spec))!, spec, "no file");
+            return FromFiles([spec], Path.GetDirectoryName(Path.GetFullPath(spec))!, spec, defaultMap, "no file");
         }
 
         if (spec.IndexOfAny(['*', '?']) >= 0)
         {
             var (root, files) = Glob(spec);
-            return FromFiles(files, root, spec, "no file matches the glob");
+            return FromFiles(files, root, spec, defaultMap, "no file matches the glob");
         }
 
         throw new BatchInputException($"--weather {spec}: no such folder or file; give a folder of weather files, a glob such as 'weather/*.csv' (quoted), or a station list (CSV with a weather column)");
+    }
+
+    /// <summary>
+    /// A column map as written: a path (it holds a slash or ends in .toml; relative to <paramref name="folder"/>) made absolute, or a
+    /// shipped map's name; the problem (worded after "map ...") when it is neither, or when <paramref name="mustExist"/> and the file is missing.
+    /// </summary>
+    private static (string Map, string? Problem) ResolveMap(string map, string folder, bool mustExist = true)
+    {
+        string hint = $"give a shipped name ({string.Join(", ", ColumnMap.ShippedNames)}) or the path of a TOML map file";
+        if (map.Contains('/', StringComparison.Ordinal) || map.EndsWith(".toml", StringComparison.OrdinalIgnoreCase))
+        {
+            string full = Path.GetFullPath(Path.Combine(folder, map));
+            return (full, mustExist && !File.Exists(full) ? $"map {map}: no such map file; {hint}" : null);
+        }
+
+        return (map, ColumnMap.ShippedText(map) is null ? $"map {map}: not a shipped column map (shipped: {string.Join(", ", ColumnMap.ShippedNames)}); {hint}" : null);
     }
 
     private static bool IsWeatherFile(string path) =>
@@ -87,7 +90,7 @@ public static class BatchInputList
         return first is not null && first.Split(',').Any(f => f.Trim().Trim('"').Equals("weather", StringComparison.OrdinalIgnoreCase));
     }
 
-    private static BatchInputs FromFiles(List<string> files, string root, string spec, string none)
+    private static BatchInputs FromFiles(List<string> files, string root, string spec, string? map, string none)
     {
         if (files.Count == 0)
         {
@@ -97,7 +100,7 @@ public static class BatchInputList
         var stations = files.Select(Path.GetFullPath).Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal).Select(full =>
         {
             string id = IdOf(full, root);
-            return new BatchStation(id, full, null, null, null, [], spec, null) { Id = id };
+            return new BatchStation(id, full, null, map, null, [], spec, null) { Id = id };
         }).ToList();
         return new BatchInputs(stations, [], [], Hash(stations));
     }
@@ -110,7 +113,7 @@ public static class BatchInputList
         return ending is null ? rel : rel[..^ending.Length];
     }
 
-    private static BatchInputs FromList(string list)
+    private static BatchInputs FromList(string list, string? defaultMap)
     {
         string folder = Path.GetDirectoryName(Path.GetFullPath(list))!;
         using var reader = CsvReader.FromText(File.ReadAllText(list), new CsvReaderOptions { HasHeader = true, TrackLineNumbers = true, TrimWhitespace = true, FormatProvider = CultureInfo.InvariantCulture });
@@ -164,22 +167,25 @@ public static class BatchInputList
                 elevation = m;
             }
 
-            string map = Get("map");
-            if (map.Length > 0 && (map.Contains('/', StringComparison.Ordinal) || map.EndsWith(".toml", StringComparison.OrdinalIgnoreCase)))
+            string written = Get("map");
+            string? map = defaultMap;
+            if (written.Length > 0)
             {
-                map = Path.GetFullPath(Path.Combine(folder, map));
-            }
-            else if (map.Length > 0 && ColumnMap.ShippedText(map) is null)
-            {
-                problems.Add(Bad(list, line, $"map '{map}' is not a shipped column map (shipped: {string.Join(", ", ColumnMap.ShippedNames)}); give a shipped name or the path of a TOML map file"));
-                continue;
+                var (resolved, problem) = ResolveMap(written, folder, mustExist: false);
+                if (problem is not null)
+                {
+                    problems.Add(Bad(list, line, problem));
+                    continue;
+                }
+
+                map = resolved;
             }
 
             string full = Path.GetFullPath(Path.Combine(folder, weather));
             string name = Get("name");
             string id = IdOf(full, folder);
             var attrs = attributes.Select(a => new KeyValuePair<string, string>(a, reader.GetString(Array.IndexOf(headers, a)).Trim())).ToList();
-            stations.Add(new BatchStation(name.Length > 0 ? name : id, full, name.Length > 0 ? name : null, map.Length > 0 ? map : null, elevation, attrs, list, line) { Id = id });
+            stations.Add(new BatchStation(name.Length > 0 ? name : id, full, name.Length > 0 ? name : null, map, elevation, attrs, list, line) { Id = id });
         }
 
         // A duplicate key (two rows with the same name, or the same file twice without names) stops the later row.

@@ -447,13 +447,12 @@ public sealed class BatchReport
 
         columns.Add(("Period", i => t["period"].Texts[i]));
         columns.Add(("Hours", i => t["hours_in_record"].Integers[i].ToString("N0", CultureInfo.InvariantCulture)));
-        foreach (var (prefix, label, format) in new[] { ("elevation_", "Elevation", "#,##0"), ("site_pressure_", "Site pressure", "0.000") })
+        foreach (var (key, label, unit) in new[] { ("elevation", "Elevation", Units.Length), ("site_pressure", "Site pressure", Units.Pressure) })
         {
-            if (t.Columns.FirstOrDefault(c => c.Name.StartsWith(prefix, StringComparison.Ordinal)) is { } c)
+            if (t.HasColumn(unit.NameFor(key)))
             {
-                string unit = c.Name[prefix.Length..];
-                columns.Add(($"{label}, {(unit == "ft" ? "ft" : unit == "m" ? "m" : unit == "psia" ? "psia" : unit == "kpa" ? "kPa" : unit)}",
-                    i => double.IsFinite(c.Numbers[i]) ? c.Numbers[i].ToString(format, CultureInfo.InvariantCulture) : string.Empty));
+                var c = t[unit.NameFor(key)];
+                columns.Add((label + ", " + unit.Symbol, i => double.IsFinite(c.Numbers[i]) ? c.Numbers[i].ToString(unit.Format, CultureInfo.InvariantCulture) : string.Empty));
             }
         }
 

@@ -29,9 +29,6 @@ public static class TextRenderer
         }
     }
 
-    /// <summary>Integer columns that are labels rather than amounts (a year, a line of a file, a month, an hour, a 0/1 flag): written without thousands separators.</summary>
-    private static readonly HashSet<string> PlainIntegers = new(StringComparer.Ordinal) { "year", "line", "month", "hour", "occupied", "complete_year" };
-
     /// <summary>A cell's text: numbers in the column's format (empty when not finite), counts with thousands separators (8,760 hours), text printable.</summary>
     public static string Cell(ResultColumn column, int row) => column.Kind switch
     {
@@ -39,7 +36,7 @@ public static class TextRenderer
         ColumnKind.Number => double.IsFinite(column.Numbers[row])
             ? column.Numbers[row].ToString(column.Unit?.Format ?? "0.###", CultureInfo.InvariantCulture)
             : string.Empty,
-        _ => column.Integers[row].ToString(PlainIntegers.Contains(column.Name) ? "0" : "#,##0", CultureInfo.InvariantCulture),
+        _ => column.Integers[row].ToString(column.IsCount ? "#,##0" : "0", CultureInfo.InvariantCulture),
     };
 
     /// <summary>The grid a table shows as text: a heading row, then the body rows, with which columns are numeric.</summary>

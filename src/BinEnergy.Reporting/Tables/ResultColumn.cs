@@ -30,6 +30,9 @@ public sealed class ResultColumn
     /// <summary>True for a column kept in JSON, CSV and Parquet but left out of terminal and report tables.</summary>
     public bool Detail { get; }
 
+    /// <summary>An integer column of amounts (hours, counts), shown with thousands separators; false for labels that are numbers (a year, a line of a file) and for other kinds.</summary>
+    public bool IsCount => Kind == ColumnKind.Integer && Name is not ("year" or "line");
+
     /// <summary>The heading with its unit symbol, e.g. "Heating, kBtu".</summary>
     public string Heading => Unit is { Symbol.Length: > 0 } u ? Label + ", " + u.Symbol : Label;
 

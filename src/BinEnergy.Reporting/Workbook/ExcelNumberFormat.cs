@@ -16,6 +16,9 @@ public static partial class ExcelNumberFormat
     /// <summary>A whole number with thousands separators (hours, as the terminal shows them).</summary>
     public const string WholeNumber = "#,##0";
 
+    /// <summary>A whole number that is a label (a year, a line), without separators.</summary>
+    public const string PlainWholeNumber = "0";
+
     /// <summary>The Excel format for the .NET format <paramref name="dotnet"/> (General when null).</summary>
     public static string From(string? dotnet)
     {

@@ -56,7 +56,7 @@ public sealed class WorkbookSheet
         {
             ColumnKind.Text => null,
             ColumnKind.Number => ExcelNumberFormat.From(c.Unit?.Format),
-            _ => ExcelNumberFormat.WholeNumber,
+            _ => c.IsCount ? ExcelNumberFormat.WholeNumber : ExcelNumberFormat.PlainWholeNumber,
         }).ToList();
         var rows = Enumerable.Range(0, table.RowCount)
             .Select(r => (IReadOnlyList<object?>)table.Columns.Select(c => Cell(c, r)).ToList())

@@ -1,8 +1,6 @@
-using System.Reflection;
 using System.Text.RegularExpressions;
 using BinEnergy.Cli;
 using BinEnergy.Tests.Support;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Tests.Cli;
 
@@ -39,10 +37,7 @@ public sealed partial class DocsMentionRealOptionsTests
     }
 
     private static HashSet<string> Options(Type settings) =>
-        settings.GetProperties(BindingFlags.Public | BindingFlags.Instance)
-            .SelectMany(p => p.GetCustomAttributes<CommandOptionAttribute>())
-            .SelectMany(a => a.LongNames.Select(n => "--" + n))
-            .Append("--help").ToHashSet(StringComparer.Ordinal);
+        UsageMessages.OptionNames(settings).Select(n => "--" + n).Append("--help").ToHashSet(StringComparer.Ordinal);
 
     /// <summary>Each piece of code in a Markdown file (an inline span, or a line of a fenced block) with its line number.</summary>
     private static IEnumerable<(int Line, string Code)> CodeOf(string file)
