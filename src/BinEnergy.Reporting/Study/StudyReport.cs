@@ -228,7 +228,7 @@ public static class StudyReport
                     + "the modes are counted over the hours the system runs. The per-bin modes are in tables/economizer and on each variant's modes chart." + which),
                 new ReportParagraph("The economizer evaluation takes each variant's ventilation airflow as its minimum outdoor air (unless [economizer] "
                     + "min_outdoor_airflow sets one) and models the air system without energy recovery: a variant that changes only the recovery "
-                    + "or the heating plant has its base's rows. " + Unmet(run, u, headline)),
+                    + "has its base's rows, and one that changes only the plant its base's energy at another cost. " + Unmet(run, u, headline)),
             ]));
         }
 
@@ -385,7 +385,10 @@ public static class StudyReport
         var unmet = run.Cases.Where(c => c.Economizer is not null)
             .Select(c => (Case: c, Baseline: c.Economizer!.Baseline.Totals[method]))
             .Where(x => x.Baseline.Unmet.Joules > 0.001 * Math.Max(x.Baseline.CoilTotal.Joules, 1))
-            .Select(x => FormattableString.Invariant($"{x.Case.Case.Climate.Name}, {x.Case.Case.Variant.Name}: {DisplayUnits.Text(u.Energy, x.Baseline.Unmet.Joules)} ({100 * x.Baseline.Unmet.Joules / x.Baseline.CoilTotal.Joules:0.0} % of the baseline coil energy)"))
+            .Select(x => (Climate: x.Case.Case.Climate.Name, Variant: x.Case.Case.Variant.Name,
+                Text: FormattableString.Invariant($"{DisplayUnits.Text(u.Energy, x.Baseline.Unmet.Joules)} ({100 * x.Baseline.Unmet.Joules / x.Baseline.CoilTotal.Joules:0.0} % of the baseline coil energy)")))
+            .GroupBy(x => (x.Climate, x.Text))
+            .Select(g => $"{g.Key.Climate} ({(g.Count() == run.Study.Variants.Count ? "every variant" : string.Join(", ", g.Select(x => x.Variant)))}): {g.Key.Text}")
             .ToList();
         return unmet.Count == 0
             ? "The system meets the building's cooling load in every hour (no unmet load)."
