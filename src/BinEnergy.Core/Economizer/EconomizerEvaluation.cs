@@ -189,11 +189,11 @@ public sealed class EconomizerEvaluation
             }
         }
 
-        var baseline = Totals(0, nc, nb, byBin, byBinJoint, byBinHourly, monthly, out var baseByBin, out var baseByMonth);
+        var baseline = Totals(0, nc, nb, byBin, byBinJoint, byBinHourly, monthly, plant, out var baseByBin, out var baseByMonth);
         var results = new EconomizerControlResult[nc];
         for (int c = 0; c < nc; c++)
         {
-            var totals = c == 0 ? baseline : Totals(c, nc, nb, byBin, byBinJoint, byBinHourly, monthly, out baseByBin, out baseByMonth);
+            var totals = c == 0 ? baseline : Totals(c, nc, nb, byBin, byBinJoint, byBinHourly, monthly, plant, out baseByBin, out baseByMonth);
             results[c] = new EconomizerControlResult
             {
                 Control = controls[c],
@@ -212,7 +212,7 @@ public sealed class EconomizerEvaluation
 
     /// <summary>One control's annual totals by each method, with its per-bin and per-month breakdowns.</summary>
     private static ByMethod<EconomizerTotals> Totals(int c, int nc, int nb, ModeEnergySums[] byBin, ModeEnergySums[] byBinJoint,
-        ModeEnergySums[] byBinHourly, ModeEnergySums[] monthly, out ByMethod<EconomizerTotals>[] perBin, out EconomizerTotals[] perMonth)
+        ModeEnergySums[] byBinHourly, ModeEnergySums[] monthly, PlantModel? plant, out ByMethod<EconomizerTotals>[] perBin, out EconomizerTotals[] perMonth)
     {
         ModeEnergySums bin = default, joint = default, hourly = default;
         perBin = new ByMethod<EconomizerTotals>[nb];
@@ -220,17 +220,17 @@ public sealed class EconomizerEvaluation
         {
             bin.Add(in byBin[b * nc + c]);
             joint.Add(in byBinJoint[b * nc + c]);
-            perBin[b] = new ByMethod<EconomizerTotals>(byBinHourly[c * nb + b].ToTotals(), byBinJoint[b * nc + c].ToTotals(), byBin[b * nc + c].ToTotals());
+            perBin[b] = new ByMethod<EconomizerTotals>(byBinHourly[c * nb + b].ToTotals(plant), byBinJoint[b * nc + c].ToTotals(plant), byBin[b * nc + c].ToTotals(plant));
         }
 
         perMonth = new EconomizerTotals[12];
         for (int m = 0; m < 12; m++)
         {
             hourly.Add(in monthly[c * 12 + m]);
-            perMonth[m] = monthly[c * 12 + m].ToTotals();
+            perMonth[m] = monthly[c * 12 + m].ToTotals(plant);
         }
 
-        return new ByMethod<EconomizerTotals>(hourly.ToTotals(), joint.ToTotals(), bin.ToTotals());
+        return new ByMethod<EconomizerTotals>(hourly.ToTotals(plant), joint.ToTotals(plant), bin.ToTotals(plant));
     }
 
     /// <summary>The model, the controls and the plant of one evaluation.</summary>
@@ -289,8 +289,10 @@ public sealed class EconomizerEvaluation
                 {
                     var r = c == 0 ? baseline : model.Resolve(controls[c], qb, in baseline, t[i], w[i], h[i], dp[i]);
                     double copR = byWetBulb ? EnteringCop(in r, t[i], 1.0, c == 0 ? Clamps : ignored) : cop;
-                    monthly[c * 12 + month].Add(in r, 1.0, plant, copR, t[i], c == 0 ? Clamps : ignored);
-                    byBin[c * nb + bin].Add(in r, 1.0, plant, copR, t[i], ignored);
+                    var hour = default(ModeEnergySums);
+                    hour.Add(in r, 1.0, plant, copR, t[i], c == 0 ? Clamps : ignored);
+                    monthly[c * 12 + month].Add(in hour);
+                    byBin[c * nb + bin].Add(in hour);
                 }
             }
 

@@ -3,7 +3,10 @@ using BinEnergy.Core.Units;
 
 namespace BinEnergy.Core.Economizer;
 
-/// <summary>Running sums behind <see cref="EconomizerTotals"/>: allocation-free, one per control and cell.</summary>
+/// <summary>
+/// Running sums behind <see cref="EconomizerTotals"/>: allocation-free, one per control and cell. What the plant buys is
+/// summed as joules per fuel and priced once in <see cref="ToTotals"/> (a tariff is linear in the joules).
+/// </summary>
 internal struct ModeEnergySums
 {
     private double _noCooling;
@@ -12,13 +15,12 @@ internal struct ModeEnergySums
     private double _minimum;
     private double _sensibleJ;
     private double _latentJ;
-    private SiteEnergy _compressor;
+    private double _compressorJ;
     private double _reheatJ;
     private double _preheatJ;
     private double _unmetJ;
-    private SiteEnergy _heating;
+    private FuelJoules _heating;
     private double _fanJ;
-    private SiteEnergy _fan;
 
     /// <summary>
     /// Adds <paramref name="hours"/> of an hour's result (loads in W, energy in J), and the
@@ -27,12 +29,7 @@ internal struct ModeEnergySums
     /// </summary>
     public void Add(in EconomizerHour hour, double hours, PlantModel? plant, double cop, double outdoorC, CurveClampCounter clamps)
     {
-        double fan = hour.FanW * hours * 3600.0;
-        _fanJ += fan;
-        if (plant is not null && fan > 0)
-        {
-            _fan += plant.Electricity(fan);
-        }
+        _fanJ += hour.FanW * hours * 3600.0;
 
         switch (hour.Mode)
         {
@@ -57,7 +54,7 @@ internal struct ModeEnergySums
         _latentJ += latent;
         if (plant is not null && sensible + latent > 0)
         {
-            _compressor += plant.Electricity((sensible + latent) / cop);
+            _compressorJ += (sensible + latent) / cop;
         }
 
         double reheat = hour.ReheatW * seconds;
@@ -67,7 +64,9 @@ internal struct ModeEnergySums
         _unmetJ += hour.UnmetW * seconds;
         if (plant is not null && reheat + preheat > 0)
         {
-            _heating += plant.Heating(reheat + preheat, outdoorC, hours, clamps);
+            var f = plant.HeatingFuels(reheat + preheat, outdoorC, hours, clamps);
+            _heating.Add(f.Main, f.MainJ);
+            _heating.Add(f.Backup, f.BackupJ);
         }
     }
 
@@ -80,23 +79,24 @@ internal struct ModeEnergySums
         _minimum += other._minimum;
         _sensibleJ += other._sensibleJ;
         _latentJ += other._latentJ;
-        _compressor += other._compressor;
+        _compressorJ += other._compressorJ;
         _reheatJ += other._reheatJ;
         _preheatJ += other._preheatJ;
         _unmetJ += other._unmetJ;
-        _heating += other._heating;
+        _heating.Add(in other._heating);
         _fanJ += other._fanJ;
-        _fan += other._fan;
     }
 
-    public readonly EconomizerTotals ToTotals() =>
-        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ), _compressor)
+    /// <summary>The totals, with what the plant bought priced through <paramref name="plant"/> (nothing bought without one).</summary>
+    public readonly EconomizerTotals ToTotals(PlantModel? plant) =>
+        new(_noCooling, _free, _integrated, _minimum, Energy.FromJoules(_sensibleJ), Energy.FromJoules(_latentJ),
+            plant?.Electricity(_compressorJ) ?? SiteEnergy.Zero)
         {
             Reheat = Energy.FromJoules(_reheatJ),
             Preheat = Energy.FromJoules(_preheatJ),
             Unmet = Energy.FromJoules(_unmetJ),
-            Heating = _heating,
+            Heating = plant?.Price(in _heating) ?? SiteEnergy.Zero,
             Fans = Energy.FromJoules(_fanJ),
-            FanElectricity = _fan,
+            FanElectricity = plant?.Electricity(_fanJ) ?? SiteEnergy.Zero,
         };
 }

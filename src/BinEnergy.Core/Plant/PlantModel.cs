@@ -91,15 +91,26 @@ public sealed class PlantModel(PlantSettings settings)
     /// </summary>
     public (SiteEnergy Main, SiteEnergy Backup) HeatingSplit(double heatingJ, double outdoorC, double hours, CurveClampCounter clamps)
     {
+        var f = HeatingFuels(heatingJ, outdoorC, hours, clamps);
+        return (f.MainJ > 0 ? SiteEnergy.Buy(f.Main, f.MainJ, Tariff(f.Main)) : SiteEnergy.Zero,
+            f.BackupJ > 0 ? SiteEnergy.Buy(f.Backup, f.BackupJ, Tariff(f.Backup)) : SiteEnergy.Zero);
+    }
+
+    /// <summary>
+    /// The fuels bought to meet a heating load, unpriced (<see cref="HeatingSplit"/> prices them): the heating
+    /// source's fuel and joules, and the backup's.
+    /// </summary>
+    public (Fuel Main, double MainJ, Fuel Backup, double BackupJ) HeatingFuels(double heatingJ, double outdoorC, double hours, CurveClampCounter clamps)
+    {
+        var s = Settings;
         if (heatingJ <= 0)
         {
-            return (SiteEnergy.Zero, SiteEnergy.Zero);
+            return (s.HeatingFuel, 0.0, s.BackupFuel, 0.0);
         }
 
-        var s = Settings;
         if (s.Heating != HeatingSource.HeatPump)
         {
-            return (SiteEnergy.Buy(s.HeatingFuel, heatingJ / s.HeatingEfficiency, Tariff(s.HeatingFuel)), SiteEnergy.Zero);
+            return (s.HeatingFuel, heatingJ / s.HeatingEfficiency, s.BackupFuel, 0.0);
         }
 
         var curve = s.HeatPumpCop ?? throw new InvalidOperationException("heat pump without a COP curve");
@@ -113,7 +124,7 @@ public sealed class PlantModel(PlantSettings settings)
             carried = Math.Min(heatingJ, capacity.Evaluate(outdoorC) * hours * 3600.0);
         }
 
-        var main = SiteEnergy.Zero;
+        double main = 0.0;
         if (carried > 0)
         {
             if (curve.IsOutside(outdoorC))
@@ -122,13 +133,18 @@ public sealed class PlantModel(PlantSettings settings)
             }
 
             double cop = curve.Evaluate(outdoorC) * (s.DefrostBelow is { } d && outdoorC < d.Celsius ? 1.0 - s.DefrostPenalty : 1.0);
-            main = SiteEnergy.Buy(Fuel.Electricity, carried / cop, Tariff(Fuel.Electricity));
+            main = carried / cop;
         }
 
         double rest = heatingJ - carried;
-        var backup = rest > 0 ? SiteEnergy.Buy(s.BackupFuel, rest / s.BackupEfficiency, Tariff(s.BackupFuel)) : SiteEnergy.Zero;
-        return (main, backup);
+        return (Fuel.Electricity, main, s.BackupFuel, rest > 0 ? rest / s.BackupEfficiency : 0.0);
     }
+
+    /// <summary>Joules per fuel priced and weighed with each fuel's tariff.</summary>
+    public SiteEnergy Price(in FuelJoules joules) =>
+        SiteEnergy.Buy(Fuel.Electricity, joules.ElectricityJ, Tariff(Fuel.Electricity))
+        + SiteEnergy.Buy(Fuel.Gas, joules.GasJ, Tariff(Fuel.Gas))
+        + SiteEnergy.Buy(Fuel.Oil, joules.OilJ, Tariff(Fuel.Oil));
 
     /// <summary>Electricity bought to remove a cooling coil load (sensible plus latent), J.</summary>
     public SiteEnergy Cooling(double coilJ, double outdoorC, double hours, CurveClampCounter clamps)
