@@ -285,12 +285,30 @@ public sealed class EconomizerEvaluation
                 // Clamped cooling COPs count in the hours the building needs cooling or the baseline coil runs
                 // (with a wet-bulb table: in the hours the baseline coil runs, at its entering state).
                 double cop = byWetBulb ? 1.0 : Cop(t[i], 1.0, qb > 0 || baseline.CoilRuns ? Clamps : ignored);
+
+                // An hour has two outcomes, minimum outdoor air or the economizer's one enabled state: each is solved
+                // and bought once, and every control adds the one it chooses.
+                var atMinimum = default(ModeEnergySums);
+                atMinimum.Add(in baseline, 1.0, plant, byWetBulb ? EnteringCop(in baseline, t[i], 1.0, Clamps) : cop, t[i], Clamps);
+                var economizing = default(ModeEnergySums);
+                var enabled = default(EconomizerHour);
+                bool solved = false;
                 for (int c = 0; c < nc; c++)
                 {
-                    var r = c == 0 ? baseline : model.Resolve(controls[c], qb, in baseline, t[i], w[i], h[i], dp[i]);
-                    double copR = byWetBulb ? EnteringCop(in r, t[i], 1.0, c == 0 ? Clamps : ignored) : cop;
-                    var hour = default(ModeEnergySums);
-                    hour.Add(in r, 1.0, plant, copR, t[i], c == 0 ? Clamps : ignored);
+                    bool economizes = false;
+                    if (c > 0 && model.Enables(controls[c], t[i], h[i], dp[i]))
+                    {
+                        if (!solved)
+                        {
+                            enabled = model.EnabledHour(qb, t[i], w[i]);
+                            economizing.Add(in enabled, 1.0, plant, byWetBulb ? EnteringCop(in enabled, t[i], 1.0, ignored) : cop, t[i], ignored);
+                            solved = true;
+                        }
+
+                        economizes = EconomizerModel.Keeps(controls[c], in enabled);
+                    }
+
+                    ref readonly var hour = ref economizes ? ref economizing : ref atMinimum;
                     monthly[c * 12 + month].Add(in hour);
                     byBin[c * nb + bin].Add(in hour);
                 }

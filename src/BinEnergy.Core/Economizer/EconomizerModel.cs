@@ -189,18 +189,33 @@ public sealed class EconomizerModel
         double hO,
         double dpO)
     {
-        if (control.Kind == HighLimitKind.None || !IsEnabled(control, tO, hO, dpO))
+        if (!Enables(control, tO, hO, dpO))
         {
             return baseline;
         }
 
+        var economizer = EnabledHour(qb, tO, wO);
+        return Keeps(control, in economizer) ? economizer : baseline;
+    }
+
+    /// <summary>
+    /// True when <paramref name="control"/> opens the dampers past the minimum at this outdoor state (it has a
+    /// high limit that allows it and T_o &lt; T_r). Every control that does shares the hour's one
+    /// <see cref="EnabledHour"/>, so a loop over controls solves the system at most twice an hour.
+    /// </summary>
+    internal bool Enables(EconomizerControl control, double tO, double hO, double dpO) =>
+        control.Kind != HighLimitKind.None && IsEnabled(control, tO, hO, dpO);
+
+    /// <summary>
+    /// True when <paramref name="control"/>, enabled, keeps the economizer hour: always when integrated; a
+    /// non-integrated economizer locks out to minimum outdoor air whenever the coil must run.
+    /// </summary>
+    internal static bool Keeps(EconomizerControl control, in EconomizerHour enabled) => control.Integrated || !enabled.CoilRuns;
+
+    /// <summary>The economizer's hour with its mode: free cooling, or integrated when the coil trims; with no building load the mode stays "no cooling" (the supply is conditioned all the same).</summary>
+    internal EconomizerHour EnabledHour(double qb, double tO, double wO)
+    {
         var economizer = Enabled(qb, tO, wO);
-        if (economizer.CoilRuns && !control.Integrated)
-        {
-            return baseline;
-        }
-
-        // With no building load the mode stays "no cooling"; the supply is conditioned all the same.
         return qb <= 0 ? economizer
             : economizer with { Mode = economizer.CoilRuns ? EconomizerMode.Integrated : EconomizerMode.FreeCooling };
     }
