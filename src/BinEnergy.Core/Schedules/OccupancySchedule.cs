@@ -63,6 +63,14 @@ public sealed class OccupancySchedule
         return [.. weather.Times.Select(t => DaylightSavingRule.ClockTime(t, DaylightSaving, weather.Site.UtcOffsetHours))];
     }
 
+    /// <summary>True when <paramref name="other"/> occupies the same hours: the same week, holidays and daylight-saving rule (the texts may differ).</summary>
+    public bool SameHoursAs(OccupancySchedule other)
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        return ReferenceEquals(this, other)
+            || (DaylightSaving == other.DaylightSaving && table.AsSpan().SequenceEqual(other.table) && holidays.SetEquals(other.holidays));
+    }
+
     /// <summary>The holiday dates (unoccupied unless a <c>Hol</c> clause says otherwise).</summary>
     public IReadOnlyCollection<DateOnly> Holidays => holidays;
 

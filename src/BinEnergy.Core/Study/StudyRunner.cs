@@ -1,9 +1,11 @@
 using System.Reflection;
+using System.Runtime.CompilerServices;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Climate;
 using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Plant;
+using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Units;
 using BinEnergy.Core.Weather;
 
@@ -121,7 +123,7 @@ public static class StudyRunner
             }
         }
 
-        var flags = c.OutdoorAir.Schedule.Flags(weather);
+        var flags = OfRecord(c, weather).Flags;
         warnings.InsertRange(0, result.Warnings);
         if (c.Plant is PlantSettings ps && result.Clamps.CoolingHours > 0)
         {
@@ -164,9 +166,7 @@ public static class StudyRunner
     private static (OutdoorAirResult OutdoorAir, EconomizerEvaluation? Economizer) Evaluate(StudyCase c, HourlyWeather weather, bool keepHours)
     {
         var settings = c.OutdoorAir;
-        var flags = settings.Schedule.Flags(weather);
-        var table = BinTable.Build(weather, c.BinScale, flags);
-        var cells = HourCells.Build(weather, c.BinScale, HumidityBinScale.Default(c.BinScale.Units));
+        var (flags, table, cells) = OfRecord(c, weather);
         var plant = c.Plant is null ? null : new PlantModel(c.Plant);
         var result = OutdoorAirCalculator.Compute(weather, settings, table, cells, flags, plant, DesignConditions.FromRecord(weather), keepHours);
         if (c.Economizer is null)
@@ -182,6 +182,32 @@ public static class StudyRunner
         {
             var p = e.Problems[0];
             throw new StudyFileException(c.Climate.Name, null, "economizer." + p.Key, p.Message);
+        }
+    }
+
+    /// <summary>What a record gives every case with the same occupied hours and bin scale, built once per record.</summary>
+    private sealed record RecordParts(OccupancySchedule Schedule, DryBulbBinScale Scale, bool[] Flags, BinTable Table, HourCells Cells);
+
+    /// <summary>The parts of each record already built, for the variants that share them (the record's columns do not change after it is built).</summary>
+    private static readonly ConditionalWeakTable<HourlyWeather, List<RecordParts>> Parts = new();
+
+    /// <summary>A case's occupancy flags, bin table and hour cells on a record: built once per record for every variant with the same hours and bins.</summary>
+    private static (bool[] Flags, BinTable Table, HourCells Cells) OfRecord(StudyCase c, HourlyWeather weather)
+    {
+        var schedule = c.OutdoorAir.Schedule;
+        var list = Parts.GetValue(weather, _ => []);
+        lock (list)
+        {
+            var parts = list.Find(p => p.Scale == c.BinScale && p.Schedule.SameHoursAs(schedule));
+            if (parts is null)
+            {
+                var flags = schedule.Flags(weather);
+                parts = new RecordParts(schedule, c.BinScale, flags, BinTable.Build(weather, c.BinScale, flags),
+                    HourCells.Build(weather, c.BinScale, HumidityBinScale.Default(c.BinScale.Units)));
+                list.Add(parts);
+            }
+
+            return (parts.Flags, parts.Table, parts.Cells);
         }
     }
 
