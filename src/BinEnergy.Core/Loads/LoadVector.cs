@@ -57,6 +57,17 @@ public struct LoadVector : IEquatable<LoadVector>
     /// <summary>Adds hours ventilated.</summary>
     internal void AddHours(double hours) => HoursVentilated += hours;
 
+    /// <summary>Adds another vector in place (the hourly sums' loop, without copying the sum).</summary>
+    internal void Add(in LoadVector other)
+    {
+        for (int i = 0; i < FigureCount; i++)
+        {
+            joules[i] += other.joules[i];
+        }
+
+        HoursVentilated += other.HoursVentilated;
+    }
+
     public static LoadVector operator +(in LoadVector a, in LoadVector b)
     {
         var sum = a;

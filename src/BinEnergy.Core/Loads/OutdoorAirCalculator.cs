@@ -168,6 +168,15 @@ public static class OutdoorAirCalculator
         public CurveClampCounter Clamps { get; } = new();
     }
 
+    /// <summary>The hours' loads and the fuels bought for them, unpriced, of a bin or a month: priced once when the hours are in.</summary>
+    private struct UnpricedSum
+    {
+        public LoadVector Loads;
+        public PlantFuels Fuels;
+
+        public readonly EnergyFigures Priced(PlantModel? plant) => new(Loads, plant?.Price(in Fuels) ?? PlantEnergy.Zero);
+    }
+
     /// <summary>The settings resolved once for a run: the load model, the flow and fan model and the plant.</summary>
     private sealed class Engine
     {
@@ -208,21 +217,33 @@ public static class OutdoorAirCalculator
         private double Density(double t, double w, double p) =>
             settings.FlowBasis == FlowBasis.Actual ? MoistAir.DryAirDensity(t, w, p) : constantDensity;
 
-        /// <summary>The figures of <paramref name="hours"/> hours at one outdoor state, density, airflow multiplier and plant temperature.</summary>
-        private EnergyFigures At(double t, double w, double rho, double multiplier, double hours, CurveClampCounter clamps)
+        /// <summary>The loads of <paramref name="hours"/> hours at one outdoor state, density and airflow multiplier.</summary>
+        private LoadVector Loads(double t, double w, double rho, double multiplier, double hours)
         {
             var perKg = load.Evaluate(t, w, out bool recovering);
             double seconds = 3600.0 * hours;
             var loads = perKg.Scaled(rho * volume * multiplier * seconds);
             loads.Add(LoadFigure.FanEnergy, (ventilationFanW + (bypassWhenIdle && !recovering ? 0.0 : fanPowerW)) * multiplier * seconds);
             loads.AddHours(hours);
+            return loads;
+        }
+
+        /// <summary>The figures of <paramref name="hours"/> hours at one outdoor state, density, airflow multiplier and plant temperature.</summary>
+        private EnergyFigures At(double t, double w, double rho, double multiplier, double hours, CurveClampCounter clamps)
+        {
+            var loads = Loads(t, w, rho, multiplier, hours);
             return new EnergyFigures(loads, plant?.Buy(loads, t, clamps) ?? PlantEnergy.Zero);
         }
 
-        /// <summary>The hourly method: every ventilated hour into its month and bin, and the cells' statistics.</summary>
+        /// <summary>
+        /// The hourly method: every ventilated hour into its month and bin, and the cells' statistics. Each hour's
+        /// purchases are summed as joules per fuel and each bin's and month's sum priced once.
+        /// </summary>
         public HourlySums SumHours(bool[] occupied, HourCells cells, bool keepHours)
         {
             var sums = new HourlySums(cells.DryBulbBins, cells.Count) { Hours = keepHours ? new EnergyFigures[weather.Count] : null };
+            var byBin = new UnpricedSum[cells.DryBulbBins];
+            var byMonth = new UnpricedSum[12];
             var t = weather.DryBulbC;
             var w = weather.HumidityRatio;
             var p = weather.PressurePa;
@@ -241,15 +262,31 @@ public static class OutdoorAirCalculator
                 double rho = Density(t[i], w[i], p[i]);
                 densitySum += rho;
                 double f = multiplierByHour[clock[i].Hour];
-                var figures = At(t[i], w[i], rho, f, 1.0, sums.Clamps);
+                var loads = Loads(t[i], w[i], rho, f, 1.0);
+                var fuels = default(PlantFuels);
+                plant?.AddFuels(in loads, t[i], sums.Clamps, ref fuels);
                 int c = cellOf[i];
-                sums.ByBin[binOf[c]] += figures;
-                sums.ByMonth[times[i].Month - 1] += figures;
+                ref var bin = ref byBin[binOf[c]];
+                ref var month = ref byMonth[times[i].Month - 1];
+                bin.Loads.Add(in loads);
+                bin.Fuels.Add(in fuels);
+                month.Loads.Add(in loads);
+                month.Fuels.Add(in fuels);
                 sums.Cells[c].Add(t[i], w[i], f);
                 if (sums.Hours is not null)
                 {
-                    sums.Hours[i] = figures;
+                    sums.Hours[i] = new EnergyFigures(loads, plant?.Price(in fuels) ?? PlantEnergy.Zero);
                 }
+            }
+
+            for (int b = 0; b < byBin.Length; b++)
+            {
+                sums.ByBin[b] = byBin[b].Priced(plant);
+            }
+
+            for (int m = 0; m < 12; m++)
+            {
+                sums.ByMonth[m] = byMonth[m].Priced(plant);
             }
 
             sums.DensitySum = densitySum;

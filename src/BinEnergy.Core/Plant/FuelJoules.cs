@@ -1,7 +1,7 @@
 namespace BinEnergy.Core.Plant;
 
 /// <summary>
-/// Joules bought per fuel, not yet priced: sums of hours are priced once (<see cref="PlantModel.Price"/>), which
+/// Joules bought per fuel, not yet priced: sums of hours are priced once (<see cref="PlantModel.Price(in FuelJoules)"/>), which
 /// gives the sum of the hours' prices because a tariff is a price and a carbon factor per joule (DESIGN 9).
 /// </summary>
 public struct FuelJoules

@@ -26,16 +26,44 @@ public sealed class PlantModel(PlantSettings settings)
     /// <param name="clamps">Where evaluations outside a COP curve's points are counted (in the loads' hours).</param>
     public PlantEnergy Buy(in Loads.LoadVector loads, double outdoorC, CurveClampCounter clamps)
     {
-        var bought = PlantEnergy.Zero;
+        var fuels = default(PlantFuels);
+        AddFuels(in loads, outdoorC, clamps, ref fuels);
+        return Price(in fuels);
+    }
+
+    /// <summary>
+    /// Adds the fuels bought for a set of loads to <paramref name="fuels"/>, unpriced (<see cref="Buy"/> prices them):
+    /// the same purchases, for sums over many hours priced once.
+    /// </summary>
+    public void AddFuels(in Loads.LoadVector loads, double outdoorC, CurveClampCounter clamps, ref PlantFuels fuels)
+    {
         double hours = loads.HoursVentilated;
-        var (heating, backup) = HeatingSplit(loads.Heating.Joules, outdoorC, hours, clamps);
-        bought.Add(EndUse.Heating, heating);
-        bought.Add(EndUse.BackupHeating, backup);
-        bought.Add(EndUse.Cooling, Cooling(loads.Cooling.Joules, outdoorC, hours, clamps));
-        bought.Add(EndUse.Fans, Electricity(loads.FanEnergy.Joules));
-        bought.Add(EndUse.Humidification, Humidification(loads.Humidification.Joules, outdoorC, hours, clamps));
+        var heating = HeatingFuels(loads.Heating.Joules, outdoorC, hours, clamps);
+        fuels.Add(EndUse.Heating, heating.Main, heating.MainJ);
+        fuels.Add(EndUse.BackupHeating, heating.Backup, heating.BackupJ);
+        double coilJ = loads.Cooling.Joules;
+        if (coilJ > 0)
+        {
+            fuels.Add(EndUse.Cooling, Fuel.Electricity, coilJ / CoolingCop(outdoorC, hours, clamps));
+        }
+
+        fuels.Add(EndUse.Fans, Fuel.Electricity, loads.FanEnergy.Joules);
+        fuels.Add(EndUse.Humidification, HumidificationFuels(loads.Humidification.Joules, outdoorC, hours, clamps));
+    }
+
+    /// <summary>Joules per end use and fuel priced and weighed with each fuel's tariff.</summary>
+    public PlantEnergy Price(in PlantFuels fuels)
+    {
+        var bought = PlantEnergy.Zero;
+        foreach (var use in EndUses)
+        {
+            bought.Add(use, Price(fuels[use]));
+        }
+
         return bought;
     }
+
+    private static readonly EndUse[] EndUses = Enum.GetValues<EndUse>();
 
     /// <summary>The cooling COP at an outdoor dry-bulb (held at the end value outside the points, and counted for <paramref name="hours"/>).</summary>
     public double CoolingCop(double outdoorC, double hours, CurveClampCounter clamps)
@@ -165,21 +193,36 @@ public sealed class PlantModel(PlantSettings settings)
     /// (water x 2,501 kJ/kg), which the heating source puts back (bought as heating, at its efficiency
     /// or COP); the pump's electricity is left out.
     /// </summary>
-    public SiteEnergy Humidification(double humidificationJ, double outdoorC, double hours, CurveClampCounter clamps)
+    public SiteEnergy Humidification(double humidificationJ, double outdoorC, double hours, CurveClampCounter clamps) =>
+        Price(HumidificationFuels(humidificationJ, outdoorC, hours, clamps));
+
+    /// <summary>The fuels of <see cref="Humidification"/>, unpriced.</summary>
+    private FuelJoules HumidificationFuels(double humidificationJ, double outdoorC, double hours, CurveClampCounter clamps)
     {
+        var fuels = default(FuelJoules);
         if (humidificationJ <= 0)
         {
-            return SiteEnergy.Zero;
+            return fuels;
         }
 
         double water = humidificationJ / Psychrometrics.MoistAir.LatentHeat;
         double steam = water * PlantSettings.SteamJoulesPerKilogram / Settings.HumidifierEfficiency;
-        return Settings.Humidifier switch
+        switch (Settings.Humidifier)
         {
-            HumidifierType.SteamGas => SiteEnergy.Buy(Fuel.Gas, steam, Tariff(Fuel.Gas)),
-            HumidifierType.Adiabatic => Heating(water * Psychrometrics.MoistAir.LatentHeat, outdoorC, hours, clamps),
-            _ => Electricity(steam),
-        };
+            case HumidifierType.SteamGas:
+                fuels.Add(Fuel.Gas, steam);
+                break;
+            case HumidifierType.Adiabatic:
+                var h = HeatingFuels(water * Psychrometrics.MoistAir.LatentHeat, outdoorC, hours, clamps);
+                fuels.Add(h.Main, h.MainJ);
+                fuels.Add(h.Backup, h.BackupJ);
+                break;
+            default:
+                fuels.Add(Fuel.Electricity, steam);
+                break;
+        }
+
+        return fuels;
     }
 
     /// <summary>Electricity, J, priced and weighed.</summary>
