@@ -236,10 +236,11 @@ public sealed class EconomizerEvaluation
     /// <summary>The model, the controls and the plant of one evaluation.</summary>
     private sealed class Run(EconomizerModel model, EconomizerControl[] controls, PlantModel? plant, HumidityOver over)
     {
-        private readonly CurveClampCounter clamps = new();
-
-        // Clamped heating COPs of the controls and of the per-bin copies, not counted twice.
+        // Clamped COPs of the controls and of the bin methods, not counted twice.
         private readonly CurveClampCounter ignored = new();
+
+        /// <summary>Which outcome each control takes in the state at hand (true: the economizer's; false: minimum outdoor air).</summary>
+        private readonly bool[] economizes = new bool[controls.Length];
 
         /// <summary>The hours in which a cooling COP was held at its end value (hourly method).</summary>
         public CurveClampCounter Clamps { get; } = new();
@@ -279,36 +280,10 @@ public sealed class EconomizerEvaluation
                 int cell = cells.CellOfHour[i];
                 int bin = cells.DryBulbBinOfCell[cell];
                 cellStats[cell].Add(t[i], w[i], 1.0);
-                double qb = model.BuildingLoadW(t[i]);
-                var baseline = model.AtMinimum(qb, t[i], w[i]);
-
-                // Clamped cooling COPs count in the hours the building needs cooling or the baseline coil runs
-                // (with a wet-bulb table: in the hours the baseline coil runs, at its entering state).
-                double cop = byWetBulb ? 1.0 : Cop(t[i], 1.0, qb > 0 || baseline.CoilRuns ? Clamps : ignored);
-
-                // An hour has two outcomes, minimum outdoor air or the economizer's one enabled state: each is solved
-                // and bought once, and every control adds the one it chooses.
-                var atMinimum = default(ModeEnergySums);
-                atMinimum.Add(in baseline, 1.0, plant, byWetBulb ? EnteringCop(in baseline, t[i], 1.0, Clamps) : cop, t[i], Clamps);
-                var economizing = default(ModeEnergySums);
-                var enabled = default(EconomizerHour);
-                bool solved = false;
+                Outcomes(t[i], w[i], h[i], dp[i], 1.0, Clamps, out var atMinimum, out var economizing);
                 for (int c = 0; c < nc; c++)
                 {
-                    bool economizes = false;
-                    if (c > 0 && model.Enables(controls[c], t[i], h[i], dp[i]))
-                    {
-                        if (!solved)
-                        {
-                            enabled = model.EnabledHour(qb, t[i], w[i]);
-                            economizing.Add(in enabled, 1.0, plant, byWetBulb ? EnteringCop(in enabled, t[i], 1.0, ignored) : cop, t[i], ignored);
-                            solved = true;
-                        }
-
-                        economizes = EconomizerModel.Keeps(controls[c], in enabled);
-                    }
-
-                    ref readonly var hour = ref economizes ? ref economizing : ref atMinimum;
+                    ref readonly var hour = ref economizes[c] ? ref economizing : ref atMinimum;
                     monthly[c * 12 + month].Add(in hour);
                     byBin[c * nb + bin].Add(in hour);
                 }
@@ -326,14 +301,47 @@ public sealed class EconomizerEvaluation
             }
 
             double w = stats.MeanHumidityRatio;
-            double h = MoistAir.Enthalpy(t, w);
-            double dp = DewPointOf(w, model.SitePressurePa, over);
-            double cop = byWetBulb ? 1.0 : Cop(t, stats.Hours, clamps);
+            Outcomes(t, w, MoistAir.Enthalpy(t, w), DewPointOf(w, model.SitePressurePa, over), stats.Hours, ignored, out var atMinimum, out var economizing);
             for (int c = 0; c < controls.Length; c++)
             {
-                var r = model.Evaluate(controls[c], t, w, h, dp);
-                double copR = byWetBulb ? EnteringCop(in r, t, stats.Hours, clamps) : cop;
-                sums[offset + c].Add(in r, stats.Hours, plant, copR, t, clamps);
+                ref readonly var state = ref economizes[c] ? ref economizing : ref atMinimum;
+                sums[offset + c].Add(in state);
+            }
+        }
+
+        /// <summary>
+        /// One outdoor state under every control, for <paramref name="hours"/> hours (an hour, or a bin's state times its
+        /// hours). A state has two outcomes, minimum outdoor air or the economizer's one enabled state, which every enabling
+        /// control shares: each is solved and bought once, and <see cref="economizes"/> says which one each control takes.
+        /// Clamped COPs of the baseline count in <paramref name="counter"/>: cooling in the hours the building needs cooling
+        /// or the baseline coil runs (with a wet-bulb table: in the hours the baseline coil runs, at its entering state).
+        /// </summary>
+        private void Outcomes(double t, double w, double h, double dp, double hours, CurveClampCounter counter, out ModeEnergySums atMinimum, out ModeEnergySums economizing)
+        {
+            double qb = model.BuildingLoadW(t);
+            var baseline = model.AtMinimum(qb, t, w);
+            double cop = byWetBulb ? 1.0 : Cop(t, hours, qb > 0 || baseline.CoilRuns ? counter : ignored);
+            atMinimum = default;
+            atMinimum.Add(in baseline, hours, plant, byWetBulb ? EnteringCop(in baseline, t, hours, counter) : cop, t, counter);
+            economizing = default;
+            var enabled = default(EconomizerHour);
+            bool solved = false;
+            for (int c = 0; c < controls.Length; c++)
+            {
+                economizes[c] = false;
+                if (c == 0 || !model.Enables(controls[c], t, h, dp))
+                {
+                    continue;
+                }
+
+                if (!solved)
+                {
+                    enabled = model.EnabledHour(qb, t, w);
+                    economizing.Add(in enabled, hours, plant, byWetBulb ? EnteringCop(in enabled, t, hours, ignored) : cop, t, ignored);
+                    solved = true;
+                }
+
+                economizes[c] = EconomizerModel.Keeps(controls[c], in enabled);
             }
         }
     }
