@@ -113,6 +113,13 @@ public sealed record EconomizerSettings
     /// <summary>True when the limits are the suggested defaults (recalled from memory), not the user's.</summary>
     public bool LimitsAreSuggested => Limits == HighLimits.Suggested;
 
+    /// <summary>True when <paramref name="other"/> describes the same system and controls (the controls compared in order, by value).</summary>
+    public bool SameSystemAs(EconomizerSettings other)
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        return Controls.SequenceEqual(other.Controls) && this with { Controls = other.Controls } == other;
+    }
+
     /// <summary>The same settings with every control made integrated or non-integrated.</summary>
     public EconomizerSettings WithIntegration(bool integrated) =>
         this with { Controls = Controls.Select(c => c with { Integrated = integrated }).ToArray() };

@@ -8,7 +8,7 @@ namespace BinEnergy.Core.Plant;
 /// axis is held at its end value (clamped), and callers count those hours, as for
 /// <see cref="PerformanceCurve"/>. An axis of one value makes the COP constant along it.
 /// </summary>
-public sealed class CoolingCopTable
+public sealed class CoolingCopTable : IEquatable<CoolingCopTable>
 {
     private readonly double[] outdoorC;
     private readonly double[] wetBulbC;
@@ -107,4 +107,12 @@ public sealed class CoolingCopTable
             }
         }
     }
+
+    /// <summary>True when <paramref name="other"/> has the same axes and COPs (tables are immutable).</summary>
+    public bool Equals(CoolingCopTable? other) =>
+        other is not null && outdoorC.AsSpan().SequenceEqual(other.outdoorC) && wetBulbC.AsSpan().SequenceEqual(other.wetBulbC) && cop.AsSpan().SequenceEqual(other.cop);
+
+    public override bool Equals(object? obj) => Equals(obj as CoolingCopTable);
+
+    public override int GetHashCode() => HashCode.Combine(outdoorC.Length, wetBulbC.Length, cop[0]);
 }

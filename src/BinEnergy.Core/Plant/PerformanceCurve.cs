@@ -9,7 +9,7 @@ namespace BinEnergy.Core.Plant;
 /// were evaluated outside so the result can say so: extrapolating a COP curve is how
 /// estimates go wrong, and silently doing it would hide that.
 /// </summary>
-public sealed class PerformanceCurve
+public sealed class PerformanceCurve : IEquatable<PerformanceCurve>
 {
     private readonly IInterpolation? spline;
 
@@ -77,4 +77,12 @@ public sealed class PerformanceCurve
 
         return spline.Interpolate(Math.Clamp(outdoorC, MinOutdoorC, MaxOutdoorC));
     }
+
+    /// <summary>True when <paramref name="other"/> has the same points (curves are immutable, so equal curves evaluate alike).</summary>
+    public bool Equals(PerformanceCurve? other) =>
+        other is not null && OutdoorC.SequenceEqual(other.OutdoorC) && Cop.SequenceEqual(other.Cop);
+
+    public override bool Equals(object? obj) => Equals(obj as PerformanceCurve);
+
+    public override int GetHashCode() => HashCode.Combine(OutdoorC.Count, OutdoorC[0], Cop[0]);
 }

@@ -63,6 +63,18 @@ public sealed record PlantSettings(
     /// <summary>Fraction the COP loses below <see cref="DefrostBelow"/> (COP x (1 - penalty)).</summary>
     public double DefrostPenalty { get; init; }
 
+    /// <summary>
+    /// True when <paramref name="other"/> describes the same plant: every setting equal, the curves and tables by their
+    /// points and the tariffs by fuel.
+    /// </summary>
+    public bool SamePlantAs(PlantSettings other)
+    {
+        ArgumentNullException.ThrowIfNull(other);
+        return Tariffs.Count == other.Tariffs.Count
+            && Tariffs.All(t => other.Tariffs.TryGetValue(t.Key, out var o) && o == t.Value)
+            && this with { Tariffs = other.Tariffs } == other;
+    }
+
     /// <summary>The fuel the backup heat buys.</summary>
     public Fuel BackupFuel => Backup switch
     {

@@ -176,7 +176,7 @@ public static class StudyRunner
 
         try
         {
-            return (result, EconomizerEvaluation.Evaluate(weather, flags, table, cells, c.Economizer, plant));
+            return (result, SharedEconomizer(c, weather, () => EconomizerEvaluation.Evaluate(weather, flags, table, cells, c.Economizer, plant)));
         }
         catch (EconomizerSettingsException e)
         {
@@ -208,6 +208,35 @@ public static class StudyRunner
             }
 
             return (parts.Flags, parts.Table, parts.Cells);
+        }
+    }
+
+    /// <summary>Each record's economizer evaluations so far, with the case each was made for.</summary>
+    private static readonly ConditionalWeakTable<HourlyWeather, List<(StudyCase Case, EconomizerEvaluation Evaluation)>> Economizers = new();
+
+    /// <summary>
+    /// The economizer evaluation of a case on a record: made once per record for all the variants with the same air
+    /// system, plant, occupied hours and bins (variants that change only the ventilation or the recovery, say), since
+    /// it depends on nothing else.
+    /// </summary>
+    private static EconomizerEvaluation SharedEconomizer(StudyCase c, HourlyWeather weather, Func<EconomizerEvaluation> evaluate)
+    {
+        var list = Economizers.GetValue(weather, _ => []);
+        lock (list)
+        {
+            foreach (var (other, evaluation) in list)
+            {
+                if (other.BinScale == c.BinScale && other.OutdoorAir.Schedule.SameHoursAs(c.OutdoorAir.Schedule)
+                    && other.Economizer!.SameSystemAs(c.Economizer!)
+                    && (other.Plant is null ? c.Plant is null : c.Plant is not null && other.Plant.SamePlantAs(c.Plant)))
+                {
+                    return evaluation;
+                }
+            }
+
+            var made = evaluate();
+            list.Add((c, made));
+            return made;
         }
     }
 
