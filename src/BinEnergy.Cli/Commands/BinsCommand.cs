@@ -12,21 +12,16 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
 {
     public sealed class Settings : BinOptions
     {
-        [CommandOption("--by <SPLIT>")]
-        [Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise).")]
-        [TypeConverter(typeof(ChoiceConverter<BinSplit>))]
+        [CommandOption("--by <SPLIT>"), Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise)."), TypeConverter(typeof(ChoiceConverter<BinSplit>))]
         public BinSplit? By { get; init; }
 
-        [CommandOption("--blocks <HOURS>")]
-        [Description("Time-of-day block boundaries for --by block, comma-separated whole hours from 0 to 24, e.g. 0,6,12,18,24.")]
+        [CommandOption("--blocks <HOURS>"), Description("Time-of-day block boundaries for --by block, comma-separated whole hours from 0 to 24, e.g. 0,6,12,18,24.")]
         public string? Blocks { get; init; }
 
-        [CommandOption("--joint")]
-        [Description("Joint bins of dry-bulb x humidity ratio instead of dry-bulb alone.")]
+        [CommandOption("--joint"), Description("Joint bins of dry-bulb x humidity ratio instead of dry-bulb alone.")]
         public bool Joint { get; init; }
 
-        [CommandOption("--humidity-width <W>")]
-        [Description("Humidity-ratio bin width for --joint (gr/lb in ip, g/kg in si). Default 10 gr/lb or 1 g/kg.")]
+        [CommandOption("--humidity-width <W>"), Description("Humidity-ratio bin width for --joint (gr/lb in ip, g/kg in si). Default 10 gr/lb or 1 g/kg.")]
         public double? HumidityWidth { get; init; }
 
         public override ValidationResult Validate()

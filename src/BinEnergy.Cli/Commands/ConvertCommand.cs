@@ -11,12 +11,10 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
 {
     public sealed class Settings : WeatherFileSettings
     {
-        [CommandOption("--out <FILE>")]
-        [Description("The open-layout file to write (.csv, or .csv.gz to compress). Required.")]
+        [CommandOption("--out <FILE>"), Description("The open-layout file to write (.csv, or .csv.gz to compress). Required.")]
         public string? Out { get; init; }
 
-        [CommandOption("--force")]
-        [Description("Replace --out if it exists.")]
+        [CommandOption("--force"), Description("Replace --out if it exists.")]
         public bool Force { get; init; }
     }
 

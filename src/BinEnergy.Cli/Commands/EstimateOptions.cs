@@ -13,12 +13,10 @@ namespace BinEnergy.Cli.Commands;
 /// </summary>
 public class EstimateOptions : BinOptions
 {
-    [CommandOption("--bin-point <POINT>")]
-    [StudyKey("study", "bin_point")]
+    [CommandOption("--bin-point <POINT>"), StudyKey("study", "bin_point")]
     public string? BinPoint { get; init; }
 
-    [CommandOption("--headline <METHOD>")]
-    [StudyKey("study", "headline_method")]
+    [CommandOption("--headline <METHOD>"), StudyKey("study", "headline_method")]
     public string? Headline { get; init; }
 
     public override ValidationResult Validate() =>

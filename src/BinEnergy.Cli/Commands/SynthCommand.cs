@@ -16,25 +16,19 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
 {
     public sealed class Settings : CommonSettings
     {
-        [CommandOption("--monthly <FILE>")]
-        [Description("Monthly statistics (CSV: month, drybulb_max_c|f, drybulb_min_c|f, dewpoint_c|f, daily_mean_sd_k|f; see docs/synthesis.md). Required.")]
+        [CommandOption("--monthly <FILE>"), Description("Monthly statistics (CSV: month, drybulb_max_c|f, drybulb_min_c|f, dewpoint_c|f, daily_mean_sd_k|f; see docs/synthesis.md). Required.")]
         public string? Monthly { get; init; }
 
-        [CommandOption("--seed <N>")]
-        [Description("Seed of the random sequence (a whole number, 0 or more); the same seed gives the same file. Required.")]
+        [CommandOption("--seed <N>"), Description("Seed of the random sequence (a whole number, 0 or more); the same seed gives the same file. Required.")]
         public ulong? Seed { get; init; }
 
-        [CommandOption("--out <FILE>")]
-        [Description("The hourly file to write (open layout; .csv, or .csv.gz for gzip). Required.")]
+        [CommandOption("--out <FILE>"), Description("The hourly file to write (open layout; .csv, or .csv.gz for gzip). Required.")]
         public string? Out { get; init; }
 
-        [CommandOption("--year <Y>")]
-        [Description("Calendar year of the dates and weekdays: a non-leap year from 1900 to 2100. Default 2018 (it starts on a Monday).")]
-        [DefaultValue(Core.Weather.CalendarInfo.DefaultTypicalYear)]
+        [CommandOption("--year <Y>"), Description("Calendar year of the dates and weekdays: a non-leap year from 1900 to 2100. Default 2018 (it starts on a Monday)."), DefaultValue(Core.Weather.CalendarInfo.DefaultTypicalYear)]
         public int Year { get; init; } = Core.Weather.CalendarInfo.DefaultTypicalYear;
 
-        [CommandOption("--force")]
-        [Description("Replace --out if it exists.")]
+        [CommandOption("--force"), Description("Replace --out if it exists.")]
         public bool Force { get; init; }
     }
 

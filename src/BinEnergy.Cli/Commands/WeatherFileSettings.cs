@@ -11,32 +11,25 @@ namespace BinEnergy.Cli.Commands;
 /// </summary>
 public class WeatherFileSettings : CommonSettings
 {
-    [CommandArgument(0, "<WEATHER>")]
-    [StudyKey("climate", "weather", Help = "Hourly weather file: the open CSV layout, or another layout with --map (.csv or .csv.gz)")]
+    [CommandArgument(0, "<WEATHER>"), StudyKey("climate", "weather", Help = "Hourly weather file: the open CSV layout, or another layout with --map (.csv or .csv.gz)")]
     public string Weather { get; init; } = "";
 
-    [CommandOption("--map <NAME|PATH>")]
-    [StudyKey("climate", "map")]
+    [CommandOption("--map <NAME|PATH>"), StudyKey("climate", "map")]
     public string? Map { get; init; }
 
-    [CommandOption("--elevation <Z>")]
-    [StudyKey("climate", "elevation", nameof(DisplayUnits.Length))]
+    [CommandOption("--elevation <Z>"), StudyKey("climate", "elevation", nameof(DisplayUnits.Length))]
     public double? Elevation { get; init; }
 
-    [CommandOption("--drop-long-gaps")]
-    [StudyKey("climate", "drop_long_gaps")]
+    [CommandOption("--drop-long-gaps"), StudyKey("climate", "drop_long_gaps")]
     public bool DropLongGaps { get; init; }
 
-    [CommandOption("--calendar-year <YEAR>")]
-    [StudyKey("climate", "calendar_year")]
+    [CommandOption("--calendar-year <YEAR>"), StudyKey("climate", "calendar_year")]
     public int? CalendarYear { get; init; }
 
-    [CommandOption("--humidity-over <WATER|ICE>")]
-    [StudyKey("climate", "humidity_over")]
+    [CommandOption("--humidity-over <WATER|ICE>"), StudyKey("climate", "humidity_over")]
     public string? HumidityOver { get; init; }
 
-    [CommandOption("--max-input-mb <MB>")]
-    [Description("Largest weather file read, and the largest its gzip data may decompress to, MB. Default 1024 (about 1,000 station-years).")]
+    [CommandOption("--max-input-mb <MB>"), Description("Largest weather file read, and the largest its gzip data may decompress to, MB. Default 1024 (about 1,000 station-years).")]
     public double? MaxInputMb { get; init; }
 
     /// <summary>The largest weather file, or decompressed gzip data, read, bytes.</summary>
