@@ -151,19 +151,16 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [CommandOption("--price-gas <PRICE>"), StudyKey("plant", "price_gas", nameof(DisplayUnits.GasPrice), Note = "For the cost columns of gas heating or backup.")]
         public double? PriceGas { get; init; }
 
-        /// <summary>True when any option of the plant is given (then the command buys energy through a plant).</summary>
-        private bool HasPlant => HeatingFuel is not null || HeatingEfficiency is not null || HeatingCop is not null || HeatingCapacity is not null
-            || HeatPumpLockout is not null || BackupFuel is not null || BackupEfficiency is not null || DefrostBelow is not null
-            || DefrostPenalty is not null || Humidifier is not null || HumidifierEfficiency is not null || HeatingCapacityPerAirflow is not null || CoolingCopTable is not null || PriceElectricity is not null || PriceGas is not null;
-
         public override ValidationResult Validate()
         {
-            if (HasPlant && CoolingCop is null)
+            // Any [plant] option (--cooling-cop among them) makes the command buy its energy through a plant.
+            bool plant = StudyOptions.Given(this, "plant");
+            if (plant && CoolingCop is null)
             {
                 return ValidationResult.Error("--cooling-cop is required with the plant options: the plant buys the coil energy at that COP");
             }
 
-            if ((HasPlant || CoolingCop is not null) && HeatingEfficiency is null && (HeatingFuel is null or "gas" or "oil"))
+            if (plant && HeatingEfficiency is null && (HeatingFuel is null or "gas" or "oil"))
             {
                 return ValidationResult.Error($"--heating-efficiency is required for {HeatingFuel ?? "gas"} heating (the default --heating-fuel is gas): e.g. --heating-efficiency 0.85, or choose --heating-fuel electric or heat-pump");
             }

@@ -89,9 +89,7 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
                 return ValidationResult.Error("give --people with --per-person, and --area with --per-area (either pair or both)");
             }
 
-            bool recoveryOptions = RecoveryLatent is not null || FrostLimit is not null || FrostEffectiveness is not null
-                || RecoveryPressure is not null || FanEfficiency is not null || BypassWhenIdle;
-            if (RecoverySensible is null && recoveryOptions)
+            if (RecoverySensible is null && StudyOptions.Given(this, "recovery"))
             {
                 return ValidationResult.Error("the recovery options need --recovery-sensible (the device's sensible effectiveness, e.g. 0.75)");
             }

@@ -15,13 +15,8 @@ internal static class StudyOptions
     /// <summary>Every option of <paramref name="settings"/> that was given, as study keys in the display units' spellings.</summary>
     public static StudyInput Add(StudyInput input, CommandSettings settings, DisplayUnits u)
     {
-        foreach (var property in settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance))
+        foreach (var (property, key) in Keyed(settings))
         {
-            if (property.GetCustomAttribute<StudyKeyAttribute>() is not { } key)
-            {
-                continue;
-            }
-
             string origin = OptionName(property);
             object? value = property.GetValue(settings);
             foreach (var (table, name) in key.Keys)
@@ -78,11 +73,19 @@ internal static class StudyOptions
     /// <summary>The options marked <see cref="StudyKeyAttribute.Required"/> that were not given, as one message; null when none is missing.</summary>
     public static string? Missing(CommandSettings settings)
     {
-        var missing = settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance)
-            .Where(p => p.GetCustomAttribute<StudyKeyAttribute>() is { Required: true } && p.GetValue(settings) is null)
-            .Select(p => $"{OptionName(p)} is required: {p.GetCustomAttribute<StudyKeyAttribute>()!.What}").ToList();
+        var missing = Keyed(settings).Where(o => o.Key.Required && o.Property.GetValue(settings) is null)
+            .Select(o => $"{OptionName(o.Property)} is required: {o.Key.What}").ToList();
         return missing.Count == 0 ? null : string.Join("; ", missing);
     }
+
+    /// <summary>True when an option that sets a key of the study table <paramref name="table"/> was given (a flag: set).</summary>
+    public static bool Given(CommandSettings settings, string table) =>
+        Keyed(settings).Any(o => o.Key.Table == table && o.Property.GetValue(settings) is not (null or false));
+
+    /// <summary>The options of <paramref name="settings"/> that set study keys, with their <see cref="StudyKeyAttribute"/>.</summary>
+    private static IEnumerable<(PropertyInfo Property, StudyKeyAttribute Key)> Keyed(CommandSettings settings) =>
+        settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance)
+            .Select(p => (p, p.GetCustomAttribute<StudyKeyAttribute>()!)).Where(o => o.Item2 is not null);
 
     /// <summary>The option's long name as the user types it, e.g. <c>--airflow</c>; an argument's name in capitals.</summary>
     public static string OptionName(PropertyInfo property)
