@@ -25,13 +25,14 @@ public static class CliApp
     /// <summary>Runs the command line with the given writers (tests pass their own).</summary>
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
+        bool terminal = stdout == Console.Out && !Console.IsOutputRedirected;
         var console = AnsiConsole.Create(new AnsiConsoleSettings
         {
             Out = new AnsiConsoleOutput(stdout),
-            Ansi = stdout == Console.Out && !Console.IsOutputRedirected ? AnsiSupport.Detect : AnsiSupport.No,
-            ColorSystem = stdout == Console.Out && !Console.IsOutputRedirected ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
+            Ansi = terminal ? AnsiSupport.Detect : AnsiSupport.No,
+            ColorSystem = terminal ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
         });
-        if (stdout != Console.Out || Console.IsOutputRedirected)
+        if (!terminal)
         {
             console.Profile.Width = 160;
         }
@@ -72,14 +73,9 @@ public static class CliApp
             Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : UsageMessages.Explain(e.Message, command, args));
             return ExitCodes.Usage;
         }
-        catch (UsageException e)
+        catch (Exception e) when (e is UsageException or PsychrometricException)
         {
-            Fail(stderr, e.Message);
-            return ExitCodes.Usage;
-        }
-        catch (PsychrometricException e)
-        {
-            Fail(stderr, e.Reason);
+            Fail(stderr, e is PsychrometricException p ? p.Reason : e.Message);
             return ExitCodes.Usage;
         }
         catch (InputDataException e)
@@ -110,17 +106,6 @@ public static class CliApp
     private static void Fail(TextWriter stderr, string message) => stderr.WriteLine("binenergy: " + PrintableText.Of(message));
 
     /// <summary>The first exception of type <typeparamref name="T"/> in the chain of <paramref name="e"/>.</summary>
-    private static T? Inner<T>(Exception e)
-        where T : Exception
-    {
-        for (Exception? x = e; x is not null; x = x.InnerException)
-        {
-            if (x is T t)
-            {
-                return t;
-            }
-        }
-
-        return null;
-    }
+    private static T? Inner<T>(Exception? e)
+        where T : Exception => e as T ?? (e is null ? null : Inner<T>(e.InnerException));
 }
