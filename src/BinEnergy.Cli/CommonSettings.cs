@@ -10,7 +10,7 @@ namespace BinEnergy.Cli;
 /// <summary>Options every command takes: the display units and the output format.</summary>
 public class CommonSettings : OutputSettings
 {
-    [CommandOption("--units <UNITS>"), Description("Display units: ip (F, Btu, cfm) or si (C, kWh, L/s). Default ip."), TypeConverter(typeof(ChoiceConverter<UnitSystem>))]
+    [CommandOption("--units <UNITS>"), Description("Display units: ip (F, Btu, cfm) or si (C, kWh, L/s). Default ip."), TypeConverter(typeof(UnitSystemChoice))]
     public UnitSystem Units { get; init; } = UnitSystem.IP;
 
     /// <summary>The display units of the outputs.</summary>
@@ -23,6 +23,6 @@ public class OutputSettings : CommandSettings
     [CommandOption("--json"), Description("Write one JSON object to standard output instead of tables.")]
     public bool Json { get; init; }
 
-    [CommandOption("--format <FORMAT>"), Description("Text output: table (default), tsv (pastes into a spreadsheet) or markdown."), TypeConverter(typeof(ChoiceConverter<TextFormat>))]
+    [CommandOption("--format <FORMAT>"), Description("Text output: table (default), tsv (pastes into a spreadsheet) or markdown."), TypeConverter(typeof(TextFormatChoice))]
     public TextFormat Format { get; init; } = TextFormat.Table;
 }

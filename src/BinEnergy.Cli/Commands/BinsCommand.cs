@@ -12,7 +12,7 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
 {
     public sealed class Settings : BinOptions
     {
-        [CommandOption("--by <SPLIT>"), Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise)."), TypeConverter(typeof(ChoiceConverter<BinSplit>))]
+        [CommandOption("--by <SPLIT>"), Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise)."), TypeConverter(typeof(BinSplitChoice))]
         public BinSplit? By { get; init; }
 
         [CommandOption("--blocks <HOURS>"), Description("Time-of-day block boundaries for --by block, comma-separated whole hours from 0 to 24, e.g. 0,6,12,18,24.")]
