@@ -68,20 +68,14 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
             return TimeOfDayBlocks.Default;
         }
 
-        var hours = new List<int>();
-        foreach (var part in text.Split(',', StringSplitOptions.TrimEntries))
-        {
-            if (!int.TryParse(part, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int h))
-            {
-                throw new UsageException($"--blocks: '{part}' is not a whole hour; write boundaries like 0,8,16,24");
-            }
-
-            hours.Add(h);
-        }
-
+        var hours = text.Split(',', StringSplitOptions.TrimEntries)
+            .Select(part => int.TryParse(part, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int h)
+                ? h
+                : throw new UsageException($"--blocks: '{part}' is not a whole hour; write boundaries like 0,8,16,24"))
+            .ToArray();
         try
         {
-            return new TimeOfDayBlocks([.. hours]);
+            return new TimeOfDayBlocks(hours);
         }
         catch (ArgumentException)
         {

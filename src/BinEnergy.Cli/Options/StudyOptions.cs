@@ -99,19 +99,10 @@ internal static class StudyOptions
     }
 
     /// <summary>Comma-separated numbers as the study reader takes a TOML list; a word that is not a number is a usage error naming the option.</summary>
-    private static List<object> NumbersOf(string text, string origin)
-    {
-        var list = new List<object>();
-        foreach (var item in text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries))
-        {
-            if (!double.TryParse(item, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double v))
-            {
-                throw new UsageException($"{origin}: '{BinEnergy.Reporting.Output.PrintableText.Of(item)}' is not a number; give comma-separated numbers such as 0.0013,0.147,0.9506,-0.0998");
-            }
-
-            list.Add(v);
-        }
-
-        return list;
-    }
+    private static List<object> NumbersOf(string text, string origin) =>
+        text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries)
+            .Select(item => double.TryParse(item, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double v)
+                ? (object)v
+                : throw new UsageException($"{origin}: '{BinEnergy.Reporting.Output.PrintableText.Of(item)}' is not a number; give comma-separated numbers such as 0.0013,0.147,0.9506,-0.0998"))
+            .ToList();
 }
