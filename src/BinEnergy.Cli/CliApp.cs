@@ -2,9 +2,7 @@ using System.Reflection;
 using BinEnergy.Cli.Commands;
 using BinEnergy.Core.Errors;
 using BinEnergy.Core.Psychrometrics;
-using BinEnergy.Reporting.Output;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli;
 

@@ -1,4 +1,3 @@
-using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Tables;
 using Spectre.Console;
 

@@ -1,5 +1,4 @@
 using BinEnergy.Cli.Commands;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli;
 

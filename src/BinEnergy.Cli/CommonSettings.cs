@@ -1,9 +1,5 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Units;
-using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Units;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli;
 

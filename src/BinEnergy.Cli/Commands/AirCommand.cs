@@ -1,7 +1,5 @@
-using System.ComponentModel;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,9 +1,6 @@
-using System.ComponentModel;
 using BinEnergy.Core.Batch;
 using BinEnergy.Core.Study;
 using BinEnergy.Reporting.Batch;
-using BinEnergy.Reporting.Output;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,8 +1,5 @@
-using System.ComponentModel;
 using BinEnergy.Reporting.Batch;
-using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Tables;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,8 +1,5 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Schedules;
 using BinEnergy.Reporting.Units;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

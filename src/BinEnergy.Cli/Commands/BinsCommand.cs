@@ -1,9 +1,6 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
 using BinEnergy.Reporting.Documents;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,5 +1,3 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Economizer;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
@@ -7,7 +5,6 @@ using BinEnergy.Reporting.Documents;
 using BinEnergy.Reporting.Text;
 using BinEnergy.Reporting.Units;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,8 +1,5 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Loads;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,7 +1,5 @@
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Climate;
 using BinEnergy.Reporting.Documents;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,4 +1,3 @@
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Study;

@@ -1,11 +1,8 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Loads;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
 using BinEnergy.Reporting.Units;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,9 +1,6 @@
-using System.ComponentModel;
 using BinEnergy.Core.Study;
-using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Study;
 using BinEnergy.Reporting.Tables;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

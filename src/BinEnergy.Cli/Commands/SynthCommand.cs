@@ -1,8 +1,6 @@
-using System.ComponentModel;
 using BinEnergy.Core.Weather.Synthesis;
 using BinEnergy.Reporting.Documents;
 using BinEnergy.Reporting.Tables;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,7 +1,4 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Reporting.Units;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 

@@ -1,6 +1,5 @@
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Units;
-using BinEnergy.Reporting.Output;
 
 namespace BinEnergy.Cli.Options;
 

@@ -1,4 +1,3 @@
-using System.ComponentModel;
 using BinEnergy.Core.Study;
 using BinEnergy.Core.Units;
 using BinEnergy.Reporting.Units;

@@ -1,8 +1,6 @@
-using System.ComponentModel;
 using System.Reflection;
 using BinEnergy.Core.Study;
 using BinEnergy.Reporting.Units;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Options;
 
