@@ -61,31 +61,24 @@ public static class CliApp
 
             return app.Run(args, stop.Token);
         }
-        catch (OperationCanceledException) when (stop.IsCancellationRequested)
-        {
-            Fail(stderr, "stopped (Ctrl-C); no output was left half-written");
-            return ExitCodes.Interrupted;
-        }
-        catch (Exception e) when (e is CommandParseException or CommandRuntimeException)
-        {
-            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : UsageMessages.Explain(e.Message, command, args));
-            return ExitCodes.Usage;
-        }
-        catch (Exception e) when (e is UsageException or PsychrometricException)
-        {
-            Fail(stderr, e is PsychrometricException p ? p.Reason : e.Message);
-            return ExitCodes.Usage;
-        }
-        catch (InputDataException e)
-        {
-            Fail(stderr, e.Message);
-            return ExitCodes.BadInput;
-        }
         catch (Exception e)
         {
-            Fail(stderr, $"unexpected failure ({e.GetType().Name}): {e.Message}");
-            stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
-            return ExitCodes.Unexpected;
+            var (code, message) = e switch
+            {
+                OperationCanceledException when stop.IsCancellationRequested => (ExitCodes.Interrupted, "stopped (Ctrl-C); no output was left half-written"),
+                CommandParseException or CommandRuntimeException => (ExitCodes.Usage, Inner<UsageException>(e)?.Message ?? UsageMessages.Explain(e.Message, command, args)),
+                UsageException => (ExitCodes.Usage, e.Message),
+                PsychrometricException p => (ExitCodes.Usage, p.Reason),
+                InputDataException => (ExitCodes.BadInput, e.Message),
+                _ => (ExitCodes.Unexpected, $"unexpected failure ({e.GetType().Name}): {e.Message}"),
+            };
+            Fail(stderr, message);
+            if (code == ExitCodes.Unexpected)
+            {
+                stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
+            }
+
+            return code;
         }
         finally
         {
