@@ -25,9 +25,7 @@ internal static class StudyOptions
                     bool flag => flag ? !key.Inverted : null,
                     string text when key.Numbers => NumbersOf(text, origin),
                     string text when key.List => text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries),
-                    string text => text,
-                    double number => number,
-                    int number => number,
+                    string or double or int => value,
                     _ => throw new InvalidOperationException($"option {origin} has a value of type {value.GetType().Name} that no study key takes"),
                 };
                 if (studyValue is not null)
@@ -38,19 +36,6 @@ internal static class StudyOptions
         }
 
         return input;
-    }
-
-    /// <summary>The study's reading of the options; a study-file error becomes a usage error naming the option.</summary>
-    public static StudyDefinition Read(StudyInput input, string source)
-    {
-        try
-        {
-            return StudyFileReader.FromInput(input, source, Directory.GetCurrentDirectory());
-        }
-        catch (StudyFileException e) when (e.File == source)
-        {
-            throw Explain(input, e);
-        }
     }
 
     /// <summary>A study-file error about the options as a usage error that names the option.</summary>
