@@ -21,4 +21,8 @@ public class OutputSettings : CommandSettings
 
     [CommandOption("--format <FORMAT>"), Description("Text output: table (default), tsv (pastes into a spreadsheet) or markdown."), TypeConverter(typeof(TextFormatChoice))]
     public TextFormat Format { get; init; } = TextFormat.Table;
+
+    /// <summary>The message of the first broken rule as the validation error; when none is broken, <paramref name="otherwise"/> (the base class's checks).</summary>
+    protected static Spectre.Console.ValidationResult FirstBroken(Func<Spectre.Console.ValidationResult> otherwise, params (bool Broken, string Message)[] rules) =>
+        rules.FirstOrDefault(r => r.Broken) is { Broken: true } broken ? Spectre.Console.ValidationResult.Error(broken.Message) : otherwise();
 }

@@ -21,27 +21,12 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
         [CommandOption("--humidity-width <W>"), Description("Humidity-ratio bin width for --joint (gr/lb in ip, g/kg in si). Default 10 gr/lb or 1 g/kg.")]
         public double? HumidityWidth { get; init; }
 
-        public override ValidationResult Validate()
-        {
-            if (By is not null && Joint)
-            {
-                return ValidationResult.Error("--by and --joint cannot be combined: choose a split or joint bins");
-            }
-
-            if (Blocks is not null && By != BinSplit.TimeOfDayBlock)
-            {
-                return ValidationResult.Error("--blocks applies to --by block only");
-            }
-
-            if (HumidityWidth is double w && (!Joint || !(w >= 0.01 && w <= 100)))
-            {
-                return ValidationResult.Error(Joint
-                    ? FormattableString.Invariant($"--humidity-width {w} must be between 0.01 and 100 (gr/lb in ip, g/kg in si)")
-                    : "--humidity-width applies to --joint only");
-            }
-
-            return base.Validate();
-        }
+        public override ValidationResult Validate() => FirstBroken(
+            base.Validate,
+            (By is not null && Joint, "--by and --joint cannot be combined: choose a split or joint bins"),
+            (Blocks is not null && By != BinSplit.TimeOfDayBlock, "--blocks applies to --by block only"),
+            (HumidityWidth is not null && !Joint, "--humidity-width applies to --joint only"),
+            (HumidityWidth is double w && !(w >= 0.01 && w <= 100), FormattableString.Invariant($"--humidity-width {HumidityWidth} must be between 0.01 and 100 (gr/lb in ip, g/kg in si)")));
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)

@@ -148,22 +148,12 @@ public sealed class EconomizerCommand : Command<EconomizerCommand.Settings>
         [CommandOption("--price-gas <PRICE>"), StudyKey("plant", "price_gas", nameof(DisplayUnits.GasPrice), Note = "For the cost columns of gas heating or backup.")]
         public double? PriceGas { get; init; }
 
-        public override ValidationResult Validate()
-        {
-            // Any [plant] option (--cooling-cop among them) makes the command buy its energy through a plant.
-            bool plant = StudyOptions.Given(this, "plant");
-            if (plant && CoolingCop is null)
-            {
-                return ValidationResult.Error("--cooling-cop is required with the plant options: the plant buys the coil energy at that COP");
-            }
-
-            if (plant && HeatingEfficiency is null && (HeatingFuel is null or "gas" or "oil"))
-            {
-                return ValidationResult.Error($"--heating-efficiency is required for {HeatingFuel ?? "gas"} heating (the default --heating-fuel is gas): e.g. --heating-efficiency 0.85, or choose --heating-fuel electric or heat-pump");
-            }
-
-            return base.Validate();
-        }
+        // Any [plant] option (--cooling-cop among them) makes the command buy its energy through a plant.
+        public override ValidationResult Validate() => FirstBroken(
+            base.Validate,
+            (StudyOptions.Given(this, "plant") && CoolingCop is null, "--cooling-cop is required with the plant options: the plant buys the coil energy at that COP"),
+            (StudyOptions.Given(this, "plant") && HeatingEfficiency is null && (HeatingFuel is null or "gas" or "oil"),
+                $"--heating-efficiency is required for {HeatingFuel ?? "gas"} heating (the default --heating-fuel is gas): e.g. --heating-efficiency 0.85, or choose --heating-fuel electric or heat-pump"));
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)

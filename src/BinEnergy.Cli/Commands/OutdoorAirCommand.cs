@@ -74,30 +74,12 @@ public sealed class OutdoorAirCommand : Command<OutdoorAirCommand.Settings>
         [CommandOption("--bypass-when-idle"), StudyKey("recovery", "bypass_when_idle")]
         public bool BypassWhenIdle { get; init; }
 
-        public override ValidationResult Validate()
-        {
-            if (Airflow is null && People is null && Area is null)
-            {
-                return ValidationResult.Error("give --airflow (cfm in ip, L/s in si), or --people with --per-person and --area with --per-area");
-            }
-
-            if ((People is null) != (PerPerson is null) || (Area is null) != (PerArea is null))
-            {
-                return ValidationResult.Error("give --people with --per-person, and --area with --per-area (either pair or both)");
-            }
-
-            if (RecoverySensible is null && StudyOptions.Given(this, "recovery"))
-            {
-                return ValidationResult.Error("the recovery options need --recovery-sensible (the device's sensible effectiveness, e.g. 0.75)");
-            }
-
-            if (FrostEffectiveness is not null && FrostLimit is null)
-            {
-                return ValidationResult.Error("--frost-effectiveness needs --frost-limit (the outdoor dry-bulb below which the device defrosts)");
-            }
-
-            return base.Validate();
-        }
+        public override ValidationResult Validate() => FirstBroken(
+            base.Validate,
+            (Airflow is null && People is null && Area is null, "give --airflow (cfm in ip, L/s in si), or --people with --per-person and --area with --per-area"),
+            ((People is null) != (PerPerson is null) || (Area is null) != (PerArea is null), "give --people with --per-person, and --area with --per-area (either pair or both)"),
+            (RecoverySensible is null && StudyOptions.Given(this, "recovery"), "the recovery options need --recovery-sensible (the device's sensible effectiveness, e.g. 0.75)"),
+            (FrostEffectiveness is not null && FrostLimit is null, "--frost-effectiveness needs --frost-limit (the outdoor dry-bulb below which the device defrosts)"));
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)

@@ -35,18 +35,8 @@ public class WeatherFileSettings : CommonSettings
     /// <summary>The file and its map, for headings.</summary>
     internal string Source() => Weather + " (" + (Map is null ? "open layout" : "map " + Map) + ")";
 
-    public override Spectre.Console.ValidationResult Validate()
-    {
-        if (string.IsNullOrWhiteSpace(Weather))
-        {
-            return Spectre.Console.ValidationResult.Error("give the weather file, e.g. binenergy inspect weather.csv");
-        }
-
-        if (MaxInputMb is double mb && !(mb >= 0.001 && mb <= 1_000_000))
-        {
-            return Spectre.Console.ValidationResult.Error(FormattableString.Invariant($"--max-input-mb {mb} is outside 0.001 to 1,000,000 MB"));
-        }
-
-        return base.Validate();
-    }
+    public override Spectre.Console.ValidationResult Validate() => FirstBroken(
+        base.Validate,
+        (string.IsNullOrWhiteSpace(Weather), "give the weather file, e.g. binenergy inspect weather.csv"),
+        (MaxInputMb is double mb && !(mb >= 0.001 && mb <= 1_000_000), FormattableString.Invariant($"--max-input-mb {MaxInputMb} is outside 0.001 to 1,000,000 MB")));
 }
