@@ -53,28 +53,20 @@ public sealed class BatchCommand : Command<BatchCommand.Settings>
 
         [CommandOption("--rows-per-part <N>"), Description("A part is written once one of its tables has this many rows. Default 100000.")]
         public int RowsPerPart { get; init; } = 100_000;
+
+        public override Spectre.Console.ValidationResult Validate() => FirstBroken(
+            base.Validate,
+            (string.IsNullOrWhiteSpace(Weather), "batch needs --weather: a folder of weather files, a quoted glob such as 'wx/*.csv', or a station list (CSV with a weather column)"),
+            (Resume && Force, "give --resume (finish the batch) or --force (start over), not both"),
+            (RowsPerPart < 1, "--rows-per-part must be a whole number of at least 1"),
+            (Workers is < 1, "--workers must be a whole number of at least 1"));
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        if (string.IsNullOrWhiteSpace(settings.Weather))
-        {
-            throw new UsageException("batch needs --weather: a folder of weather files, a quoted glob such as 'wx/*.csv', or a station list (CSV with a weather column)");
-        }
-
-        if (settings.Resume && settings.Force)
-        {
-            throw new UsageException("give --resume (finish the batch) or --force (start over), not both");
-        }
-
-        if (settings.RowsPerPart < 1 || settings.Workers is < 1)
-        {
-            throw new UsageException(settings.RowsPerPart < 1 ? "--rows-per-part must be a whole number of at least 1" : "--workers must be a whole number of at least 1");
-        }
-
         var study = StudyFileReader.Read(settings.Study, climatesElsewhere: true);
-        var inputs = BatchInputList.Read(settings.Weather, settings.Map);
+        var inputs = BatchInputList.Read(settings.Weather!, settings.Map);
         string folder = settings.Out ?? Path.Combine("reports", RunCommand.FolderName(study.Name) + "-batch");
         using var session = BatchSession.Plan(new BatchSessionSettings
         {

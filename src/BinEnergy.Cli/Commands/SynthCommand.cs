@@ -28,21 +28,21 @@ public sealed class SynthCommand : Command<SynthCommand.Settings>
 
         [CommandOption("--force"), Description("Replace --out if it exists.")]
         public bool Force { get; init; }
+
+        public override Spectre.Console.ValidationResult Validate() => FirstBroken(
+            base.Validate,
+            (Monthly is null, "--monthly FILE is required (the monthly statistics to synthesize from)"),
+            (Seed is null, "--seed N is required (any whole number; the same seed gives the same weather)"),
+            (Year < 1900 || Year > 2100 || DateTime.IsLeapYear(Year), $"--year {Year} must be a non-leap year from 1900 to 2100 (the synthesized year has 365 days)"));
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
-        string monthly = settings.Monthly ?? throw new UsageException("--monthly FILE is required (the monthly statistics to synthesize from)");
-        ulong seed = settings.Seed ?? throw new UsageException("--seed N is required (any whole number; the same seed gives the same weather)");
-        if (settings.Year < 1900 || settings.Year > 2100 || DateTime.IsLeapYear(settings.Year))
-        {
-            throw new UsageException($"--year {settings.Year} must be a non-leap year from 1900 to 2100 (the synthesized year has 365 days)");
-        }
-
+        string monthly = settings.Monthly!;
         string fullOut = CommandOutput.TargetFile(settings.Out, monthly, settings.Force, "where to write the hourly year", "--monthly input");
         var climate = MonthlyClimateReader.Read(monthly);
-        var result = WeatherSynthesizer.Synthesize(climate, seed, settings.Year);
+        var result = WeatherSynthesizer.Synthesize(climate, settings.Seed!.Value, settings.Year);
         if (!TextFile.WriteAtomically(fullOut, settings.Force, w => SynthesizedYearWriter.Write(result, monthly, w)))
         {
             throw CommandOutput.InTheWay(settings.Out!);
