@@ -1,5 +1,4 @@
 using System.Reflection;
-using BinEnergy.Cli.Commands;
 using BinEnergy.Core.Errors;
 using BinEnergy.Core.Psychrometrics;
 using Spectre.Console;

@@ -1,4 +1,3 @@
-using BinEnergy.Core.Schedules;
 using BinEnergy.Reporting.Units;
 
 namespace BinEnergy.Cli.Commands;

@@ -1,6 +1,3 @@
-using BinEnergy.Core.Economizer;
-using BinEnergy.Core.Loads;
-using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
 using BinEnergy.Reporting.Text;
 using BinEnergy.Reporting.Units;

@@ -1,4 +1,3 @@
-using BinEnergy.Core.Loads;
 using Spectre.Console;
 
 namespace BinEnergy.Cli.Commands;

@@ -1,5 +1,4 @@
 using BinEnergy.Core.Loads;
-using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
 using BinEnergy.Reporting.Units;
 using Spectre.Console;
