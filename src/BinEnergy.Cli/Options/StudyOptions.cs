@@ -71,15 +71,9 @@ internal static class StudyOptions
             .Select(p => (p, p.GetCustomAttribute<StudyKeyAttribute>()!)).Where(o => o.Item2 is not null);
 
     /// <summary>The option's long name as the user types it, e.g. <c>--airflow</c>; an argument's name in capitals.</summary>
-    public static string OptionName(PropertyInfo property)
-    {
-        if (property.GetCustomAttribute<CommandOptionAttribute>() is { } option)
-        {
-            return "--" + option.LongNames[0];
-        }
-
-        return property.GetCustomAttribute<CommandArgumentAttribute>()?.ValueName.ToUpperInvariant() ?? property.Name;
-    }
+    public static string OptionName(PropertyInfo property) => property.GetCustomAttribute<CommandOptionAttribute>() is { } option
+        ? "--" + option.LongNames[0]
+        : property.GetCustomAttribute<CommandArgumentAttribute>()?.ValueName.ToUpperInvariant() ?? property.Name;
 
     /// <summary>Comma-separated numbers as the study reader takes a TOML list; a word that is not a number is a usage error naming the option.</summary>
     private static List<object> NumbersOf(string text, string origin) =>
