@@ -1,10 +1,7 @@
 using System.Reflection;
-using BinEnergy.Cli.Commands;
 using BinEnergy.Core.Errors;
 using BinEnergy.Core.Psychrometrics;
-using BinEnergy.Reporting.Output;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli;
 
@@ -25,13 +22,14 @@ public static class CliApp
     /// <summary>Runs the command line with the given writers (tests pass their own).</summary>
     public static int Run(string[] args, TextWriter stdout, TextWriter stderr)
     {
+        bool terminal = stdout == Console.Out && !Console.IsOutputRedirected;
         var console = AnsiConsole.Create(new AnsiConsoleSettings
         {
             Out = new AnsiConsoleOutput(stdout),
-            Ansi = stdout == Console.Out && !Console.IsOutputRedirected ? AnsiSupport.Detect : AnsiSupport.No,
-            ColorSystem = stdout == Console.Out && !Console.IsOutputRedirected ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
+            Ansi = terminal ? AnsiSupport.Detect : AnsiSupport.No,
+            ColorSystem = terminal ? ColorSystemSupport.Detect : ColorSystemSupport.NoColors,
         });
-        if (stdout != Console.Out || Console.IsOutputRedirected)
+        if (!terminal)
         {
             console.Profile.Width = 160;
         }
@@ -62,36 +60,24 @@ public static class CliApp
 
             return app.Run(args, stop.Token);
         }
-        catch (OperationCanceledException) when (stop.IsCancellationRequested)
-        {
-            Fail(stderr, "stopped (Ctrl-C); no output was left half-written");
-            return ExitCodes.Interrupted;
-        }
-        catch (Exception e) when (e is CommandParseException or CommandRuntimeException)
-        {
-            Fail(stderr, Inner<UsageException>(e) is { } usage ? usage.Message : UsageMessages.Explain(e.Message, command, args));
-            return ExitCodes.Usage;
-        }
-        catch (UsageException e)
-        {
-            Fail(stderr, e.Message);
-            return ExitCodes.Usage;
-        }
-        catch (PsychrometricException e)
-        {
-            Fail(stderr, e.Reason);
-            return ExitCodes.Usage;
-        }
-        catch (InputDataException e)
-        {
-            Fail(stderr, e.Message);
-            return ExitCodes.BadInput;
-        }
         catch (Exception e)
         {
-            Fail(stderr, $"unexpected failure ({e.GetType().Name}): {e.Message}");
-            stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
-            return ExitCodes.Unexpected;
+            var (code, message) = e switch
+            {
+                OperationCanceledException when stop.IsCancellationRequested => (ExitCodes.Interrupted, "stopped (Ctrl-C); no output was left half-written"),
+                CommandParseException or CommandRuntimeException => (ExitCodes.Usage, Inner<UsageException>(e)?.Message ?? UsageMessages.Explain(e.Message, command, args)),
+                UsageException => (ExitCodes.Usage, e.Message),
+                PsychrometricException p => (ExitCodes.Usage, p.Reason),
+                InputDataException => (ExitCodes.BadInput, e.Message),
+                _ => (ExitCodes.Unexpected, $"unexpected failure ({e.GetType().Name}): {e.Message}"),
+            };
+            Fail(stderr, message);
+            if (code == ExitCodes.Unexpected)
+            {
+                stderr.WriteLine("This is a bug in binenergy, not in your input; please report it with the command you ran.");
+            }
+
+            return code;
         }
         finally
         {
@@ -110,17 +96,6 @@ public static class CliApp
     private static void Fail(TextWriter stderr, string message) => stderr.WriteLine("binenergy: " + PrintableText.Of(message));
 
     /// <summary>The first exception of type <typeparamref name="T"/> in the chain of <paramref name="e"/>.</summary>
-    private static T? Inner<T>(Exception e)
-        where T : Exception
-    {
-        for (Exception? x = e; x is not null; x = x.InnerException)
-        {
-            if (x is T t)
-            {
-                return t;
-            }
-        }
-
-        return null;
-    }
+    private static T? Inner<T>(Exception? e)
+        where T : Exception => e as T ?? (e is null ? null : Inner<T>(e.InnerException));
 }

@@ -1,21 +1,14 @@
-using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Tables;
 using Spectre.Console;
 
 namespace BinEnergy.Cli;
 
 /// <summary>Where commands write: a Spectre console for tables, raw writers for JSON, CSV and diagnostics.</summary>
-public sealed class CommandOutput(IAnsiConsole console, TextWriter stdout, TextWriter stderr)
+/// <param name="Console">The console for tables and text (standard output).</param>
+/// <param name="Out">Standard output, for machine-readable data.</param>
+/// <param name="Error">Standard error, for diagnostics and progress.</param>
+public sealed record CommandOutput(IAnsiConsole Console, TextWriter Out, TextWriter Error)
 {
-    /// <summary>The console for tables and text (standard output).</summary>
-    public IAnsiConsole Console { get; } = console;
-
-    /// <summary>Standard output, for machine-readable data.</summary>
-    public TextWriter Out { get; } = stdout;
-
-    /// <summary>Standard error, for diagnostics and progress.</summary>
-    public TextWriter Error { get; } = stderr;
-
     /// <summary>
     /// Writes a command's document in the format the options ask for: JSON, CSV of its main table,
     /// or text. With JSON or CSV, the warnings also go to standard error so a person sees them.

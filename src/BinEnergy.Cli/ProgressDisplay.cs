@@ -1,5 +1,4 @@
 using System.Diagnostics;
-using BinEnergy.Reporting.Output;
 using Spectre.Console;
 
 namespace BinEnergy.Cli;

@@ -1,7 +1,5 @@
-using System.ComponentModel;
 using BinEnergy.Core.Psychrometrics;
 using BinEnergy.Reporting.Documents;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
@@ -10,32 +8,25 @@ public sealed class AirCommand : Command<AirCommand.Settings>
 {
     public sealed class Settings : CommonSettings
     {
-        [CommandOption("--drybulb <T>")]
-        [Description("Dry-bulb temperature (F in ip, C in si). Required.")]
+        [CommandOption("--drybulb <T>"), Description("Dry-bulb temperature (F in ip, C in si). Required.")]
         public double? DryBulb { get; init; }
 
-        [CommandOption("--wetbulb <T>")]
-        [Description("Thermodynamic wet-bulb (F or C).")]
+        [CommandOption("--wetbulb <T>"), Description("Thermodynamic wet-bulb (F or C).")]
         public double? WetBulb { get; init; }
 
-        [CommandOption("--dewpoint <T>")]
-        [Description("Dew point (F or C).")]
+        [CommandOption("--dewpoint <T>"), Description("Dew point (F or C).")]
         public double? DewPoint { get; init; }
 
-        [CommandOption("--rh <PCT>")]
-        [Description("Relative humidity, percent (0 to 100).")]
+        [CommandOption("--rh <PCT>"), Description("Relative humidity, percent (0 to 100).")]
         public double? RelativeHumidity { get; init; }
 
-        [CommandOption("--humidity-ratio <W>")]
-        [Description("Humidity ratio, lb/lb or kg/kg (the same number).")]
+        [CommandOption("--humidity-ratio <W>"), Description("Humidity ratio, lb/lb or kg/kg (the same number).")]
         public double? HumidityRatio { get; init; }
 
-        [CommandOption("--elevation <Z>")]
-        [Description("Site elevation (ft in ip, m in si); sets the standard-atmosphere pressure. Default sea level.")]
+        [CommandOption("--elevation <Z>"), Description("Site elevation (ft in ip, m in si); sets the standard-atmosphere pressure. Default sea level.")]
         public double? Elevation { get; init; }
 
-        [CommandOption("--pressure <P>")]
-        [Description("Total (station) pressure (psia in ip, kPa in si), instead of --elevation.")]
+        [CommandOption("--pressure <P>"), Description("Total (station) pressure (psia in ip, kPa in si), instead of --elevation.")]
         public double? Pressure { get; init; }
     }
 

@@ -1,8 +1,5 @@
-using System.ComponentModel;
 using BinEnergy.Reporting.Batch;
-using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Tables;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
@@ -15,8 +12,7 @@ public sealed class BatchReportCommand : Command<BatchReportCommand.Settings>
 {
     public sealed class Settings : OutputSettings
     {
-        [CommandArgument(0, "<OUT>")]
-        [Description("The batch output folder (the --out of `binenergy batch`, holding tables/annual/ and tables/climates/ from every shard).")]
+        [CommandArgument(0, "<OUT>"), Description("The batch output folder (the --out of `binenergy batch`, holding tables/annual/ and tables/climates/ from every shard).")]
         public string Out { get; init; } = string.Empty;
     }
 

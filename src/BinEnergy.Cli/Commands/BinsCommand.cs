@@ -1,9 +1,6 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
 using BinEnergy.Reporting.Documents;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
@@ -12,44 +9,24 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
 {
     public sealed class Settings : BinOptions
     {
-        [CommandOption("--by <SPLIT>")]
-        [Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise).")]
-        [TypeConverter(typeof(ChoiceConverter<BinSplit>))]
+        [CommandOption("--by <SPLIT>"), Description("Split the table: month, or block (time of day, 00-08, 08-16, 16-24 unless --blocks says otherwise)."), TypeConverter(typeof(BinSplitChoice))]
         public BinSplit? By { get; init; }
 
-        [CommandOption("--blocks <HOURS>")]
-        [Description("Time-of-day block boundaries for --by block, comma-separated whole hours from 0 to 24, e.g. 0,6,12,18,24.")]
+        [CommandOption("--blocks <HOURS>"), Description("Time-of-day block boundaries for --by block, comma-separated whole hours from 0 to 24, e.g. 0,6,12,18,24.")]
         public string? Blocks { get; init; }
 
-        [CommandOption("--joint")]
-        [Description("Joint bins of dry-bulb x humidity ratio instead of dry-bulb alone.")]
+        [CommandOption("--joint"), Description("Joint bins of dry-bulb x humidity ratio instead of dry-bulb alone.")]
         public bool Joint { get; init; }
 
-        [CommandOption("--humidity-width <W>")]
-        [Description("Humidity-ratio bin width for --joint (gr/lb in ip, g/kg in si). Default 10 gr/lb or 1 g/kg.")]
+        [CommandOption("--humidity-width <W>"), Description("Humidity-ratio bin width for --joint (gr/lb in ip, g/kg in si). Default 10 gr/lb or 1 g/kg.")]
         public double? HumidityWidth { get; init; }
 
-        public override ValidationResult Validate()
-        {
-            if (By is not null && Joint)
-            {
-                return ValidationResult.Error("--by and --joint cannot be combined: choose a split or joint bins");
-            }
-
-            if (Blocks is not null && By != BinSplit.TimeOfDayBlock)
-            {
-                return ValidationResult.Error("--blocks applies to --by block only");
-            }
-
-            if (HumidityWidth is double w && (!Joint || !(w >= 0.01 && w <= 100)))
-            {
-                return ValidationResult.Error(Joint
-                    ? FormattableString.Invariant($"--humidity-width {w} must be between 0.01 and 100 (gr/lb in ip, g/kg in si)")
-                    : "--humidity-width applies to --joint only");
-            }
-
-            return base.Validate();
-        }
+        public override ValidationResult Validate() => FirstBroken(
+            base.Validate,
+            (By is not null && Joint, "--by and --joint cannot be combined: choose a split or joint bins"),
+            (Blocks is not null && By != BinSplit.TimeOfDayBlock, "--blocks applies to --by block only"),
+            (HumidityWidth is not null && !Joint, "--humidity-width applies to --joint only"),
+            (HumidityWidth is double w && !(w >= 0.01 && w <= 100), FormattableString.Invariant($"--humidity-width {HumidityWidth} must be between 0.01 and 100 (gr/lb in ip, g/kg in si)")));
     }
 
     public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
@@ -73,20 +50,14 @@ public sealed class BinsCommand : Command<BinsCommand.Settings>
             return TimeOfDayBlocks.Default;
         }
 
-        var hours = new List<int>();
-        foreach (var part in text.Split(',', StringSplitOptions.TrimEntries))
-        {
-            if (!int.TryParse(part, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int h))
-            {
-                throw new UsageException($"--blocks: '{part}' is not a whole hour; write boundaries like 0,8,16,24");
-            }
-
-            hours.Add(h);
-        }
-
+        var hours = text.Split(',', StringSplitOptions.TrimEntries)
+            .Select(part => int.TryParse(part, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out int h)
+                ? h
+                : throw new UsageException($"--blocks: '{part}' is not a whole hour; write boundaries like 0,8,16,24"))
+            .ToArray();
         try
         {
-            return new TimeOfDayBlocks([.. hours]);
+            return new TimeOfDayBlocks(hours);
         }
         catch (ArgumentException)
         {

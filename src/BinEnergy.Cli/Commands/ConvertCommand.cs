@@ -1,8 +1,6 @@
-using System.ComponentModel;
 using BinEnergy.Core.Weather;
 using BinEnergy.Reporting.Documents;
 using BinEnergy.Reporting.Tables;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
@@ -11,12 +9,10 @@ public sealed class ConvertCommand : Command<ConvertCommand.Settings>
 {
     public sealed class Settings : WeatherFileSettings
     {
-        [CommandOption("--out <FILE>")]
-        [Description("The open-layout file to write (.csv, or .csv.gz to compress). Required.")]
+        [CommandOption("--out <FILE>"), Description("The open-layout file to write (.csv, or .csv.gz to compress). Required.")]
         public string? Out { get; init; }
 
-        [CommandOption("--force")]
-        [Description("Replace --out if it exists.")]
+        [CommandOption("--force"), Description("Replace --out if it exists.")]
         public bool Force { get; init; }
     }
 

@@ -1,6 +1,3 @@
-using System.ComponentModel;
-using Spectre.Console.Cli;
-
 namespace BinEnergy.Cli.Commands;
 
 /// <summary>
@@ -12,8 +9,7 @@ public sealed class DemoCommand : Command<DemoCommand.Settings>
 {
     public sealed class Settings : OutputSettings
     {
-        [CommandOption("--out <DIR>")]
-        [Description("Output folder. Default reports/demo/ (an earlier demo there is replaced).")]
+        [CommandOption("--out <DIR>"), Description("Output folder. Default reports/demo/ (an earlier demo there is replaced).")]
         public string? Out { get; init; }
     }
 

@@ -1,8 +1,4 @@
-using System.ComponentModel;
-using BinEnergy.Cli.Options;
-using BinEnergy.Core.Loads;
 using Spectre.Console;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
@@ -13,12 +9,10 @@ namespace BinEnergy.Cli.Commands;
 /// </summary>
 public class EstimateOptions : BinOptions
 {
-    [CommandOption("--bin-point <POINT>")]
-    [StudyKey("study", "bin_point")]
+    [CommandOption("--bin-point <POINT>"), StudyKey("study", "bin_point")]
     public string? BinPoint { get; init; }
 
-    [CommandOption("--headline <METHOD>")]
-    [StudyKey("study", "headline_method")]
+    [CommandOption("--headline <METHOD>"), StudyKey("study", "headline_method")]
     public string? Headline { get; init; }
 
     public override ValidationResult Validate() =>

@@ -1,13 +1,19 @@
 using BinEnergy.Core.Climate;
 using BinEnergy.Reporting.Documents;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
 /// <summary><c>binenergy inspect</c>: reads a weather file and shows its record, climate, design conditions and repairs.</summary>
-public sealed class InspectCommand : Command<InspectSettings>
+public sealed class InspectCommand : Command<InspectCommand.Settings>
 {
-    public override int Execute(CommandContext context, InspectSettings settings, CancellationToken cancellationToken)
+    /// <summary>The weather file and how degree-days are counted.</summary>
+    public sealed class Settings : WeatherFileSettings
+    {
+        [CommandOption("--degree-days <METHOD>"), StudyKey("study", "degree_days")]
+        public string? DegreeDays { get; init; }
+    }
+
+    public override int Execute(CommandContext context, Settings settings, CancellationToken cancellationToken)
     {
         var output = (CommandOutput)context.Data!;
         var (study, weather, _, _) = OneCaseStudy.ReadWeather(settings, "inspect");

@@ -1,4 +1,3 @@
-using BinEnergy.Cli.Options;
 using BinEnergy.Core.Binning;
 using BinEnergy.Core.Schedules;
 using BinEnergy.Core.Study;
@@ -22,7 +21,7 @@ internal static class OneCaseStudy
     public static (StudyCaseResult Case, Core.Loads.IntegrationMethod Headline) Run(WeatherFileSettings settings, string name)
     {
         var (study, input) = Read(settings, name);
-        return (Explained(input, study, () => StudyRunner.Run(study).Cases[0]), study.HeadlineMethod);
+        return (Explained(input, study.Climates[0].Name, () => StudyRunner.Run(study).Cases[0]), study.HeadlineMethod);
     }
 
     /// <summary>
@@ -32,7 +31,7 @@ internal static class OneCaseStudy
     public static (StudyDefinition Study, HourlyWeather Weather, OccupancySchedule Schedule, DryBulbBinScale Scale) ReadWeather(WeatherFileSettings settings, string name)
     {
         var (study, input) = Read(settings, name);
-        return Explained(input, study, () =>
+        return Explained(input, study.Climates[0].Name, () =>
         {
             var (schedule, scale) = StudyCaseBuilder.Binning(study);
             return (study, StudyRunner.ReadWeather(study.Climates[0], settings.MaxBytes), schedule, scale);
@@ -53,17 +52,17 @@ internal static class OneCaseStudy
             .Set("study", "units", u.Name, "--units")
             .Set("climate", "name", ClimateName(settings.Weather), settings.Weather);
         StudyOptions.Add(input, settings, u);
-        return (StudyOptions.Read(input, Source), input);
+        return (Explained(input, Source, () => StudyFileReader.FromInput(input, Source, Directory.GetCurrentDirectory())), input);
     }
 
-    /// <summary>Runs <paramref name="work"/>; a study error about the options becomes a usage error naming the option.</summary>
-    private static T Explained<T>(StudyInput input, StudyDefinition study, Func<T> work)
+    /// <summary>Runs <paramref name="work"/>; a study error about the options (or the <paramref name="climate"/> they make) becomes a usage error naming the option.</summary>
+    private static T Explained<T>(StudyInput input, string climate, Func<T> work)
     {
         try
         {
             return work();
         }
-        catch (StudyFileException e) when (e.File == Source || e.File == study.Climates[0].Name)
+        catch (StudyFileException e) when (e.File == Source || e.File == climate)
         {
             throw StudyOptions.Explain(input, e);
         }

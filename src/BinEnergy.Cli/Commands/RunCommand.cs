@@ -1,9 +1,6 @@
-using System.ComponentModel;
 using BinEnergy.Core.Study;
-using BinEnergy.Reporting.Output;
 using BinEnergy.Reporting.Study;
 using BinEnergy.Reporting.Tables;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Commands;
 
@@ -16,20 +13,16 @@ public sealed class RunCommand : Command<RunCommand.Settings>
 {
     public sealed class Settings : OutputSettings
     {
-        [CommandArgument(0, "<STUDY>")]
-        [Description("The study file (TOML). Its [[study]] units govern the outputs.")]
+        [CommandArgument(0, "<STUDY>"), Description("The study file (TOML). Its [[study]] units govern the outputs.")]
         public string Study { get; init; } = string.Empty;
 
-        [CommandOption("--out <DIR>")]
-        [Description("Output folder. Default reports/<study name>/.")]
+        [CommandOption("--out <DIR>"), Description("Output folder. Default reports/<study name>/.")]
         public string? Out { get; init; }
 
-        [CommandOption("--hourly")]
-        [Description("Also write the hourly table (one row per hour per climate x variant).")]
+        [CommandOption("--hourly"), Description("Also write the hourly table (one row per hour per climate x variant).")]
         public bool Hourly { get; init; }
 
-        [CommandOption("--force")]
-        [Description("Replace the output folder if it exists and is not empty.")]
+        [CommandOption("--force"), Description("Replace the output folder if it exists and is not empty.")]
         public bool Force { get; init; }
     }
 

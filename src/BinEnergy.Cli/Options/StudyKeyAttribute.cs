@@ -1,4 +1,3 @@
-using System.ComponentModel;
 using BinEnergy.Core.Study;
 using BinEnergy.Core.Units;
 using BinEnergy.Reporting.Units;
@@ -64,35 +63,15 @@ internal sealed class StudyKeyAttribute(string table, string key, string? unit =
         get
         {
             var (description, defaultText) = StudyKeys.Describe(Table, Spelled);
-            var parts = new List<string> { (Help ?? description).TrimEnd('.') + "." + Units() };
-            if (Note is not null)
-            {
-                parts.Add(Note);
-            }
-
-            if (Required)
-            {
-                parts.Add("Required.");
-            }
-            else if (defaultText is not null and not ("true" or "false"))
-            {
-                parts.Add("Default " + defaultText.TrimEnd('.') + ".");
-            }
-
-            parts.Add($"Study file: [{Table}] {(Unit is null ? Key : Key + "_<unit>")}.");
+            string? otherwise = defaultText is null or "true" or "false" ? null : "Default " + defaultText.TrimEnd('.') + ".";
+            string?[] parts = [(Help ?? description).TrimEnd('.') + "." + Units(), Note, Required ? "Required." : otherwise, $"Study file: [{Table}] {(Unit is null ? Key : Key + "_<unit>")}."];
             // Spectre reads help as markup: the study table's brackets are escaped.
-            return Spectre.Console.Markup.Escape(string.Join(" ", parts));
+            return Spectre.Console.Markup.Escape(string.Join(" ", parts.OfType<string>()));
         }
     }
 
-    private string Units()
-    {
-        if (Unit is null)
-        {
-            return string.Empty;
-        }
+    /// <summary>" In F (ip) or C (si).": the key's unit in both systems, from its spellings; empty for a key without a unit.</summary>
+    private string Units() => Unit is null ? string.Empty : $" In {Symbol(Ip)} (ip) or {Symbol(Si)} (si).";
 
-        string Symbol(DisplayUnits u) => StudyKeys.UnitOf(Table, StudyOptions.KeyName(Key, Unit, u));
-        return $" In {Symbol(Ip)} (ip) or {Symbol(Si)} (si).";
-    }
+    private string Symbol(DisplayUnits u) => StudyKeys.UnitOf(Table, StudyOptions.KeyName(Key, Unit, u));
 }

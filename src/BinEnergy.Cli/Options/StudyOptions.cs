@@ -1,8 +1,6 @@
-using System.ComponentModel;
 using System.Reflection;
 using BinEnergy.Core.Study;
 using BinEnergy.Reporting.Units;
-using Spectre.Console.Cli;
 
 namespace BinEnergy.Cli.Options;
 
@@ -15,13 +13,8 @@ internal static class StudyOptions
     /// <summary>Every option of <paramref name="settings"/> that was given, as study keys in the display units' spellings.</summary>
     public static StudyInput Add(StudyInput input, CommandSettings settings, DisplayUnits u)
     {
-        foreach (var property in settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance))
+        foreach (var (property, key) in Keyed(settings))
         {
-            if (property.GetCustomAttribute<StudyKeyAttribute>() is not { } key)
-            {
-                continue;
-            }
-
             string origin = OptionName(property);
             object? value = property.GetValue(settings);
             foreach (var (table, name) in key.Keys)
@@ -32,9 +25,7 @@ internal static class StudyOptions
                     bool flag => flag ? !key.Inverted : null,
                     string text when key.Numbers => NumbersOf(text, origin),
                     string text when key.List => text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries),
-                    string text => text,
-                    double number => number,
-                    int number => number,
+                    string or double or int => value,
                     _ => throw new InvalidOperationException($"option {origin} has a value of type {value.GetType().Name} that no study key takes"),
                 };
                 if (studyValue is not null)
@@ -45,19 +36,6 @@ internal static class StudyOptions
         }
 
         return input;
-    }
-
-    /// <summary>The study's reading of the options; a study-file error becomes a usage error naming the option.</summary>
-    public static StudyDefinition Read(StudyInput input, string source)
-    {
-        try
-        {
-            return StudyFileReader.FromInput(input, source, Directory.GetCurrentDirectory());
-        }
-        catch (StudyFileException e) when (e.File == source)
-        {
-            throw Explain(input, e);
-        }
     }
 
     /// <summary>A study-file error about the options as a usage error that names the option.</summary>
@@ -78,37 +56,30 @@ internal static class StudyOptions
     /// <summary>The options marked <see cref="StudyKeyAttribute.Required"/> that were not given, as one message; null when none is missing.</summary>
     public static string? Missing(CommandSettings settings)
     {
-        var missing = settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance)
-            .Where(p => p.GetCustomAttribute<StudyKeyAttribute>() is { Required: true } && p.GetValue(settings) is null)
-            .Select(p => $"{OptionName(p)} is required: {p.GetCustomAttribute<StudyKeyAttribute>()!.What}").ToList();
+        var missing = Keyed(settings).Where(o => o.Key.Required && o.Property.GetValue(settings) is null)
+            .Select(o => $"{OptionName(o.Property)} is required: {o.Key.What}").ToList();
         return missing.Count == 0 ? null : string.Join("; ", missing);
     }
 
-    /// <summary>The option's long name as the user types it, e.g. <c>--airflow</c>; an argument's name in capitals.</summary>
-    public static string OptionName(PropertyInfo property)
-    {
-        if (property.GetCustomAttribute<CommandOptionAttribute>() is { } option)
-        {
-            return "--" + option.LongNames[0];
-        }
+    /// <summary>True when an option that sets a key of the study table <paramref name="table"/> was given (a flag: set).</summary>
+    public static bool Given(CommandSettings settings, string table) =>
+        Keyed(settings).Any(o => o.Key.Table == table && o.Property.GetValue(settings) is not (null or false));
 
-        return property.GetCustomAttribute<CommandArgumentAttribute>()?.ValueName.ToUpperInvariant() ?? property.Name;
-    }
+    /// <summary>The options of <paramref name="settings"/> that set study keys, with their <see cref="StudyKeyAttribute"/>.</summary>
+    private static IEnumerable<(PropertyInfo Property, StudyKeyAttribute Key)> Keyed(CommandSettings settings) =>
+        settings.GetType().GetProperties(BindingFlags.Public | BindingFlags.Instance)
+            .Select(p => (p, p.GetCustomAttribute<StudyKeyAttribute>()!)).Where(o => o.Item2 is not null);
+
+    /// <summary>The option's long name as the user types it, e.g. <c>--airflow</c>; an argument's name in capitals.</summary>
+    public static string OptionName(PropertyInfo property) => property.GetCustomAttribute<CommandOptionAttribute>() is { } option
+        ? "--" + option.LongNames[0]
+        : property.GetCustomAttribute<CommandArgumentAttribute>()?.ValueName.ToUpperInvariant() ?? property.Name;
 
     /// <summary>Comma-separated numbers as the study reader takes a TOML list; a word that is not a number is a usage error naming the option.</summary>
-    private static List<object> NumbersOf(string text, string origin)
-    {
-        var list = new List<object>();
-        foreach (var item in text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries))
-        {
-            if (!double.TryParse(item, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double v))
-            {
-                throw new UsageException($"{origin}: '{BinEnergy.Reporting.Output.PrintableText.Of(item)}' is not a number; give comma-separated numbers such as 0.0013,0.147,0.9506,-0.0998");
-            }
-
-            list.Add(v);
-        }
-
-        return list;
-    }
+    private static List<object> NumbersOf(string text, string origin) =>
+        text.Split(',', StringSplitOptions.TrimEntries | StringSplitOptions.RemoveEmptyEntries)
+            .Select(item => double.TryParse(item, System.Globalization.NumberStyles.Float, System.Globalization.CultureInfo.InvariantCulture, out double v)
+                ? (object)v
+                : throw new UsageException($"{origin}: '{BinEnergy.Reporting.Output.PrintableText.Of(item)}' is not a number; give comma-separated numbers such as 0.0013,0.147,0.9506,-0.0998"))
+            .ToList();
 }
