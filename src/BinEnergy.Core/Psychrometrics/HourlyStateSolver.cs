@@ -52,8 +52,8 @@ internal static class HourlyStateSolver
 
     /// <summary>
     /// Thermodynamic wet-bulb in C (eqs. 33 and 35 solved for t*), the same root as <see cref="MoistAir.WetBulb"/>:
-    /// Newton between a lower bound (the dew or frost point) and the dry-bulb where that bracket lies on one side of
-    /// 0 C (the root is unique there); elsewhere, or where Newton fails, the reference solver itself. Air at or above
+    /// Newton between a lower bound (the dew or frost point) and the dry-bulb, on the side of 0 C the root lies on where
+    /// that bracket straddles it; where the root is not unique, or Newton fails, the reference solver itself. Air at or above
     /// saturation at its dry-bulb (over ice below 0 C: a weather record's RH over water can reach past it) has its
     /// dry-bulb as wet-bulb.
     /// </summary>
@@ -69,15 +69,39 @@ internal static class HourlyStateSolver
         }
 
         double low = Math.Min(dewPointC ?? DewPoint(humidityRatio, pressurePa, dryBulbC), dryBulbC);
-        if (dryBulbC - low < 1e-3 || (low < 0.0 && dryBulbC > 0.0))
+        if (dryBulbC - low < 1e-3)
         {
             return MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
         }
 
-        var residual = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: low >= 0.0);
+        double high = dryBulbC;
+        bool water = low >= 0.0;
+        if (low < 0.0 && dryBulbC > 0.0)
+        {
+            // Eqs. 33 (t* at or above 0 C, over water) and 35 (below, over ice) do not meet at 0 C. Where both residuals
+            // have the same sign at 0 C, the root is unique and on the side that sign points to (each residual rises
+            // with t*), and Newton finds it on that side; where they differ (a narrow band with a root on each side, or
+            // the step at 0 C itself), the reference solver's bisection picks it, as psychrolib does.
+            double overWater = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: true).Value(0.0);
+            double overIce = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: false).Value(0.0);
+            if (overWater < 0 && overIce < 0)
+            {
+                (low, water) = (0.0, true);
+            }
+            else if (overWater > 0 && overIce > 0)
+            {
+                (high, water) = (0.0, false);
+            }
+            else
+            {
+                return MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
+            }
+        }
 
-        // First guess: a third of the way down from the dry-bulb to the dew point (common practice, a rough rule).
-        return NewtonRaphson.TryFindRoot(residual.Value, residual.Slope, dryBulbC - (dryBulbC - low) / 3.0, low, dryBulbC, Accuracy * 1e-3, 50, out double root)
+        var residual = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water);
+
+        // First guess: a third of the way down from the top of the bracket to its bottom (common practice, a rough rule).
+        return NewtonRaphson.TryFindRoot(residual.Value, residual.Slope, high - (high - low) / 3.0, low, high, Accuracy * 1e-3, 50, out double root)
             ? root
             : MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
     }

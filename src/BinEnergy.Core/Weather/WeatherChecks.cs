@@ -57,11 +57,13 @@ internal static class WeatherChecks
         var outliers = new List<int>();
         foreach (var month in Enumerable.Range(0, t.Length).GroupBy(i => grid.Times[i].Month))
         {
-            var sorted = month.Select(i => t[i]).Order().ToArray();
+            var sorted = month.Select(i => t[i]).ToArray();
             if (sorted.Length < 24 * 7)
             {
                 continue;
             }
+
+            Array.Sort(sorted);
 
             double Q(double p) => sorted[(int)Math.Round(p * (sorted.Length - 1))];
             double median = Q(0.5), sigma = Math.Max((Q(0.75) - Q(0.25)) / 1.349, 1.0);

@@ -39,6 +39,36 @@ public sealed class HourlyStateSolverTests
     }
 
     [Fact]
+    public void WetBulb_WhereTheBracketStraddlesFreezing_MatchesTheReferenceBisection()
+    {
+        // Dry-bulb above 0 C with the frost point below it: the wet-bulb may lie on either equation (33 over water, 35
+        // over ice). The Newton root on the side the residuals point to must be the reference solver's root
+        // (bisection, the convention of psychrolib) to 1e-6 K, on a fine grid of such states at two pressures.
+        int states = 0;
+        foreach (double p in new[] { 101_325.0, 80_000.0 })
+        {
+            for (double t = 0.05; t <= 12; t += 0.05)
+            {
+                for (double rh = 0.02; rh <= 0.9; rh += 0.01)
+                {
+                    double w = MoistAir.HumidityRatioFromRelativeHumidity(t, rh, p);
+                    if (MoistAir.DewPoint(w, p) >= 0)
+                    {
+                        continue;
+                    }
+
+                    double reference = MoistAir.WetBulb(t, w, p);
+                    double fast = HourlyStateSolver.WetBulb(t, w, p);
+                    Assert.True(Math.Abs(fast - reference) < 1e-6, $"t {t} rh {rh} p {p}: fast {fast} reference {reference}");
+                    states++;
+                }
+            }
+        }
+
+        Assert.True(states > 10_000, $"{states} states");
+    }
+
+    [Fact]
     public void WetBulb_OfHandbookState_MatchesTheTable()
     {
         // 30 C dry-bulb, 20 C wet-bulb at 101.325 kPa: W = 0.010 kg/kg within about 1 % (ASHRAE Fundamentals 2017 ch. 1, example 2 style state; recalled from memory)
