@@ -228,13 +228,6 @@ public static class OutdoorAirCalculator
             return loads;
         }
 
-        /// <summary>The figures of <paramref name="hours"/> hours at one outdoor state, density, airflow multiplier and plant temperature.</summary>
-        private EnergyFigures At(double t, double w, double rho, double multiplier, double hours, CurveClampCounter clamps)
-        {
-            var loads = Loads(t, w, rho, multiplier, hours);
-            return new EnergyFigures(loads, plant?.Buy(loads, t, clamps) ?? PlantEnergy.Zero);
-        }
-
         /// <summary>
         /// The hourly method: every ventilated hour into its month and bin, and the cells' statistics. Each hour's
         /// purchases are summed as joules per fuel and each bin's and month's sum priced once.
@@ -296,14 +289,24 @@ public static class OutdoorAirCalculator
         /// <summary>A bin or cell by a bin method: at its evaluation dry-bulb and mean humidity ratio, times its hours.</summary>
         private EnergyFigures Evaluate(in CellStatistics stats, Temperature mid)
         {
+            var sum = default(UnpricedSum);
+            AddEvaluated(in stats, mid, ref sum);
+            return sum.Priced(plant);
+        }
+
+        /// <summary>Adds a bin's or cell's figures by a bin method to <paramref name="sum"/>, unpriced (sums of cells are priced once).</summary>
+        private void AddEvaluated(in CellStatistics stats, Temperature mid, ref UnpricedSum sum)
+        {
             if (stats.Hours <= 0)
             {
-                return EnergyFigures.Zero;
+                return;
             }
 
             double t = BinEvaluation.DryBulbC(settings.BinPoint, mid, stats);
             double w = stats.MeanHumidityRatio;
-            return At(t, w, Density(t, w, sitePressure), stats.MeanWeight, stats.Hours, binClamps);
+            var loads = Loads(t, w, Density(t, w, sitePressure), stats.MeanWeight, stats.Hours);
+            sum.Loads.Add(in loads);
+            plant?.AddFuels(in loads, t, binClamps, ref sum.Fuels);
         }
 
         /// <summary>Per dry-bulb bin: the hourly sum of its hours, joint bins (its cells merged over month) and the bin method.</summary>
@@ -317,16 +320,16 @@ public static class OutdoorAirCalculator
             for (int b = 0; b < nb; b++)
             {
                 var row = table.Rows[b];
-                var joint = EnergyFigures.Zero;
+                var joint = default(UnpricedSum);
                 for (int j = 0; j < nj; j++)
                 {
-                    joint += Evaluate(jointStats[b * nj + j], row.Mid);
+                    AddEvaluated(jointStats[b * nj + j], row.Mid, ref joint);
                 }
 
                 var stats = binStats[b];
                 rows.Add(new OutdoorAirBinRow(row, (int)stats.Hours, HumidityRatio.FromKilogramsPerKilogram(stats.MeanHumidityRatio),
                     Temperature.FromCelsius(BinEvaluation.DryBulbC(settings.BinPoint, row.Mid, stats)),
-                    new ByMethod<EnergyFigures>(hourly.ByBin[b], joint, Evaluate(stats, row.Mid))));
+                    new ByMethod<EnergyFigures>(hourly.ByBin[b], joint.Priced(plant), Evaluate(stats, row.Mid))));
             }
 
             return rows;
@@ -337,13 +340,13 @@ public static class OutdoorAirCalculator
         {
             int nb = cells.DryBulbBins;
             var monthBins = new CellStatistics[12 * nb];
-            var joint = new EnergyFigures[12];
+            var joint = new UnpricedSum[12];
             for (int c = 0; c < cells.Count; c++)
             {
                 int m = cells.MonthOfCell[c];
                 int b = cells.DryBulbBinOfCell[c];
                 monthBins[m * nb + b].Add(hourly.Cells[c]);
-                joint[m] += Evaluate(hourly.Cells[c], cells.DryBulbScale.Mid(cells.FirstDryBulbIndex + b));
+                AddEvaluated(hourly.Cells[c], cells.DryBulbScale.Mid(cells.FirstDryBulbIndex + b), ref joint[m]);
             }
 
             var months = new List<OutdoorAirMonth>();
@@ -354,13 +357,13 @@ public static class OutdoorAirCalculator
                     continue;
                 }
 
-                var bin = EnergyFigures.Zero;
+                var bin = default(UnpricedSum);
                 for (int b = 0; b < nb; b++)
                 {
-                    bin += Evaluate(monthBins[m * nb + b], cells.DryBulbScale.Mid(cells.FirstDryBulbIndex + b));
+                    AddEvaluated(monthBins[m * nb + b], cells.DryBulbScale.Mid(cells.FirstDryBulbIndex + b), ref bin);
                 }
 
-                months.Add(new OutdoorAirMonth(m + 1, new ByMethod<EnergyFigures>(hourly.ByMonth[m], joint[m], bin)));
+                months.Add(new OutdoorAirMonth(m + 1, new ByMethod<EnergyFigures>(hourly.ByMonth[m], joint[m].Priced(plant), bin.Priced(plant))));
             }
 
             return months;
