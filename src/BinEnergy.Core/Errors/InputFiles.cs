@@ -87,8 +87,11 @@ public static class InputFiles
 
         try
         {
+            // The gzip trailer ends with the uncompressed size mod 2^32 (RFC 1952, ISIZE): the output is sized by it (within
+            // the limit), so the data is decompressed once into its final array, and a file cut short fails the check below.
+            uint size = data.Length >= 18 ? BitConverter.ToUInt32(data, data.Length - 4) : uint.MaxValue;
             using var gz = new GZipStream(new MemoryStream(data), CompressionMode.Decompress);
-            using var output = new MemoryStream();
+            using var output = new MemoryStream(size <= maxBytes && size <= Array.MaxLength ? (int)size : 0);
             var buffer = new byte[81920];
             for (int n; (n = gz.Read(buffer)) > 0;)
             {
@@ -100,14 +103,12 @@ public static class InputFiles
                 output.Write(buffer, 0, n);
             }
 
-            // The gzip trailer ends with the uncompressed size mod 2^32 (RFC 1952, ISIZE): a file cut short fails this check.
-            uint size = data.Length >= 18 ? BitConverter.ToUInt32(data, data.Length - 4) : uint.MaxValue;
             if (size != (uint)output.Length)
             {
                 throw new InvalidDataException("the size in the gzip trailer does not match the data");
             }
 
-            return (output.ToArray(), null, true);
+            return (output.Capacity == output.Length ? output.GetBuffer() : output.ToArray(), null, true);
         }
         catch (InvalidDataException e)
         {

@@ -72,6 +72,9 @@ public sealed record ColumnMap
         return reader.ReadToEnd();
     }
 
+    /// <summary>The shipped maps read so far (a batch reads thousands of files through one map); maps do not change once read.</summary>
+    private static readonly System.Collections.Concurrent.ConcurrentDictionary<string, ColumnMap> Shipped = new(StringComparer.Ordinal);
+
     /// <summary>
     /// A shipped map by name (e.g. <c>tmy3</c>, <c>pvgis</c>) or a map file by path.
     /// </summary>
@@ -80,7 +83,8 @@ public sealed record ColumnMap
     {
         if (ShippedText(nameOrPath) is string shipped)
         {
-            return Parse(shipped, "shipped map " + nameOrPath.ToLowerInvariant(), nameOrPath.ToLowerInvariant());
+            string name = nameOrPath.ToLowerInvariant();
+            return Shipped.GetOrAdd(name, _ => Parse(shipped, "shipped map " + name, name));
         }
 
         if (!File.Exists(nameOrPath) && !Directory.Exists(nameOrPath))
