@@ -325,7 +325,7 @@ internal static class WeatherFileParser
         }
 
         // A comma inside a (quoted) number would be read as a thousands separator: refuse it first.
-        if (span.Contains((byte)',') || !reader.TryParse<double>(column.Index, out double raw) || !double.IsFinite(raw))
+        if (span.Contains((byte)',') || !double.TryParse(span, NumberStyles.Float, CultureInfo.InvariantCulture, out double raw) || !double.IsFinite(raw))
         {
             string text = Encoding.UTF8.GetString(span);
             throw new WeatherDataException(WeatherErrorKind.NotANumber, layout.File, $"the {column.Facts.Name} is not a number", text.Contains(',')
