@@ -102,21 +102,25 @@ public sealed class BatchReport
             throw new BatchReportException($"{folder}: no tables/ folder; give the --out folder of a `binenergy batch` run");
         }
 
-        var annual = await PartitionedTable.ReadAsync(folder, "annual", ct);
+        // Only the columns the report reads: the keys and the headline figures in the study's units (a national study's annual
+        // table has hundreds of thousands of rows of some sixty columns).
+        var first = await PartitionedTable.FirstMetadataAsync(folder, "annual", ct) ?? new Dictionary<string, string>();
+        var keep = new HashSet<string>(["climate", "variant", "year", "method", .. HeadlineFigures(UnitsOf(first, PartitionedTable.PartFiles(folder, "annual").Select(f => Path.GetRelativePath(folder, f)).FirstOrDefault() ?? "tables/annual")).Select(f => f.Column)], StringComparer.Ordinal);
+        var annual = await PartitionedTable.ReadAsync(folder, "annual", keep, ct);
         if (PartitionedTable.PartFiles(folder, "climates").Count == 0)
         {
             throw new BatchReportException($"{Path.Combine(folder, "tables", "climates")}: the climates table is missing (tables/climates/<key>=<value>/part-NNNN.parquet); "
                 + "the report plots every figure against the climates' degree-days: rerun the batch with this version of binenergy, which writes it");
         }
 
-        var climates = await PartitionedTable.ReadAsync(folder, "climates", ct);
+        var climates = await PartitionedTable.ReadAsync(folder, "climates", ct: ct);
         string hash = annual.Metadata.GetValueOrDefault(PartitionedTable.StudyHashKey, string.Empty);
         if (climates.Metadata.GetValueOrDefault(PartitionedTable.StudyHashKey, string.Empty) != hash)
         {
             throw new BatchReportException($"{climates.Parts[0]}: computed from another study than {annual.Parts[0]} ({PartitionedTable.StudyHashKey} differs); a report covers one study");
         }
 
-        var u = UnitsOf(annual);
+        var u = UnitsOf(annual.Metadata, annual.Parts[0]);
         var t = annual.Table;
         foreach (string column in new[] { "climate", "variant", "year", "method" })
         {
@@ -150,15 +154,15 @@ public sealed class BatchReport
         return new BatchReport(annual, climates, u, figures, rows, degreeDays, warnings, batch, climateCharts);
     }
 
-    private static DisplayUnits UnitsOf(PartitionedTable annual)
+    private static DisplayUnits UnitsOf(IReadOnlyDictionary<string, string> metadata, string part)
     {
-        string units = annual.Metadata.GetValueOrDefault("binenergy.units", "ip");
-        string currency = annual.Metadata.GetValueOrDefault("binenergy.currency", "usd");
+        string units = metadata.GetValueOrDefault("binenergy.units", "ip");
+        string currency = metadata.GetValueOrDefault("binenergy.currency", "usd");
         return units switch
         {
             "ip" => new DisplayUnits(UnitSystem.IP, currency),
             "si" => new DisplayUnits(UnitSystem.SI, currency),
-            _ => throw new BatchReportException($"{annual.Parts[0]}: binenergy.units metadata is '{units}', expected ip or si; the part was not written by binenergy"),
+            _ => throw new BatchReportException($"{part}: binenergy.units metadata is '{units}', expected ip or si; the part was not written by binenergy"),
         };
     }
 
@@ -211,7 +215,9 @@ public sealed class BatchReport
             }
         }
 
-        return order.Select(k =>
+        // In climate order (the variants in the study's order within each), so the charts and rankings do not depend on the
+        // order the workers finished the files in.
+        return order.OrderBy(k => k.Item1, StringComparer.Ordinal).Select(k =>
         {
             int i = chosen[k];
             return new HeadlineRow(k.Item1, k.Item2, year[i], figures.ToDictionary(f => f.Column, f => t[f.Column].Numbers[i]));
@@ -456,7 +462,9 @@ public sealed class BatchReport
             }
         }
 
-        var rows = Enumerable.Range(0, n).Select(i => (IReadOnlyList<string>)columns.Select(c => c.Cell(i)).ToList()).ToList();
+        // In climate order: the parts hold the climates in the order the workers finished them.
+        var rows = Enumerable.Range(0, n).OrderBy(i => t["climate"].Texts[i], StringComparer.Ordinal)
+            .Select(i => (IReadOnlyList<string>)columns.Select(c => c.Cell(i)).ToList()).ToList();
         return new ReportSection("Weather files",
             [new ReportTable("Each climate's weather file and the site it sets (tables/climates has the degree-days and design conditions too)", columns.Select(c => c.Heading).ToList(), rows)]);
     }

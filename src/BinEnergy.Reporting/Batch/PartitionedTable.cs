@@ -30,7 +30,11 @@ public sealed record PartitionedTable(ResultTable Table, IReadOnlyList<string> P
 
     /// <summary>Reads table <paramref name="name"/> of the batch output folder <paramref name="folder"/>.</summary>
     /// <exception cref="BatchReportException">No part file, a part that is not Parquet, parts with different columns or of different studies.</exception>
-    public static async Task<PartitionedTable> ReadAsync(string folder, string name, CancellationToken ct = default)
+    /// <param name="folder">The batch output folder.</param>
+    /// <param name="name">The table.</param>
+    /// <param name="keep">The columns to read (partition columns are always read); null: every column.</param>
+    /// <param name="ct">Cancels between parts.</param>
+    public static async Task<PartitionedTable> ReadAsync(string folder, string name, IReadOnlySet<string>? keep = null, CancellationToken ct = default)
     {
         var files = PartFiles(folder, name);
         if (files.Count == 0)
@@ -45,7 +49,7 @@ public sealed record PartitionedTable(ResultTable Table, IReadOnlyList<string> P
         foreach (string file in files)
         {
             string rel = Path.GetRelativePath(folder, file);
-            var (part, meta) = await ReadPartAsync(folder, file, rel, name, ct);
+            var (part, meta) = await ReadPartAsync(folder, file, rel, name, keep, ct);
             metadata ??= meta;
             firstPart ??= rel;
             string hash = meta.GetValueOrDefault(StudyHashKey, string.Empty);
@@ -77,14 +81,36 @@ public sealed record PartitionedTable(ResultTable Table, IReadOnlyList<string> P
 
     private static string Short(string hash) => hash.Length == 0 ? "none" : hash[..Math.Min(12, hash.Length)];
 
-    private static async Task<(ResultTable Table, IReadOnlyDictionary<string, string> Metadata)> ReadPartAsync(string folder, string file, string rel, string name, CancellationToken ct)
+    /// <summary>The metadata of the first part of table <paramref name="name"/> (the units and study a reader needs before choosing columns); null when there is no part.</summary>
+    public static async Task<IReadOnlyDictionary<string, string>?> FirstMetadataAsync(string folder, string name, CancellationToken ct = default)
+    {
+        var files = PartFiles(folder, name);
+        if (files.Count == 0)
+        {
+            return null;
+        }
+
+        try
+        {
+            await using var stream = File.OpenRead(files[0]);
+            await using var reader = await ParquetReader.CreateAsync(stream, cancellationToken: ct);
+            return reader.CustomMetadata ?? new Dictionary<string, string>();
+        }
+        catch (Exception e) when (e is IOException or InvalidDataException or Parquet.ParquetException or NotSupportedException)
+        {
+            throw new BatchReportException($"{Path.GetRelativePath(folder, files[0])}: not a readable Parquet file ({e.Message}); delete it and rerun the batch for its climates (batch ... --resume)");
+        }
+    }
+
+    private static async Task<(ResultTable Table, IReadOnlyDictionary<string, string> Metadata)> ReadPartAsync(string folder, string file, string rel, string name,
+        IReadOnlySet<string>? keep, CancellationToken ct)
     {
         var partitions = PartitionKeys(Path.GetRelativePath(Path.Combine(folder, "tables", name), Path.GetDirectoryName(file)!));
         try
         {
             await using var stream = File.OpenRead(file);
             await using var reader = await ParquetReader.CreateAsync(stream, cancellationToken: ct);
-            var fields = reader.Schema.GetDataFields();
+            var fields = reader.Schema.GetDataFields().Where(f => keep is null || keep.Contains(f.Name)).ToArray();
             var table = new ResultTable(name);
             var columns = new List<(DataField Field, ColumnKind Kind)>();
             foreach (var f in fields)
@@ -123,10 +149,8 @@ public sealed record PartitionedTable(ResultTable Table, IReadOnlyList<string> P
                     });
                 }
 
-                for (int r = 0; r < n; r++)
-                {
-                    table.AddRow([.. values.Select(v => v.GetValue(r)!), .. extra.Select(p => (object)p.Value)]);
-                }
+                values.AddRange(extra.Select(p => (Array)Enumerable.Repeat(p.Value, n).ToArray()));
+                table.AddColumns(values);
             }
 
             return (table, reader.CustomMetadata ?? new Dictionary<string, string>());

@@ -99,6 +99,25 @@ public sealed class ResultColumn
         }
     }
 
+    /// <summary>Appends values of the column's kind (string[], double[] or int[]) without boxing each one.</summary>
+    internal void AddRange(Array values)
+    {
+        switch (values)
+        {
+            case string[] t when Kind == ColumnKind.Text:
+                texts.AddRange(t);
+                break;
+            case double[] d when Kind == ColumnKind.Number:
+                numbers.AddRange(d);
+                break;
+            case int[] i when Kind == ColumnKind.Integer:
+                integers.AddRange(i);
+                break;
+            default:
+                throw new ArgumentException($"column '{Name}' holds {Kind} values, not {values.GetType().Name}", nameof(values));
+        }
+    }
+
     internal void AddRange(ResultColumn other)
     {
         switch (Kind)

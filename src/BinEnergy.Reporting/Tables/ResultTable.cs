@@ -99,6 +99,23 @@ public sealed partial class ResultTable
         }
     }
 
+    /// <summary>
+    /// Appends rows given column by column, in column order (string[], double[] or int[] as declared, all of one
+    /// length): a table read from a columnar file, without a row of boxed values each.
+    /// </summary>
+    public void AddColumns(IReadOnlyList<Array> values)
+    {
+        if (values.Count != columns.Count || values.Any(v => v.Length != values[0].Length))
+        {
+            throw new ArgumentException($"table '{Name}' has {columns.Count} columns; {values.Count} columns of values (of equal length) are needed");
+        }
+
+        for (int i = 0; i < values.Count; i++)
+        {
+            columns[i].AddRange(values[i]);
+        }
+    }
+
     /// <summary>Appends the rows of a table with the same columns (same names, kinds and order).</summary>
     public void Append(ResultTable other)
     {

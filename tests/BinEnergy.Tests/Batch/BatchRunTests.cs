@@ -17,6 +17,27 @@ public sealed class BatchRunTests
     };
 
     [Fact]
+    public void Report_DoesNotDependOnTheOrderOfTheInputs()
+    {
+        // The parts hold the climates in the order the workers finish them; the report and the summary list and draw them
+        // in climate order, so the same inputs in another order give the same report (apart from the time it was run).
+        using var f = new BatchFolder(6);
+        string list = f.StationList(6);
+        string[] lines = File.ReadAllLines(list);
+        string reversed = Path.Combine(f.Path, "reversed.csv");
+        File.WriteAllLines(reversed, [lines[0], .. lines.Skip(1).Reverse()]);
+        string a = Path.Combine(f.Path, "a"), b = Path.Combine(f.Path, "b");
+        Assert.Equal(0, BatchFolder.Cli("batch", f.Study, "--weather", list, "--out", a).Code);
+        Assert.Equal(0, BatchFolder.Cli("batch", f.Study, "--weather", reversed, "--out", b).Code);
+
+        static string[] Report(string folder) => [.. File.ReadAllLines(Path.Combine(folder, "report.html"))
+            .Select(l => l.Replace(folder, "OUT", StringComparison.Ordinal)).Where(l => !l.Contains("UTC", StringComparison.Ordinal))];
+        Assert.Equal(Report(a), Report(b));
+        Assert.Equal(File.ReadAllText(Path.Combine(a, "summary.json")).Replace(a, "OUT", StringComparison.Ordinal),
+            File.ReadAllText(Path.Combine(b, "summary.json")).Replace(b, "OUT", StringComparison.Ordinal).Replace("reversed.csv", "stations.csv", StringComparison.Ordinal));
+    }
+
+    [Fact]
     public void Batch_RowsReadByDuckDbWithHivePartitions_EqualARunOfTheSameClimates()
     {
         using var f = new BatchFolder(6);
