@@ -43,7 +43,32 @@ public sealed class BatchReport
         Rows = rows;
         DegreeDays = degreeDays;
         Warnings = warnings;
+        Variants = rows.Select(r => r.Variant).Distinct().ToList();
+
+        // Each figure's finite values per variant in climate order, gathered in one pass: the national table, the rankings,
+        // the summary and the charts read them many times over (a national study has 100,000 rows and more).
+        foreach (var r in rows)
+        {
+            foreach (var f in figures)
+            {
+                double v = r.Values[f.Column];
+                if (double.IsFinite(v))
+                {
+                    var key = (f.Column, r.Variant);
+                    if (!values.TryGetValue(key, out var list))
+                    {
+                        values[key] = list = [];
+                    }
+
+                    list.Add((r.Climate, v));
+                }
+            }
+        }
+
+        Shown = figures.Where(f => Variants.Any(v => ValuesOf(f, v).Any(x => x.Value != 0))).ToList();
     }
+
+    private readonly Dictionary<(string Column, string Variant), List<(string Climate, double Value)>> values = [];
 
     /// <summary>A headline figure: its column, heading, unit symbol, and the degree-days it is plotted against.</summary>
     /// <param name="Column">The column in the annual table, e.g. <c>heating_kbtu</c>.</param>
@@ -88,7 +113,7 @@ public sealed class BatchReport
     public IReadOnlyList<(string Climate, string Variant, IReadOnlyList<RenderedChart> Charts)> ClimateCharts { get; }
 
     /// <summary>The variants in order of first mention.</summary>
-    public IReadOnlyList<string> Variants => Rows.Select(r => r.Variant).Distinct().ToList();
+    public IReadOnlyList<string> Variants { get; }
 
     /// <summary>The study name in the tables' metadata.</summary>
     public string StudyName => Annual.Metadata.GetValueOrDefault("binenergy.study", "study");
@@ -250,10 +275,10 @@ public sealed class BatchReport
 
     /// <summary>The values of a figure for a variant, one per climate, with the climate.</summary>
     public IReadOnlyList<(string Climate, double Value)> ValuesOf(HeadlineFigure figure, string variant) =>
-        Rows.Where(r => r.Variant == variant && double.IsFinite(r.Values[figure.Column])).Select(r => (r.Climate, r.Values[figure.Column])).ToList();
+        values.TryGetValue((figure.Column, variant), out var list) ? list : [];
 
     /// <summary>The figures any climate has a non-zero value of (a study without a plant has no cost; a dry study no humidification).</summary>
-    public IReadOnlyList<HeadlineFigure> Shown => Figures.Where(f => Rows.Any(r => r.Values[f.Column] is var v && double.IsFinite(v) && v != 0)).ToList();
+    public IReadOnlyList<HeadlineFigure> Shown { get; }
 
     /// <summary>The national table: per figure and variant, count, lowest, quartiles, median, mean and highest across climates.</summary>
     public ResultTable National() =>
