@@ -78,6 +78,15 @@ public sealed class ResultColumn
     internal ArgumentException WrongValue(object value) =>
         new($"column '{Name}' holds {Kind} values; got {value?.GetType().Name ?? "null"}");
 
+    /// <summary>Appends a text (the column is a text column; <see cref="ColumnSet{T}"/> declares it so).</summary>
+    internal void AddText(string value) => texts.Add(value);
+
+    /// <summary>Appends a number (the column is a number column).</summary>
+    internal void AddNumber(double value) => numbers.Add(value);
+
+    /// <summary>Appends an integer (the column is an integer column).</summary>
+    internal void AddInteger(int value) => integers.Add(value);
+
     internal void Add(object value)
     {
         switch (Kind)
