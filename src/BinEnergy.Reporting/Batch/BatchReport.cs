@@ -321,18 +321,19 @@ public sealed class BatchReport
     /// <summary>The charts: per shown figure its distribution and its scatter against heating and/or cooling degree-days.</summary>
     public IReadOnlyList<(HeadlineFigure Figure, RenderedChart Chart)> Charts()
     {
-        var charts = new List<(HeadlineFigure, RenderedChart)>();
+        var charts = new List<(HeadlineFigure Figure, Func<RenderedChart> Render)>();
         string baseText = DisplayUnits.Text(Units.Temperature, Units.DegreeDayBaseC, "0.#");
         foreach (var f in Shown)
         {
             string slug = StudyReport.Slug(f.Label, "figure");
-            charts.Add((f, DistributionChart.Render(new DistributionData
+            var distribution = new DistributionData
             {
                 Subject = StudyName,
                 Figure = f.Label,
                 Unit = f.Unit,
                 Variants = Variants.Select(v => (v, (IReadOnlyList<double>)ValuesOf(f, v).Select(x => x.Value).ToList())).ToList(),
-            }, "distribution-" + slug)));
+            };
+            charts.Add((f, () => DistributionChart.Render(distribution, "distribution-" + slug)));
             foreach (var (heating, name) in new[] { (true, "heating"), (false, "cooling") })
             {
                 if (heating ? !f.AgainstHeating : !f.AgainstCooling)
@@ -340,7 +341,7 @@ public sealed class BatchReport
                     continue;
                 }
 
-                charts.Add((f, DegreeDayScatterChart.Render(new DegreeDayScatterData
+                var scatter = new DegreeDayScatterData
                 {
                     Subject = StudyName,
                     Figure = f.Label,
@@ -349,11 +350,14 @@ public sealed class BatchReport
                     Variants = Variants.Select(v => (v, (IReadOnlyList<(double, double)>)ValuesOf(f, v)
                         .Where(x => DegreeDays.ContainsKey(x.Climate))
                         .Select(x => (heating ? DegreeDays[x.Climate].Heating : DegreeDays[x.Climate].Cooling, x.Value)).ToList())).ToList(),
-                }, $"{slug}-against-{name}-degree-days")));
+                };
+                string stem = $"{slug}-against-{name}-degree-days";
+                charts.Add((f, () => DegreeDayScatterChart.Render(scatter, stem)));
             }
         }
 
-        return charts;
+        // Each chart is its own plot and image: they are drawn side by side on every core, in their order.
+        return charts.AsParallel().AsOrdered().Select(c => (c.Figure, c.Render())).ToList();
     }
 
     /// <summary>The summary document (<c>summary.json</c>): the study, the parts read, the national table, the ranking, warnings and cautions.</summary>
