@@ -48,9 +48,15 @@ public sealed class RunCommand : Command<RunCommand.Settings>
         var tables = StudyOutputWriter.WriteAsync(run, folder, force, hourly,
             extra: o => StudyReport.WriteInto(o, run, runAt), ct: cancellationToken,
             recovered: note => output.Error.WriteLine("binenergy: note: " + PrintableText.Of(note))).GetAwaiter().GetResult();
-        foreach (var w in run.Warnings)
+        // The summary lists the warnings; they go to standard error too when it does not share the terminal with the
+        // summary (a log, a pipe), so a warning is never missed and never said twice on screen. With --json the summary's
+        // writer puts them there.
+        if (!format.Json && !output.Console.Profile.Capabilities.Interactive)
         {
-            output.Error.WriteLine("warning: " + PrintableText.Of(w));
+            foreach (var w in run.Warnings)
+            {
+                output.Error.WriteLine("warning: " + PrintableText.Of(w));
+            }
         }
 
         var summary = StudySummary.Build(run);
