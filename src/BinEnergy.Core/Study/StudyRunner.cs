@@ -145,7 +145,7 @@ public static class StudyRunner
 
         if (weather.Quality.TotalRepairs > 0)
         {
-            warnings.Add($"The weather file of {c.Climate.Name} had {weather.Quality.TotalRepairs} repaired values ({string.Join(", ", weather.Quality.Repairs.Select(kv => $"{kv.Key} {kv.Value}"))}); see binenergy inspect.");
+            warnings.Add($"The weather file of {c.Climate.Name} had {weather.Quality.TotalRepairs} repaired values: {string.Join("; ", weather.Quality.Repairs.Select(kv => QualityKeys.Describe(kv.Key, kv.Value)))}; see binenergy inspect.");
         }
 
         warnings.AddRange(HeadlineCheck.Warnings(result, economizer, headline));

@@ -184,10 +184,10 @@ public static class StudyReport
         var repairs = run.Cases.GroupBy(c => c.Case.Climate.Name).Select(g =>
         {
             var q = g.First().Weather.Quality;
-            string counts = q.TotalRepairs == 0 ? "no repairs" : string.Join(", ", q.Repairs.Select(kv => $"{kv.Key}: {kv.Value}"));
+            string counts = q.TotalRepairs == 0 ? "no repairs" : string.Join("; ", q.Repairs.Select(kv => Core.Weather.QualityKeys.Describe(kv.Key, kv.Value)));
             if (q.Disagreements.Any())
             {
-                counts += "; checked, not changed: " + string.Join(", ", q.Disagreements.Select(kv => $"{kv.Key}: {kv.Value} hours where the file's own value disagrees with the humidity used"));
+                counts += "; " + string.Join("; ", q.Disagreements.Select(kv => Core.Weather.QualityKeys.Describe(kv.Key, kv.Value)));
             }
 
             return $"{g.Key} ({g.First().Weather.Count} hours): {counts}";

@@ -412,12 +412,12 @@ public sealed class StudyRunTests : IDisposable
         var (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", Path.Combine(folder, "out-repairs"));
         Assert.True(code == 0, err);
         var repairLines = err.Split('\n').Where(l => l.Contains("repaired values", StringComparison.Ordinal)).ToList();
-        Assert.Equal(["warning: harbor: The weather file of harbor had 2 repaired values (gap_filled_drybulb 2); see binenergy inspect."], repairLines);
+        Assert.Equal(["warning: harbor: The weather file of harbor had 2 repaired values: 2 dry-bulb hours filled by linear interpolation (gap_filled_drybulb); see binenergy inspect."], repairLines);
 
         // With --json the summary goes to standard output and its warnings once to standard error, not twice.
         (code, _, err) = Cli("run", StudyPath(ExampleStudy.Text), "--out", Path.Combine(folder, "out-repairs-json"), "--json");
         Assert.True(code == 0, err);
-        Assert.Equal(["binenergy: warning: harbor: The weather file of harbor had 2 repaired values (gap_filled_drybulb 2); see binenergy inspect."],
+        Assert.Equal(["binenergy: warning: harbor: The weather file of harbor had 2 repaired values: 2 dry-bulb hours filled by linear interpolation (gap_filled_drybulb); see binenergy inspect."],
             err.Split('\n').Where(l => l.Contains("repaired values", StringComparison.Ordinal)).Select(l => l.TrimEnd()).ToList());
     }
 
