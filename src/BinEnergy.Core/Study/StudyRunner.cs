@@ -166,7 +166,8 @@ public static class StudyRunner
     private static (OutdoorAirResult OutdoorAir, EconomizerEvaluation? Economizer) Evaluate(StudyCase c, HourlyWeather weather, bool keepHours)
     {
         var settings = c.OutdoorAir;
-        var (flags, table, cells) = OfRecord(c, weather);
+        var parts = OfRecord(c, weather);
+        var (flags, table, cells) = (parts.Flags, parts.Table, parts.Cells);
         var plant = c.Plant is null ? null : new PlantModel(c.Plant);
         var result = OutdoorAirCalculator.Compute(weather, settings, table, cells, flags, plant, DesignConditions.FromRecord(weather), keepHours);
         if (c.Economizer is null)
@@ -176,7 +177,7 @@ public static class StudyRunner
 
         try
         {
-            return (result, SharedEconomizer(c, weather, () => EconomizerEvaluation.Evaluate(weather, flags, table, cells, c.Economizer, plant)));
+            return (result, SharedEconomizer(c, parts, () => EconomizerEvaluation.Evaluate(weather, flags, table, cells, c.Economizer, plant)));
         }
         catch (EconomizerSettingsException e)
         {
@@ -185,14 +186,20 @@ public static class StudyRunner
         }
     }
 
-    /// <summary>What a record gives every case with the same occupied hours and bin scale, built once per record.</summary>
-    private sealed record RecordParts(OccupancySchedule Schedule, DryBulbBinScale Scale, bool[] Flags, BinTable Table, HourCells Cells);
+    /// <summary>
+    /// What a record gives every case with the same occupied hours and bin scale, built once per record: the flags, bin
+    /// table and hour cells, and the economizer evaluations made on them so far (with the air system and plant of each).
+    /// </summary>
+    private sealed record RecordParts(OccupancySchedule Schedule, DryBulbBinScale Scale, bool[] Flags, BinTable Table, HourCells Cells)
+    {
+        public List<(EconomizerSettings System, PlantSettings? Plant, EconomizerEvaluation Evaluation)> Economizers { get; } = [];
+    }
 
     /// <summary>The parts of each record already built, for the variants that share them (the record's columns do not change after it is built).</summary>
     private static readonly ConditionalWeakTable<HourlyWeather, List<RecordParts>> Parts = new();
 
     /// <summary>A case's occupancy flags, bin table and hour cells on a record: built once per record for every variant with the same hours and bins.</summary>
-    private static (bool[] Flags, BinTable Table, HourCells Cells) OfRecord(StudyCase c, HourlyWeather weather)
+    private static RecordParts OfRecord(StudyCase c, HourlyWeather weather)
     {
         var schedule = c.OutdoorAir.Schedule;
         var list = Parts.GetValue(weather, _ => []);
@@ -207,35 +214,29 @@ public static class StudyRunner
                 list.Add(parts);
             }
 
-            return (parts.Flags, parts.Table, parts.Cells);
+            return parts;
         }
     }
 
-    /// <summary>Each record's economizer evaluations so far, with the case each was made for.</summary>
-    private static readonly ConditionalWeakTable<HourlyWeather, List<(StudyCase Case, EconomizerEvaluation Evaluation)>> Economizers = new();
-
     /// <summary>
-    /// The economizer evaluation of a case on a record: made once per record for all the variants with the same air
-    /// system, plant, occupied hours and bins (variants that change only the ventilation or the recovery, say), since
-    /// it depends on nothing else.
+    /// The economizer evaluation of a case on its record's parts: made once for all the variants with the same air system
+    /// and plant on those parts (variants that change only the ventilation or the recovery, say), since it depends on
+    /// nothing else.
     /// </summary>
-    private static EconomizerEvaluation SharedEconomizer(StudyCase c, HourlyWeather weather, Func<EconomizerEvaluation> evaluate)
+    private static EconomizerEvaluation SharedEconomizer(StudyCase c, RecordParts parts, Func<EconomizerEvaluation> evaluate)
     {
-        var list = Economizers.GetValue(weather, _ => []);
-        lock (list)
+        lock (parts.Economizers)
         {
-            foreach (var (other, evaluation) in list)
+            foreach (var (system, plant, evaluation) in parts.Economizers)
             {
-                if (other.BinScale == c.BinScale && other.OutdoorAir.Schedule.SameHoursAs(c.OutdoorAir.Schedule)
-                    && other.Economizer!.SameSystemAs(c.Economizer!)
-                    && (other.Plant is null ? c.Plant is null : c.Plant is not null && other.Plant.SamePlantAs(c.Plant)))
+                if (system.SameSystemAs(c.Economizer!) && (plant is null ? c.Plant is null : c.Plant is not null && plant.SamePlantAs(c.Plant)))
                 {
                     return evaluation;
                 }
             }
 
             var made = evaluate();
-            list.Add((c, made));
+            parts.Economizers.Add((c.Economizer!, c.Plant, made));
             return made;
         }
     }
