@@ -41,11 +41,7 @@ public sealed class PlantModel(PlantSettings settings)
         var heating = HeatingFuels(loads.Heating.Joules, outdoorC, hours, clamps);
         fuels.Add(EndUse.Heating, heating.Main, heating.MainJ);
         fuels.Add(EndUse.BackupHeating, heating.Backup, heating.BackupJ);
-        double coilJ = loads.Cooling.Joules;
-        if (coilJ > 0)
-        {
-            fuels.Add(EndUse.Cooling, Fuel.Electricity, coilJ / CoolingCop(outdoorC, hours, clamps));
-        }
+        fuels.Add(EndUse.Cooling, Fuel.Electricity, CoolingElectricityJ(loads.Cooling.Joules, outdoorC, hours, clamps));
 
         fuels.Add(EndUse.Fans, Fuel.Electricity, loads.FanEnergy.Joules);
         fuels.Add(EndUse.Humidification, HumidificationFuels(loads.Humidification.Joules, outdoorC, hours, clamps));
@@ -175,15 +171,12 @@ public sealed class PlantModel(PlantSettings settings)
         + SiteEnergy.Buy(Fuel.Oil, joules.OilJ, Tariff(Fuel.Oil));
 
     /// <summary>Electricity bought to remove a cooling coil load (sensible plus latent), J.</summary>
-    public SiteEnergy Cooling(double coilJ, double outdoorC, double hours, CurveClampCounter clamps)
-    {
-        if (coilJ <= 0)
-        {
-            return SiteEnergy.Zero;
-        }
+    public SiteEnergy Cooling(double coilJ, double outdoorC, double hours, CurveClampCounter clamps) =>
+        coilJ > 0 ? Electricity(CoolingElectricityJ(coilJ, outdoorC, hours, clamps)) : SiteEnergy.Zero;
 
-        return Electricity(coilJ / CoolingCop(outdoorC, hours, clamps));
-    }
+    /// <summary>The electricity of <see cref="Cooling"/>, J, unpriced: coil load / COP at the outdoor dry-bulb (nothing without a load).</summary>
+    private double CoolingElectricityJ(double coilJ, double outdoorC, double hours, CurveClampCounter clamps) =>
+        coilJ > 0 ? coilJ / CoolingCop(outdoorC, hours, clamps) : 0.0;
 
     /// <summary>
     /// Energy bought for a humidification load, J: the load is h_fg (W_min - W_o) per kg of dry air at

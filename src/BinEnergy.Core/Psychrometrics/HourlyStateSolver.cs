@@ -75,30 +75,28 @@ internal static class HourlyStateSolver
         }
 
         double high = dryBulbC;
-        bool water = low >= 0.0;
+        var residual = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: low >= 0.0);
         if (low < 0.0 && dryBulbC > 0.0)
         {
             // Eqs. 33 (t* at or above 0 C, over water) and 35 (below, over ice) do not meet at 0 C. Where both residuals
             // have the same sign at 0 C, the root is unique and on the side that sign points to (each residual rises
             // with t*), and Newton finds it on that side; where they differ (a narrow band with a root on each side, or
             // the step at 0 C itself), the reference solver's bisection picks it, as psychrolib does.
-            double overWater = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: true).Value(0.0);
-            double overIce = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: false).Value(0.0);
-            if (overWater < 0 && overIce < 0)
+            var overWater = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water: true);
+            double atZeroOverIce = residual.Value(0.0), atZeroOverWater = overWater.Value(0.0);
+            if (atZeroOverWater < 0 && atZeroOverIce < 0)
             {
-                (low, water) = (0.0, true);
+                (low, residual) = (0.0, overWater);
             }
-            else if (overWater > 0 && overIce > 0)
+            else if (atZeroOverWater > 0 && atZeroOverIce > 0)
             {
-                (high, water) = (0.0, false);
+                high = 0.0;
             }
             else
             {
                 return MoistAir.WetBulb(dryBulbC, humidityRatio, pressurePa);
             }
         }
-
-        var residual = new WetBulbResidual(dryBulbC, humidityRatio, pressurePa, water);
 
         // First guess: a third of the way down from the top of the bracket to its bottom (common practice, a rough rule).
         return NewtonRaphson.TryFindRoot(residual.Value, residual.Slope, high - (high - low) / 3.0, low, high, Accuracy * 1e-3, 50, out double root)
