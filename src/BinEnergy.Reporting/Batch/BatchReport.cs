@@ -129,8 +129,8 @@ public sealed class BatchReport
 
         // Only the columns the report reads: the keys and the headline figures in the study's units (a national study's annual
         // table has hundreds of thousands of rows of some sixty columns).
-        var first = await PartitionedTable.FirstMetadataAsync(folder, "annual", ct) ?? new Dictionary<string, string>();
-        var keep = new HashSet<string>(["climate", "variant", "year", "method", .. HeadlineFigures(UnitsOf(first, PartitionedTable.PartFiles(folder, "annual").Select(f => Path.GetRelativePath(folder, f)).FirstOrDefault() ?? "tables/annual")).Select(f => f.Column)], StringComparer.Ordinal);
+        var first = await PartitionedTable.FirstMetadataAsync(folder, "annual", ct) ?? ("tables/annual", new Dictionary<string, string>());
+        var keep = new HashSet<string>(["climate", "variant", "year", "method", .. HeadlineFigures(UnitsOf(first.Metadata, first.Part)).Select(f => f.Column)], StringComparer.Ordinal);
         var annual = await PartitionedTable.ReadAsync(folder, "annual", keep, ct);
         if (PartitionedTable.PartFiles(folder, "climates").Count == 0)
         {

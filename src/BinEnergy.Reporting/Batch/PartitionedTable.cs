@@ -81,8 +81,11 @@ public sealed record PartitionedTable(ResultTable Table, IReadOnlyList<string> P
 
     private static string Short(string hash) => hash.Length == 0 ? "none" : hash[..Math.Min(12, hash.Length)];
 
-    /// <summary>The metadata of the first part of table <paramref name="name"/> (the units and study a reader needs before choosing columns); null when there is no part.</summary>
-    public static async Task<IReadOnlyDictionary<string, string>?> FirstMetadataAsync(string folder, string name, CancellationToken ct = default)
+    /// <summary>
+    /// The first part of table <paramref name="name"/> (its path below <paramref name="folder"/>) and its metadata: the units
+    /// and study a reader needs before choosing columns; null when there is no part.
+    /// </summary>
+    public static async Task<(string Part, IReadOnlyDictionary<string, string> Metadata)?> FirstMetadataAsync(string folder, string name, CancellationToken ct = default)
     {
         var files = PartFiles(folder, name);
         if (files.Count == 0)
@@ -90,17 +93,23 @@ public sealed record PartitionedTable(ResultTable Table, IReadOnlyList<string> P
             return null;
         }
 
+        string rel = Path.GetRelativePath(folder, files[0]);
         try
         {
             await using var stream = File.OpenRead(files[0]);
             await using var reader = await ParquetReader.CreateAsync(stream, cancellationToken: ct);
-            return reader.CustomMetadata ?? new Dictionary<string, string>();
+            return (rel, reader.CustomMetadata ?? new Dictionary<string, string>());
         }
-        catch (Exception e) when (e is IOException or InvalidDataException or Parquet.ParquetException or NotSupportedException)
+        catch (Exception e) when (IsUnreadable(e))
         {
-            throw new BatchReportException($"{Path.GetRelativePath(folder, files[0])}: not a readable Parquet file ({e.Message}); delete it and rerun the batch for its climates (batch ... --resume)");
+            throw Unreadable(rel, e);
         }
     }
+
+    private static bool IsUnreadable(Exception e) => e is IOException or InvalidDataException or Parquet.ParquetException or NotSupportedException;
+
+    private static BatchReportException Unreadable(string rel, Exception e) =>
+        new($"{rel}: not a readable Parquet file ({e.Message}); delete it and rerun the batch for its climates (batch ... --resume)");
 
     private static async Task<(ResultTable Table, IReadOnlyDictionary<string, string> Metadata)> ReadPartAsync(string folder, string file, string rel, string name,
         IReadOnlySet<string>? keep, CancellationToken ct)
@@ -155,9 +164,9 @@ public sealed record PartitionedTable(ResultTable Table, IReadOnlyList<string> P
 
             return (table, reader.CustomMetadata ?? new Dictionary<string, string>());
         }
-        catch (Exception e) when (e is IOException or InvalidDataException or Parquet.ParquetException or NotSupportedException)
+        catch (Exception e) when (IsUnreadable(e))
         {
-            throw new BatchReportException($"{rel}: not a readable Parquet file ({e.Message}); delete it and rerun the batch for its climates (batch ... --resume)");
+            throw Unreadable(rel, e);
         }
     }
 
