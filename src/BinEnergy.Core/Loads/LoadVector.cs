@@ -71,12 +71,7 @@ public struct LoadVector : IEquatable<LoadVector>
     public static LoadVector operator +(in LoadVector a, in LoadVector b)
     {
         var sum = a;
-        for (int i = 0; i < FigureCount; i++)
-        {
-            sum.joules[i] += b.joules[i];
-        }
-
-        sum.HoursVentilated += b.HoursVentilated;
+        sum.Add(in b);
         return sum;
     }
 
